@@ -1,0 +1,59 @@
+import { z } from 'zod';
+
+export const roles = ['owner', 'contractor', 'estimator', 'engineer'] as const;
+export const roleSchema = z.enum(roles);
+export type Role = z.infer<typeof roleSchema>;
+
+export const orgKinds = ['contracting', 'engineering'] as const;
+export const orgKindSchema = z.enum(orgKinds);
+export type OrgKind = z.infer<typeof orgKindSchema>;
+
+export const emailSchema = z
+  .string()
+  .trim()
+  .toLowerCase()
+  .pipe(z.email({ message: 'Enter a valid e-mail address' }));
+export const passwordSchema = z
+  .string()
+  .min(10, { message: 'Use at least 10 characters' })
+  .max(200, { message: 'Use at most 200 characters' });
+export const personNameSchema = z.string().trim().min(1, { message: 'Enter your name' }).max(120);
+
+/**
+ * Sign-up creates a user and a new firm. A contracting firm makes the user its `owner`; an engineering
+ * firm makes the user an `engineer` (engineers receive design requests only).
+ */
+export const signUpSchema = z.object({
+  name: personNameSchema,
+  email: emailSchema,
+  password: passwordSchema,
+  firmName: z.string().trim().min(1, { message: 'Enter your firm’s name' }).max(160),
+  firmKind: orgKindSchema.default('contracting'),
+});
+export type SignUpInput = z.input<typeof signUpSchema>;
+
+export const signInSchema = z.object({
+  email: emailSchema,
+  password: z.string().min(1, { message: 'Enter your password' }).max(200),
+});
+export type SignInInput = z.infer<typeof signInSchema>;
+
+export const membershipSchema = z.object({
+  orgId: z.string(),
+  orgName: z.string(),
+  orgKind: orgKindSchema,
+  role: roleSchema,
+});
+export type Membership = z.infer<typeof membershipSchema>;
+
+/**
+ * `GET /api/me`. The active firm is the one named by the `X-Org-Id` request header when the user belongs to
+ * it, otherwise the user's earliest membership.
+ */
+export const meSchema = z.object({
+  user: z.object({ id: z.string(), email: z.string(), name: z.string() }),
+  memberships: z.array(membershipSchema),
+  activeOrgId: z.string(),
+  role: roleSchema,
+});
+export type Me = z.infer<typeof meSchema>;

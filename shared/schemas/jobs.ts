@@ -1,0 +1,46 @@
+import { z } from 'zod';
+
+export const loadStandardEditions = ['ASCE 7-16', 'ASCE 7-22'] as const;
+export const loadStandardSchema = z.enum(loadStandardEditions);
+export type LoadStandard = z.infer<typeof loadStandardSchema>;
+
+export const roofTypes = ['gable', 'hip', 'shed', 'flat', 'gambrel', 'other'] as const;
+export const foundationTypes = ['slab', 'crawlspace', 'basement', 'pier', 'unknown'] as const;
+
+const currentYear = new Date().getFullYear();
+
+/** Fields a person enters for a job. Lengths in ft, slope as rise per 12 in of run, ground snow in psf. */
+export const jobInputSchema = z.object({
+  name: z.string().trim().min(1, { message: 'Give the job a name' }).max(160),
+  address: z.string().trim().max(300).default(''),
+  yearBuilt: z
+    .number()
+    .int({ message: 'Enter a whole year' })
+    .min(1600, { message: 'Enter a year after 1600' })
+    .max(currentYear + 1, { message: 'Year built cannot be in the future' })
+    .nullable()
+    .default(null),
+  stories: z.number().int().min(1, { message: 'At least 1 story' }).max(4, { message: 'At most 4 stories' }).default(1),
+  roofType: z.enum(roofTypes).default('gable'),
+  roofPitchIn12: z.number().min(0, { message: 'Slope cannot be negative' }).max(24, { message: 'At most 24 in 12' }).default(6),
+  buildingWidthFt: z.number().positive({ message: 'Enter a width above 0' }).max(80, { message: 'At most 80 ft' }).nullable().default(null),
+  loadStandard: loadStandardSchema.default('ASCE 7-22'),
+  groundSnowPsf: z.number().min(0, { message: 'Ground snow cannot be negative' }).max(300, { message: 'At most 300 psf' }).default(0),
+  groundSnowSource: z.string().trim().max(300).default(''),
+  foundation: z.enum(foundationTypes).default('unknown'),
+  notes: z.string().max(5000).default(''),
+});
+export type JobInput = z.input<typeof jobInputSchema>;
+
+export const jobUpdateSchema = jobInputSchema.partial();
+
+export const jobSchema = jobInputSchema.extend({
+  id: z.string(),
+  orgId: z.string(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+  archivedAt: z.string().nullable(),
+});
+export type Job = z.infer<typeof jobSchema>;
+
+export const jobListSchema = z.object({ jobs: z.array(jobSchema) });
