@@ -1,0 +1,147 @@
+import { z } from 'zod';
+import { loadStandardSchema, roofTypes } from '@/shared/schemas/jobs';
+
+/**
+ * Load sources on a member (DESIGN.md §5 "Loads"). Lengths along the member and tributary widths in ft,
+ * area loads in psf, line loads in plf, point loads in lb. Roof area loads are per horizontal projection
+ * unless `deadAlongSlope` says the dead load was given along the slope.
+ */
+
+export const inputFlags = ['measured', 'assumed', 'default'] as const;
+export const inputFlagSchema = z.enum(inputFlags);
+
+export const loadTypeSchema = z.enum(['D', 'L', 'Lr', 'S']);
+
+const nonNegative = (what: string) =>
+  z
+    .number({ message: `Enter ${what}` })
+    .finite()
+    .min(0, { message: `${what} cannot be negative` });
+
+const tributaryFt = z
+  .number({ message: 'Enter the tributary width' })
+  .finite()
+  .positive({ message: 'Tributary width must be above 0' })
+  .max(60, { message: 'Tributary width at most 60 ft' });
+
+/** Shared by every source: a label the user gives it, how the numbers were obtained, and an optional extent. */
+const sourceBase = {
+  label: z.string().trim().max(80).optional(),
+  flag: inputFlagSchema.default('assumed'),
+};
+
+/** A uniform source may cover only part of the span: from startFt to endFt, measured from the left support. */
+const extent = {
+  startFt: nonNegative('a start position').optional(),
+  endFt: nonNegative('an end position').optional(),
+};
+
+export const roofSourceSchema = z.object({
+  kind: z.literal('roof'),
+  ...sourceBase,
+  ...extent,
+  tributaryFt,
+  deadPsf: nonNegative('the roof dead load'),
+  /** True when deadPsf is per sloped roof area; the engine divides by cos θ to get horizontal projection. */
+  deadAlongSlope: z.boolean().default(false),
+  roofLivePsf: nonNegative('the roof live load'),
+  /** Sloped-roof snow (horizontal projection) for this source; omitted = the member input's roofSnowPsf. */
+  snowPsf: nonNegative('the snow load').optional(),
+});
+
+export const ceilingSourceSchema = z.object({
+  kind: z.literal('ceiling'),
+  ...sourceBase,
+  ...extent,
+  tributaryFt,
+  deadPsf: nonNegative('the ceiling dead load'),
+  livePsf: nonNegative('the attic live load'),
+});
+
+export const floorSourceSchema = z.object({
+  kind: z.literal('floor'),
+  ...sourceBase,
+  ...extent,
+  tributaryFt,
+  deadPsf: nonNegative('the floor dead load'),
+  livePsf: nonNegative('the floor live load'),
+  /** Joists run continuous over the member (not lapped or spliced over it): 1.25 × the half-span load. */
+  continuousOver: z.boolean().default(false),
+});
+
+/** Wall above: either a line load (wPlf) or a height (ft) × wall dead load (psf of wall face). */
+export const wallAboveSourceSchema = z
+  .object({
+    kind: z.literal('wall-above'),
+    ...sourceBase,
+    ...extent,
+    wPlf: nonNegative('the wall load').optional(),
+    heightFt: z.number().finite().positive({ message: 'Wall height must be above 0' }).max(40).optional(),
+    deadPsf: nonNegative('the wall dead load').optional(),
+  })
+  .refine((s) => (s.wPlf !== undefined) !== (s.heightFt !== undefined && s.deadPsf !== undefined), {
+    message: 'Give the wall above either a load in plf or a height and a psf, not both',
+    path: ['wPlf'],
+  });
+
+export const pointLoadKinds = [
+  'girder-truss',
+  'hip-valley-end',
+  'purlin-strut',
+  'post-above',
+  'heavy-fixture',
+] as const;
+export const pointLoadKindSchema = z.enum(pointLoadKinds);
+
+export const pointSourceSchema = z.object({
+  kind: z.literal('point'),
+  ...sourceBase,
+  pointKind: pointLoadKindSchema,
+  /** Position from the left support, ft. */
+  atFt: nonNegative('the position'),
+  deadLb: nonNegative('the dead load').default(0),
+  liveLb: nonNegative('the live load').default(0),
+  roofLiveLb: nonNegative('the roof live load').default(0),
+  snowLb: nonNegative('the snow load').default(0),
+});
+
+export const loadSourceSchema = z.discriminatedUnion('kind', [
+  roofSourceSchema,
+  ceilingSourceSchema,
+  floorSourceSchema,
+  wallAboveSourceSchema,
+  pointSourceSchema,
+]);
+export type LoadSource = z.infer<typeof loadSourceSchema>;
+export type LoadSourceInput = z.input<typeof loadSourceSchema>;
+
+export const memberLoadsInputSchema = z.object({
+  /** Design span, ft: positions and extents are checked against it. */
+  spanFt: z
+    .number()
+    .finite()
+    .positive({ message: 'Span must be above 0' })
+    .max(60, { message: 'Span at most 60 ft' }),
+  /** Roof slope, rise in 12 (the job's roofPitchIn12). */
+  roofPitchIn12: z.number().finite().min(0).max(24).default(0),
+  /** Sloped-roof snow p_s from the snow module, psf of horizontal projection (0 where there is no snow). */
+  roofSnowPsf: nonNegative('the roof snow load').default(0),
+  /** Member self-weight, plf (the caller knows the member). */
+  selfWeightPlf: nonNegative('the self-weight').default(0),
+  sources: z.array(loadSourceSchema).max(40, { message: 'At most 40 load sources' }),
+});
+export type MemberLoadsInput = z.infer<typeof memberLoadsInputSchema>;
+
+/** Snow inputs for one roof (ASCE 7 chapter 7). Factors default to the values stated in the snow module. */
+export const snowInputSchema = z.object({
+  edition: loadStandardSchema,
+  groundSnowPsf: nonNegative('the ground snow load').max(300, { message: 'Ground snow at most 300 psf' }),
+  roofPitchIn12: z.number().finite().min(0).max(24),
+  roofType: z.enum(roofTypes).default('gable'),
+  exposureCe: z.number().finite().min(0.7).max(1.3).default(1.0),
+  thermalCt: z.number().finite().min(0.85).max(1.3).default(1.0),
+  importanceIs: z.number().finite().min(0.8).max(1.2).default(1.0),
+  slipperyUnobstructed: z.boolean().default(false),
+  roofStepsDown: z.boolean().default(false),
+});
+export type SnowInput = z.infer<typeof snowInputSchema>;
