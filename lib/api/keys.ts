@@ -1,0 +1,17 @@
+/**
+ * Every SWR cache key the client uses. Firm-scoped keys carry the firm id so switching firms never shows
+ * another firm's cached data.
+ */
+export const keys = {
+  me: (orgId: string | null) => ['me', orgId] as const,
+  jobs: (orgId: string) => ['jobs', orgId] as const,
+  job: (orgId: string, jobId: string) => ['job', orgId, jobId] as const,
+  members: (orgId: string) => ['members', orgId] as const,
+  invitation: (token: string) => ['invitation', token] as const,
+  devMail: () => ['dev-mail'] as const,
+};
+
+/** True for keys that belong to a firm, so a firm switch or sign-out can drop them. */
+export function isFirmScopedKey(key: unknown): boolean {
+  return Array.isArray(key) && ['me', 'jobs', 'job', 'members'].includes(key[0]);
+}

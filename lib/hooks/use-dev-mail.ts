@@ -1,0 +1,8 @@
+import useSWR from 'swr';
+import { fetchDevMail } from '@/lib/api/dev-mail';
+import { keys } from '@/lib/api/keys';
+
+/** Captured mail, refreshed every few seconds so a just-sent invitation shows up. */
+export function useDevMail() {
+  return useSWR(keys.devMail(), fetchDevMail, { refreshInterval: 4000 });
+}

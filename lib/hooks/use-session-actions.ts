@@ -1,0 +1,64 @@
+import { useRouter } from 'expo-router';
+import { useCallback } from 'react';
+import { useSWRConfig } from 'swr';
+import { setActiveOrgId } from '@/lib/api/active-org';
+import { fetchMe, signIn, signOut, signUp } from '@/lib/api/auth';
+import { isFirmScopedKey } from '@/lib/api/keys';
+import { acceptInvitation } from '@/lib/api/orgs';
+import type { SignInInput, SignUpInput } from '@/shared/schemas/auth';
+import type { AcceptInvitationInput, InvitationPreview } from '@/shared/schemas/orgs';
+
+/**
+ * Sign in, sign up, invitation acceptance, sign out and firm switching. Each leaves the SWR cache clean
+ * for the new session; the session gates then route the person to the right screen.
+ */
+export function useSessionActions() {
+  const { mutate } = useSWRConfig();
+  const router = useRouter();
+
+  const refreshFirmData = useCallback(() => mutate(isFirmScopedKey, undefined), [mutate]);
+
+  return {
+    signIn: useCallback(
+      async (input: SignInInput) => {
+        await signIn(input);
+        setActiveOrgId(null);
+        await refreshFirmData();
+      },
+      [refreshFirmData],
+    ),
+    signUp: useCallback(
+      async (input: SignUpInput) => {
+        await signUp(input);
+        setActiveOrgId(null);
+        await refreshFirmData();
+      },
+      [refreshFirmData],
+    ),
+    acceptInvitation: useCallback(
+      async (token: string, preview: InvitationPreview, input: AcceptInvitationInput) => {
+        await acceptInvitation(token, input);
+        const me = await fetchMe();
+        const joined = me.memberships.findLast((m) => m.orgName === preview.orgName && m.role === preview.role);
+        setActiveOrgId(joined?.orgId ?? null);
+        await refreshFirmData();
+        router.replace('/');
+      },
+      [refreshFirmData, router],
+    ),
+    signOut: useCallback(async () => {
+      await signOut();
+      setActiveOrgId(null);
+      await mutate(isFirmScopedKey, undefined, { revalidate: false });
+      router.replace('/sign-in');
+    }, [mutate, router]),
+    switchFirm: useCallback(
+      async (orgId: string) => {
+        setActiveOrgId(orgId);
+        await refreshFirmData();
+        router.replace('/');
+      },
+      [refreshFirmData, router],
+    ),
+  };
+}
