@@ -5,8 +5,8 @@ import { apiRequest, noContentSchema } from './client';
 export const fetchMe = () => apiRequest('GET', '/api/me', meSchema);
 
 /** Creates the person and their firm and starts a session (cookie). */
-export const signUp = (input: SignUpInput) => apiRequest('POST', '/api/auth/sign-up', noContentSchema, input);
+export const signUp = (input: SignUpInput) => apiRequest('POST', '/api/auth/sign-up', meSchema, input);
 
-export const signIn = (input: SignInInput) => apiRequest('POST', '/api/auth/sign-in', noContentSchema, input);
+export const signIn = (input: SignInInput) => apiRequest('POST', '/api/auth/sign-in', meSchema, input);
 
 export const signOut = () => apiRequest('POST', '/api/auth/sign-out', noContentSchema);

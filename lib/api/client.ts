@@ -79,5 +79,5 @@ function parseJson(text: string): unknown {
   }
 }
 
-/** Answers with no body of interest (204 or `{ ok: true }`). */
-export const noContentSchema = z.unknown();
+/** A 204 answer: no body. */
+export const noContentSchema = z.undefined();

@@ -12,6 +12,4 @@ export const updateJob = (jobId: string, input: Partial<JobInput>) =>
 
 /** Archives the job (the API keeps it; it leaves the list). */
 export const archiveJob = (jobId: string) =>
-  apiRequest('DELETE', `/api/jobs/${encodeURIComponent(jobId)}`, noContentSchema).then(() => undefined);
-
-export type { Job } from '@/shared/schemas/jobs';
+  apiRequest('DELETE', `/api/jobs/${encodeURIComponent(jobId)}`, noContentSchema);

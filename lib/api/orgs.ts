@@ -1,5 +1,7 @@
+import { meSchema } from '@/shared/schemas/auth';
 import {
   invitationPreviewSchema,
+  invitationRowSchema,
   membersResponseSchema,
   type AcceptInvitationInput,
   type CreateInvitationInput,
@@ -10,7 +12,7 @@ import { apiRequest, noContentSchema } from './client';
 export const fetchMembers = () => apiRequest('GET', '/api/orgs/current/members', membersResponseSchema);
 
 export const createInvitation = (input: CreateInvitationInput) =>
-  apiRequest('POST', '/api/orgs/current/invitations', noContentSchema, input);
+  apiRequest('POST', '/api/orgs/current/invitations', invitationRowSchema, input);
 
 export const revokeInvitation = (invitationId: string) =>
   apiRequest('DELETE', `/api/orgs/current/invitations/${encodeURIComponent(invitationId)}`, noContentSchema);
@@ -19,5 +21,6 @@ export const revokeInvitation = (invitationId: string) =>
 export const fetchInvitation = (token: string) =>
   apiRequest('GET', `/api/invitations/${encodeURIComponent(token)}`, invitationPreviewSchema);
 
+/** Joins the invited firm; answers with the person as seen from that firm. */
 export const acceptInvitation = (token: string, input: AcceptInvitationInput) =>
-  apiRequest('POST', `/api/invitations/${encodeURIComponent(token)}/accept`, noContentSchema, input);
+  apiRequest('POST', `/api/invitations/${encodeURIComponent(token)}/accept`, meSchema, input);

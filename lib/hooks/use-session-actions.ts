@@ -2,11 +2,11 @@ import { useRouter } from 'expo-router';
 import { useCallback } from 'react';
 import { useSWRConfig } from 'swr';
 import { setActiveOrgId } from '@/lib/api/active-org';
-import { fetchMe, signIn, signOut, signUp } from '@/lib/api/auth';
+import { signIn, signOut, signUp } from '@/lib/api/auth';
 import { isFirmScopedKey } from '@/lib/api/keys';
 import { acceptInvitation } from '@/lib/api/orgs';
 import type { SignInInput, SignUpInput } from '@/shared/schemas/auth';
-import type { AcceptInvitationInput, InvitationPreview } from '@/shared/schemas/orgs';
+import type { AcceptInvitationInput } from '@/shared/schemas/orgs';
 
 /**
  * Sign in, sign up, invitation acceptance, sign out and firm switching. Each leaves the SWR cache clean
@@ -36,11 +36,9 @@ export function useSessionActions() {
       [refreshFirmData],
     ),
     acceptInvitation: useCallback(
-      async (token: string, preview: InvitationPreview, input: AcceptInvitationInput) => {
-        await acceptInvitation(token, input);
-        const me = await fetchMe();
-        const joined = me.memberships.findLast((m) => m.orgName === preview.orgName && m.role === preview.role);
-        setActiveOrgId(joined?.orgId ?? null);
+      async (token: string, input: AcceptInvitationInput) => {
+        const me = await acceptInvitation(token, input);
+        setActiveOrgId(me.activeOrgId);
         await refreshFirmData();
         router.replace('/');
       },

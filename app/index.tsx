@@ -1,0 +1,5 @@
+import { HomeRedirect } from '@/lib/ui/home-redirect';
+
+export default function Index() {
+  return <HomeRedirect />;
+}

@@ -1,0 +1,17 @@
+import { Inter_400Regular } from '@expo-google-fonts/inter/400Regular';
+import { Inter_500Medium } from '@expo-google-fonts/inter/500Medium';
+import { Inter_600SemiBold } from '@expo-google-fonts/inter/600SemiBold';
+import { Inter_700Bold } from '@expo-google-fonts/inter/700Bold';
+import { useFonts } from 'expo-font';
+import { fonts } from '@/lib/theme';
+
+/** Loads the four Inter weights the type scale uses. True once loaded, or once loading failed (system font). */
+export function useAppFonts(): boolean {
+  const [loaded, error] = useFonts({
+    [fonts.regular]: Inter_400Regular,
+    [fonts.medium]: Inter_500Medium,
+    [fonts.semibold]: Inter_600SemiBold,
+    [fonts.bold]: Inter_700Bold,
+  });
+  return loaded || error !== null;
+}

@@ -1,0 +1,90 @@
+import { usePathname } from 'expo-router';
+import type { ReactNode } from 'react';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
+import type { Me } from '@/shared/schemas/auth';
+import { colors, layout, spacing } from '@/lib/theme';
+import { NavLink } from './nav-link';
+import { isNavItemActive, navItemsForRole } from './nav-items';
+import { roleLabel } from './role-label';
+import { Text } from './text';
+import { Wordmark } from './wordmark';
+
+/**
+ * The signed-in frame: bottom tabs on a phone (< 768 px wide), a side navigation on a wide screen.
+ * The tabs a person sees follow their role in the active firm.
+ */
+export function AppShell({ me, children }: { me: Me; children: ReactNode }) {
+  const { width } = useWindowDimensions();
+  const pathname = usePathname();
+  const items = navItemsForRole(me.role);
+  const firm = me.memberships.find((m) => m.orgId === me.activeOrgId);
+  const wide = width >= layout.wideBreakpoint;
+
+  const links = items.map((item) => (
+    <NavLink key={item.href} item={item} active={isNavItemActive(item, pathname)} placement={wide ? 'side' : 'tab'} />
+  ));
+  const firmLine = firm ? `${firm.orgName} · ${roleLabel(me.role)}` : roleLabel(me.role);
+
+  if (wide) {
+    return (
+      <View style={styles.wideRoot}>
+        <View style={styles.sideNav} role="navigation" aria-label="Main">
+          <Wordmark />
+          <Text variant="caption" tone="muted" numberOfLines={2}>
+            {firmLine}
+          </Text>
+          <View style={styles.sideLinks}>{links}</View>
+        </View>
+        <View style={styles.content}>{children}</View>
+      </View>
+    );
+  }
+
+  return (
+    <View style={styles.phoneRoot}>
+      <View style={styles.topBar}>
+        <Wordmark />
+        <Text variant="caption" tone="muted" numberOfLines={1} style={styles.topFirm}>
+          {firmLine}
+        </Text>
+      </View>
+      <View style={styles.content}>{children}</View>
+      <View style={styles.tabBar} role="navigation" aria-label="Main">
+        {links}
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wideRoot: { flex: 1, flexDirection: 'row', backgroundColor: colors.paper },
+  sideNav: {
+    width: layout.sideNavWidth,
+    padding: spacing.lg,
+    gap: spacing.md,
+    borderRightWidth: 1,
+    borderRightColor: colors.line,
+    backgroundColor: colors.surface,
+  },
+  sideLinks: { gap: spacing.xs, marginTop: spacing.lg },
+  phoneRoot: { flex: 1, backgroundColor: colors.paper },
+  topBar: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    justifyContent: 'space-between',
+    gap: spacing.md,
+    paddingHorizontal: spacing.lg,
+    paddingVertical: spacing.sm,
+    borderBottomWidth: 1,
+    borderBottomColor: colors.line,
+    backgroundColor: colors.surface,
+  },
+  topFirm: { flexShrink: 1, textAlign: 'right' },
+  content: { flex: 1 },
+  tabBar: {
+    flexDirection: 'row',
+    borderTopWidth: 1,
+    borderTopColor: colors.line,
+    backgroundColor: colors.surface,
+  },
+});

@@ -1,0 +1,89 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { useSessionActions } from '@/lib/hooks/use-session-actions';
+import { useSubmit } from '@/lib/hooks/use-submit';
+import { spacing } from '@/lib/theme';
+import { fieldErrors } from '@/shared/errors';
+import { signUpSchema, type OrgKind } from '@/shared/schemas/auth';
+import { Button } from './button';
+import { ChoiceGroup, type Choice } from './choice-group';
+import { mergeFieldErrors } from './form-errors';
+import { Notice } from './notice';
+import { Text } from './text';
+import { TextField } from './text-field';
+import { TextLink } from './text-link';
+
+const firmKinds: Choice<OrgKind>[] = [
+  {
+    value: 'contracting',
+    label: 'Contracting firm',
+    description: 'Remodelers, framers and estimators. You become the firm’s owner and can invite your crew.',
+  },
+  {
+    value: 'engineering',
+    label: 'Engineering firm',
+    description: 'Licensed engineers. You receive the design requests contractors send you.',
+  },
+];
+
+/** Creates a person and their firm; the session gate moves them on once signed in. */
+export function SignUpForm() {
+  const { signUp } = useSessionActions();
+  const { run, busy, error } = useSubmit(signUp);
+  const [name, setName] = useState('');
+  const [email, setEmail] = useState('');
+  const [password, setPassword] = useState('');
+  const [firmName, setFirmName] = useState('');
+  const [firmKind, setFirmKind] = useState<OrgKind>('contracting');
+  const [clientErrors, setClientErrors] = useState<Record<string, string[]>>({});
+  const errors = mergeFieldErrors(clientErrors, error);
+
+  const submit = () => {
+    const parsed = signUpSchema.safeParse({ name, email, password, firmName, firmKind });
+    setClientErrors(parsed.success ? {} : fieldErrors(parsed.error));
+    if (parsed.success) void run(parsed.data);
+  };
+
+  return (
+    <View style={styles.form}>
+      {error ? <Notice tone="error">{error.message}</Notice> : null}
+      <TextField label="Your name" testID="sign-up-name" value={name} onChangeText={setName} errors={errors.name} autoComplete="name" />
+      <TextField
+        label="E-mail"
+        testID="sign-up-email"
+        value={email}
+        onChangeText={setEmail}
+        errors={errors.email}
+        autoComplete="email"
+        inputMode="email"
+        autoCapitalize="none"
+      />
+      <TextField
+        label="Password"
+        hint="At least 10 characters."
+        testID="sign-up-password"
+        value={password}
+        onChangeText={setPassword}
+        errors={errors.password}
+        autoComplete="new-password"
+        secureTextEntry
+      />
+      <TextField
+        label="Firm name"
+        testID="sign-up-firm-name"
+        value={firmName}
+        onChangeText={setFirmName}
+        errors={errors.firmName}
+        autoComplete="organization"
+      />
+      <ChoiceGroup label="Kind of firm" testID="sign-up-firm-kind" choices={firmKinds} value={firmKind} onChange={setFirmKind} errors={errors.firmKind} />
+      <Button label="Create account" testID="sign-up-submit" busy={busy} onPress={submit} block />
+      <View>
+        <Text tone="muted">Already have an account?</Text>
+        <TextLink href="/sign-in" label="Sign in" testID="sign-up-to-sign-in" />
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({ form: { gap: spacing.lg } });
