@@ -132,16 +132,25 @@ export const memberLoadsInputSchema = z.object({
 });
 export type MemberLoadsInput = z.infer<typeof memberLoadsInputSchema>;
 
-/** Snow inputs for one roof (ASCE 7 chapter 7). Factors default to the values stated in the snow module. */
+export const riskCategorySchema = z.enum(['I', 'II', 'III', 'IV']);
+
+/**
+ * Snow inputs for one roof (ASCE 7 chapter 7). Ground snow in psf as the job's edition defines it
+ * (ASCE 7-16: 50-year map value; ASCE 7-22: strength-level, risk-targeted). Factors default to the values
+ * stated in the snow module; importanceIs (ASCE 7-16 only) defaults from the risk category.
+ */
 export const snowInputSchema = z.object({
   edition: loadStandardSchema,
   groundSnowPsf: nonNegative('the ground snow load').max(300, { message: 'Ground snow at most 300 psf' }),
   roofPitchIn12: z.number().finite().min(0).max(24),
   roofType: z.enum(roofTypes).default('gable'),
+  riskCategory: riskCategorySchema.default('II'),
   exposureCe: z.number().finite().min(0.7).max(1.3).default(1.0),
   thermalCt: z.number().finite().min(0.85).max(1.3).default(1.0),
-  importanceIs: z.number().finite().min(0.8).max(1.2).default(1.0),
+  importanceIs: z.number().finite().min(0.8).max(1.2).optional(),
+  /** Unobstructed slippery surface (metal, glass, smooth membrane) that lets snow slide off the eaves. */
   slipperyUnobstructed: z.boolean().default(false),
+  /** The roof steps down to a lower roof next to this member (drift). */
   roofStepsDown: z.boolean().default(false),
 });
 export type SnowInput = z.infer<typeof snowInputSchema>;
