@@ -4,3 +4,4 @@ export { LOAD_DURATION_CD } from '@/lib/calc/loads/load-duration';
 export { CONTINUOUS_JOIST_FACTOR } from '@/lib/calc/loads/continuous-joist';
 export { roofAngleDeg, slopeToHorizontalFactor } from '@/lib/calc/loads/roof-slope';
 export type { MemberLoads, TakedownLine } from '@/lib/calc/loads/takedown-line';
+export { LOAD_DEFAULTS, type LoadDefault } from '@/lib/calc/loads/defaults';
