@@ -11,6 +11,7 @@ export interface ColumnStability {
 }
 
 const MAX_SLENDERNESS = 50;
+const MAX_SLENDERNESS_DURING_CONSTRUCTION = 75;
 
 /**
  * The column buckling coefficient c: 0.8 sawn lumber, 0.9 glulam and structural composite lumber.
@@ -29,6 +30,7 @@ export function columnBucklingCoefficient(family: MaterialFamily): number {
  * @param input.FcStarPsi F_c* (psi): F_c × all applicable factors except C_P
  * @param input.EminAdjPsi E'_min (psi)
  * @param input.c 0.8 sawn, 0.9 glulam / SCL (columnBucklingCoefficient)
+ * @param input.duringConstruction temporary use during construction (shoring): l_e/d limit 75 instead of 50
  * @example columnStabilityFactor({ leIn: 87.6, dIn: 3.5, FcStarPsi: 1322.5, EminAdjPsi: 510000, c: 0.8 }).CP // 0.4378
  * Reference: NDS 2018 §3.7.1, equation 3.7-1.
  */
@@ -38,11 +40,13 @@ export function columnStabilityFactor(input: {
   FcStarPsi: number;
   EminAdjPsi: number;
   c: number;
+  duringConstruction?: boolean;
 }): ColumnStability {
   const slenderness = input.leIn / input.dIn;
   const FcEPsi = (0.822 * input.EminAdjPsi) / (slenderness * slenderness);
   const ratio = FcEPsi / input.FcStarPsi;
   const half = (1 + ratio) / (2 * input.c);
   const CP = half - Math.sqrt(half * half - ratio / input.c);
-  return { CP, slenderness, FcEPsi, withinSlendernessLimit: slenderness <= MAX_SLENDERNESS };
+  const limit = input.duringConstruction ? MAX_SLENDERNESS_DURING_CONSTRUCTION : MAX_SLENDERNESS;
+  return { CP, slenderness, FcEPsi, withinSlendernessLimit: slenderness <= limit };
 }

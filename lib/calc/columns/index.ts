@@ -1,0 +1,19 @@
+/**
+ * Posts, temporary shoring walls and footing pads.
+ * Reference: NDS 2018 §3.7, §3.10, §15.3; IRC 2021 R401.4.1.
+ */
+export { axialCapacity, type AxialCapacity, type ColumnAxis, type ColumnAxisResult } from './axial-capacity';
+export { checkColumn, type ColumnCheck, type ColumnInput } from './check-column';
+export {
+  checkShoringWall,
+  type ShoringWallCheck,
+  type ShoringWallInput,
+  type ShoringWeakAxisBracing,
+} from './shoring-wall';
+export {
+  NORMAL_WEIGHT_CONCRETE_PCF,
+  PRESUMPTIVE_SOIL_BEARING_PSF,
+  sizeFootingPad,
+  type FootingPad,
+  type FootingPadInput,
+} from './footing-pad';
