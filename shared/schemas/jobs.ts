@@ -44,3 +44,29 @@ export const jobSchema = jobInputSchema.extend({
 export type Job = z.infer<typeof jobSchema>;
 
 export const jobListSchema = z.object({ jobs: z.array(jobSchema) });
+
+const jobField = jobInputSchema.shape;
+
+/**
+ * `PATCH /api/jobs/:jobId`: only the fields sent change. (`jobUpdateSchema` above keeps zod's defaults, so
+ * parsing `{ name }` with it fills every other field with its default; a patch must not do that.)
+ */
+export const jobPatchSchema = z
+  .object({
+    name: jobField.name.optional(),
+    address: jobField.address.unwrap().optional(),
+    yearBuilt: jobField.yearBuilt.unwrap().optional(),
+    stories: jobField.stories.unwrap().optional(),
+    roofType: jobField.roofType.unwrap().optional(),
+    roofPitchIn12: jobField.roofPitchIn12.unwrap().optional(),
+    buildingWidthFt: jobField.buildingWidthFt.unwrap().optional(),
+    loadStandard: jobField.loadStandard.unwrap().optional(),
+    groundSnowPsf: jobField.groundSnowPsf.unwrap().optional(),
+    groundSnowSource: jobField.groundSnowSource.unwrap().optional(),
+    foundation: jobField.foundation.unwrap().optional(),
+    notes: jobField.notes.unwrap().optional(),
+  })
+  .refine((patch) => Object.values(patch).some((value) => value !== undefined), {
+    message: 'Change at least one field',
+  });
+export type JobPatch = z.infer<typeof jobPatchSchema>;

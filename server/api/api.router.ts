@@ -1,0 +1,48 @@
+import { Router } from 'express';
+import type { Db } from '@/db/client';
+import { AppError } from '@/server/app-error';
+import type { RateLimitOptions } from '@/server/middleware/sign-in-limit';
+import type { Mailer } from '@/server/services/mail/mailer';
+import type { Sessions } from '@/server/services/sessions';
+import { authRouter } from './auth/auth.router';
+import { createAuthService } from './auth/auth.service';
+import { devMailRouter } from './dev-mail/dev-mail.router';
+import { healthRouter } from './health/health.router';
+import { invitationsRouter } from './invitations/invitations.router';
+import { createInvitationsService } from './invitations/invitations.service';
+import { jobsRouter } from './jobs/jobs.router';
+import { createJobsService } from './jobs/jobs.service';
+import { meRouter } from './me/me.router';
+import { createMeService } from './me/me.service';
+import { orgsRouter } from './orgs/orgs.router';
+import { createOrgsService } from './orgs/orgs.service';
+
+export interface ApiOptions {
+  db: Db;
+  mailer: Mailer;
+  sessions: Sessions;
+  appOrigin: string;
+  signInLimit: RateLimitOptions;
+  devMail: boolean;
+}
+
+/** Everything under /api; unknown paths end in a JSON 404. */
+export function apiRouter(options: ApiOptions): Router {
+  const { db, sessions } = options;
+  const me = createMeService(db);
+  const router = Router();
+  router.use('/health', healthRouter());
+  router.use(
+    '/auth',
+    authRouter({ auth: createAuthService(db), me, sessions, signInLimit: options.signInLimit }),
+  );
+  router.use('/me', meRouter({ me }));
+  router.use('/orgs', orgsRouter({ db, orgs: createOrgsService(options) }));
+  router.use('/invitations', invitationsRouter({ invitations: createInvitationsService(db), me, sessions }));
+  router.use('/jobs', jobsRouter({ db, jobs: createJobsService(db) }));
+  if (options.devMail) router.use('/dev/mail', devMailRouter({ db }));
+  router.use(() => {
+    throw new AppError('not_found', 'No such API route');
+  });
+  return router;
+}

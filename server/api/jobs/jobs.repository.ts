@@ -1,0 +1,64 @@
+import { and, desc, eq, isNotNull, isNull } from 'drizzle-orm';
+import type { DbOrTx } from '@/db/client';
+import { newId } from '@/db/new-id';
+import { jobs } from '@/db/schema';
+import type { Job, JobPatch, jobInputSchema } from '@/shared/schemas/jobs';
+import type { z } from 'zod';
+
+export type JobFields = z.output<typeof jobInputSchema>;
+
+function toJob(row: typeof jobs.$inferSelect): Job {
+  const { createdBy: _createdBy, ...job } = row;
+  return job;
+}
+
+export function listJobs(db: DbOrTx, orgId: string, archived: boolean): Job[] {
+  return db
+    .select()
+    .from(jobs)
+    .where(and(eq(jobs.orgId, orgId), archived ? isNotNull(jobs.archivedAt) : isNull(jobs.archivedAt)))
+    .orderBy(desc(jobs.createdAt), desc(jobs.id))
+    .all()
+    .map(toJob);
+}
+
+/** Only a job of `orgId`: another firm's id reads as missing. */
+export function findJob(db: DbOrTx, orgId: string, jobId: string): Job | undefined {
+  const row = db
+    .select()
+    .from(jobs)
+    .where(and(eq(jobs.id, jobId), eq(jobs.orgId, orgId)))
+    .get();
+  return row && toJob(row);
+}
+
+export function insertJob(db: DbOrTx, orgId: string, createdBy: string, fields: JobFields): Job {
+  const now = new Date().toISOString();
+  const row = { id: newId(), orgId, createdBy, ...fields, createdAt: now, updatedAt: now, archivedAt: null };
+  db.insert(jobs).values(row).run();
+  return toJob(row);
+}
+
+export function updateJob(db: DbOrTx, orgId: string, jobId: string, patch: JobPatch): Job | undefined {
+  const row = db
+    .update(jobs)
+    .set({ ...patch, updatedAt: new Date().toISOString() })
+    .where(and(eq(jobs.id, jobId), eq(jobs.orgId, orgId)))
+    .returning()
+    .get();
+  return row && toJob(row);
+}
+
+/** Sets `archived_at` once; archiving an archived job keeps its first date. */
+export function archiveJob(db: DbOrTx, orgId: string, jobId: string): Job | undefined {
+  const now = new Date().toISOString();
+  const job = findJob(db, orgId, jobId);
+  if (!job || job.archivedAt) return job;
+  const row = db
+    .update(jobs)
+    .set({ archivedAt: now, updatedAt: now })
+    .where(and(eq(jobs.id, jobId), eq(jobs.orgId, orgId)))
+    .returning()
+    .get();
+  return row && toJob(row);
+}

@@ -1,0 +1,43 @@
+import { Router, type Response } from 'express';
+import { z } from 'zod';
+import type { Db } from '@/db/client';
+import { requireMember, requireRole, signedInUser } from '@/server/middleware/auth';
+import { validate } from '@/server/middleware/validate';
+import { jobInputSchema, jobPatchSchema } from '@/shared/schemas/jobs';
+import type { JobsService } from './jobs.service';
+
+const jobParams = z.object({ jobId: z.string().min(1).max(100) });
+const listQuery = z.object({
+  archived: z.enum(['0', '1'], { message: 'Use archived=1 or archived=0' }).optional(),
+});
+
+const actorOf = (res: Response) => ({ userId: signedInUser(res).id, orgId: res.locals.member.orgId });
+
+/** Contracting-firm roles only; engineers see jobs through design requests, not here. */
+export function jobsRouter(deps: { db: Db; jobs: JobsService }): Router {
+  const router = Router();
+  router.use(requireMember(deps.db), requireRole('owner', 'contractor', 'estimator'));
+
+  router.get('/', validate({ query: listQuery }), (req, res) => {
+    res.json({ jobs: deps.jobs.list(res.locals.member.orgId, req.query.archived === '1') });
+  });
+
+  router.post('/', validate({ body: jobInputSchema }), (req, res) => {
+    res.status(201).json(deps.jobs.create(actorOf(res), req.body));
+  });
+
+  router.get('/:jobId', validate({ params: jobParams }), (req, res) => {
+    res.json(deps.jobs.get(res.locals.member.orgId, req.params.jobId));
+  });
+
+  router.patch('/:jobId', validate({ params: jobParams, body: jobPatchSchema }), (req, res) => {
+    res.json(deps.jobs.update(actorOf(res), req.params.jobId, req.body));
+  });
+
+  router.delete('/:jobId', validate({ params: jobParams }), (req, res) => {
+    deps.jobs.archive(actorOf(res), req.params.jobId);
+    res.status(204).end();
+  });
+
+  return router;
+}

@@ -1,0 +1,67 @@
+import { existsSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import express, { type Express } from 'express';
+import type { Db } from '@/db/client';
+import { apiRouter } from './api/api.router';
+import { readSession } from './middleware/auth';
+import { errorHandler } from './middleware/error-handler';
+import { originCheck } from './middleware/origin-check';
+import { requestLog } from './middleware/request-log';
+import { securityHeaders } from './middleware/security-headers';
+import { DEFAULT_SIGN_IN_LIMIT, type RateLimitOptions } from './middleware/sign-in-limit';
+import type { Mailer } from './services/mail/mailer';
+import { createSessions } from './services/sessions';
+
+export interface AppOptions {
+  db: Db;
+  mailer: Mailer;
+  /** Public origin of the web app: invitation links and the CSRF origin check use it. */
+  appOrigin: string;
+  production?: boolean;
+  sessionDays?: number;
+  signInLimit?: RateLimitOptions;
+  /** Mount GET /api/dev/mail (never in production). */
+  devMail?: boolean;
+  /** Folder of the exported web app; served with an SPA fallback when it holds an index.html. */
+  webDir?: string;
+  /** Request and error log; silent when omitted. */
+  log?: (line: string) => void;
+}
+
+/** Builds the Express app without listening, so tests drive it with supertest. */
+export function createApp(options: AppOptions): Express {
+  const production = options.production ?? false;
+  const log = options.log ?? (() => undefined);
+  const sessions = createSessions(options.db, {
+    sessionDays: options.sessionDays ?? 30,
+    secureCookies: production,
+  });
+
+  const app = express();
+  app.set('trust proxy', 'loopback');
+  if (options.log) app.use(requestLog(options.log));
+  app.use(securityHeaders(production));
+  app.use('/api', express.json({ limit: '200kb' }), readSession(sessions), originCheck([options.appOrigin]));
+  app.use(
+    '/api',
+    apiRouter({
+      db: options.db,
+      mailer: options.mailer,
+      sessions,
+      appOrigin: options.appOrigin,
+      signInLimit: options.signInLimit ?? DEFAULT_SIGN_IN_LIMIT,
+      devMail: (options.devMail ?? !production) && !production,
+    }),
+  );
+
+  const webDir = options.webDir && resolve(options.webDir);
+  if (webDir && existsSync(join(webDir, 'index.html'))) {
+    app.use(express.static(webDir, { index: false, maxAge: production ? '1h' : 0 }));
+    app.get('/{*splat}', (_req, res) => {
+      res.sendFile(join(webDir, 'index.html'));
+    });
+  }
+
+  app.use(errorHandler(log));
+  return app;
+}

@@ -1,0 +1,37 @@
+import { z } from 'zod';
+
+const envSchema = z
+  .object({
+    NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+    PORT: z.coerce.number().int().min(0).max(65535).default(8080),
+    HOST: z.string().min(1).default('127.0.0.1'),
+    DATABASE_URL: z.string().min(1).default('file:data/tributary.db'),
+    SMTP_HOST: z.string().min(1).optional(),
+    SMTP_PORT: z.coerce.number().int().min(1).max(65535).optional(),
+    SMTP_USER: z.string().min(1).optional(),
+    SMTP_PASS: z.string().min(1).optional(),
+    MAIL_FROM: z.string().min(1).default('Tributary <no-reply@tributary.test>'),
+    APP_ORIGIN: z.url().optional(),
+    SESSION_DAYS: z.coerce.number().int().min(1).max(365).default(30),
+    WEB_DIR: z.string().min(1).default('dist'),
+    SEED_DEMO: z.string().default('1'),
+  })
+  .transform((env) => ({
+    ...env,
+    APP_ORIGIN: (env.APP_ORIGIN ?? `http://${env.HOST}:${env.PORT}`).replace(/\/$/, ''),
+  }));
+
+export type Env = z.infer<typeof envSchema>;
+
+/** Reads and checks the environment once; the only module that touches `process.env`. */
+export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
+  const parsed = envSchema.safeParse(source);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((issue) => `  ${issue.path.join('.')}: ${issue.message}`);
+    throw new Error(`Invalid environment:\n${lines.join('\n')}`);
+  }
+  if (parsed.data.NODE_ENV === 'production' && !parsed.data.SMTP_HOST) {
+    throw new Error('Invalid environment:\n  SMTP_HOST: required in production');
+  }
+  return parsed.data;
+}

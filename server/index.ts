@@ -1,0 +1,74 @@
+import { createServer } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import { openDatabase } from '@/db/client';
+import { migrateDatabase } from '@/db/migrate';
+import { insertDemoData } from '@/db/seed';
+import { createApp } from './app';
+import { loadEnv } from './env';
+import { startFakeSmtp, type FakeSmtp } from './services/fake-smtp';
+import { createSmtpMailer } from './services/mail/mailer';
+import { hashPassword } from './services/password';
+
+async function main(): Promise<void> {
+  const env = loadEnv();
+  const production = env.NODE_ENV === 'production';
+  const log = (line: string) => console.log(line);
+
+  const database = openDatabase(env.DATABASE_URL);
+  migrateDatabase(database.db);
+  if (env.SEED_DEMO !== '0' && (await insertDemoData(database.db, hashPassword))) {
+    log('Demo firms, people and jobs added (password tributary-demo)');
+  }
+
+  let fakeSmtp: FakeSmtp | undefined;
+  if (!env.SMTP_HOST) {
+    fakeSmtp = await startFakeSmtp(database.db);
+    log(`Fake SMTP server capturing mail on ${fakeSmtp.host}:${fakeSmtp.port}`);
+  }
+  const mailer = createSmtpMailer(database.db, {
+    host: env.SMTP_HOST ?? fakeSmtp?.host ?? '127.0.0.1',
+    port: env.SMTP_PORT ?? fakeSmtp?.port ?? 25,
+    user: env.SMTP_USER,
+    pass: env.SMTP_PASS,
+    from: env.MAIL_FROM,
+  });
+
+  const app = createApp({
+    db: database.db,
+    mailer,
+    appOrigin: env.APP_ORIGIN,
+    production,
+    sessionDays: env.SESSION_DAYS,
+    devMail: !production,
+    webDir: env.WEB_DIR,
+    log: env.NODE_ENV === 'test' ? undefined : log,
+  });
+
+  const server = createServer(app);
+  server.listen(env.PORT, env.HOST, () => {
+    const { port } = server.address() as AddressInfo;
+    log(`Tributary listening on http://${env.HOST}:${port}`);
+  });
+
+  let stopping = false;
+  const shutdown = (signal: string) => {
+    if (stopping) return;
+    stopping = true;
+    log(`${signal} received, shutting down`);
+    setTimeout(() => process.exit(1), 10_000);
+    server.close(async () => {
+      mailer.close();
+      await fakeSmtp?.close();
+      database.close();
+      process.exit(0);
+    });
+    server.closeIdleConnections();
+  };
+  process.on('SIGTERM', () => shutdown('SIGTERM'));
+  process.on('SIGINT', () => shutdown('SIGINT'));
+}
+
+main().catch((error: unknown) => {
+  console.error(error);
+  process.exit(1);
+});

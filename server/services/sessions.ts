@@ -1,0 +1,32 @@
+import { DrizzleSQLiteAdapter } from '@lucia-auth/adapter-drizzle';
+import { Lucia, TimeSpan } from 'lucia';
+import type { Db } from '@/db/client';
+import { sessions, users } from '@/db/schema';
+
+export const SESSION_COOKIE = 'tributary_session';
+
+export interface SessionOptions {
+  sessionDays: number;
+  secureCookies: boolean;
+}
+
+/** lucia v3 over the Drizzle adapter: sliding expiry of `sessionDays`, httpOnly SameSite=Lax cookie. */
+export function createSessions(db: Db, options: SessionOptions) {
+  return new Lucia(new DrizzleSQLiteAdapter(db, sessions, users), {
+    sessionExpiresIn: new TimeSpan(options.sessionDays, 'd'),
+    sessionCookie: {
+      name: SESSION_COOKIE,
+      attributes: { secure: options.secureCookies, sameSite: 'lax' },
+    },
+    getUserAttributes: (attributes) => ({ email: attributes.email, name: attributes.name }),
+  });
+}
+
+export type Sessions = ReturnType<typeof createSessions>;
+
+declare module 'lucia' {
+  interface Register {
+    Lucia: Sessions;
+    DatabaseUserAttributes: { email: string; name: string };
+  }
+}

@@ -1,0 +1,75 @@
+import type { Express } from 'express';
+import request from 'supertest';
+import { openDatabase, type Db } from '@/db/client';
+import { migrateDatabase } from '@/db/migrate';
+import { createApp, type AppOptions } from '@/server/app';
+import { listCapturedMail } from '@/server/api/dev-mail/dev-mail.repository';
+import { startFakeSmtp, type FakeSmtp } from '@/server/services/fake-smtp';
+import { createSmtpMailer, type Mailer } from '@/server/services/mail/mailer';
+import type { CapturedMail } from '@/shared/schemas/mail';
+import type { SignUpInput } from '@/shared/schemas/auth';
+
+export const TEST_APP_ORIGIN = 'http://tributary.test';
+
+export interface TestServer {
+  app: Express;
+  db: Db;
+  smtp: FakeSmtp;
+  mailer: Mailer;
+  /** What the fake SMTP server received, newest first. */
+  capturedMail(): CapturedMail[];
+  close(): Promise<void>;
+}
+
+/**
+ * A fresh `:memory:` database built by the real migrations, the real fake SMTP server on a free loopback
+ * port with the real nodemailer mailer in front of it, and `createApp` over both.
+ */
+export async function createTestServer(options: Partial<AppOptions> = {}): Promise<TestServer> {
+  const database = openDatabase(':memory:');
+  migrateDatabase(database.db);
+  const smtp = await startFakeSmtp(database.db);
+  const mailer = createSmtpMailer(database.db, {
+    host: smtp.host,
+    port: smtp.port,
+    from: 'test@tributary.test',
+  });
+  const app = createApp({ db: database.db, mailer, appOrigin: TEST_APP_ORIGIN, ...options });
+  return {
+    app,
+    db: database.db,
+    smtp,
+    mailer,
+    capturedMail: () => listCapturedMail(database.db, 1000),
+    async close() {
+      mailer.close();
+      await smtp.close();
+      database.close();
+    },
+  };
+}
+
+let counter = 0;
+
+/** A sign-up body with a unique e-mail; override any field. */
+export function signUpBody(overrides: Partial<SignUpInput> = {}): SignUpInput {
+  counter += 1;
+  return {
+    name: `Test Person ${counter}`,
+    email: `person${counter}.${Date.now()}@example.test`,
+    password: 'correct horse battery',
+    firmName: `Test Firm ${counter}`,
+    firmKind: 'contracting',
+    ...overrides,
+  };
+}
+
+/** Signs up a new person (and firm) and returns a cookie-keeping agent with the answer's `Me`. */
+export async function signedUpAgent(app: Express, overrides: Partial<SignUpInput> = {}) {
+  const agent = request.agent(app);
+  const body = signUpBody(overrides);
+  const res = await agent.post('/api/auth/sign-up').send(body).expect(201);
+  return { agent, body, me: res.body as { user: { id: string }; activeOrgId: string; role: string } };
+}
+
+export type Agent = request.Agent;
