@@ -16,7 +16,9 @@ function proxyToApi(req, res) {
   );
   upstream.on('error', () => {
     res.writeHead(502, { 'Content-Type': 'application/json' });
-    res.end(JSON.stringify({ error: { code: 'internal', message: `The API is not running on port ${apiPort}` } }));
+    res.end(
+      JSON.stringify({ error: { code: 'internal', message: `The API is not running on port ${apiPort}` } }),
+    );
   });
   req.pipe(upstream);
 }

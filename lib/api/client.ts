@@ -13,7 +13,12 @@ export class ApiError extends Error {
   /** Field path → messages, from a 400 answer. */
   readonly fields: Record<string, string[]>;
 
-  constructor(code: ApiErrorCode | ClientErrorCode, status: number, message: string, fields: Record<string, string[]> = {}) {
+  constructor(
+    code: ApiErrorCode | ClientErrorCode,
+    status: number,
+    message: string,
+    fields: Record<string, string[]> = {},
+  ) {
     super(message);
     this.name = 'ApiError';
     this.code = code;
@@ -60,7 +65,11 @@ export async function apiRequest<S extends z.ZodType>(
       const { code, message, fields } = parsed.data.error;
       throw new ApiError(code, response.status, message, fields);
     }
-    throw new ApiError('bad_response', response.status, `The server answered ${response.status} without an explanation.`);
+    throw new ApiError(
+      'bad_response',
+      response.status,
+      `The server answered ${response.status} without an explanation.`,
+    );
   }
 
   const parsed = schema.safeParse(text === '' ? undefined : json);

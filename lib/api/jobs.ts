@@ -3,7 +3,8 @@ import { apiRequest, noContentSchema } from './client';
 
 export const fetchJobs = () => apiRequest('GET', '/api/jobs', jobListSchema).then((body) => body.jobs);
 
-export const fetchJob = (jobId: string) => apiRequest('GET', `/api/jobs/${encodeURIComponent(jobId)}`, jobSchema);
+export const fetchJob = (jobId: string) =>
+  apiRequest('GET', `/api/jobs/${encodeURIComponent(jobId)}`, jobSchema);
 
 export const createJob = (input: JobInput) => apiRequest('POST', '/api/jobs', jobSchema, input);
 

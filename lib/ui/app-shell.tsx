@@ -1,6 +1,7 @@
 import { usePathname } from 'expo-router';
 import type { ReactNode } from 'react';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
+import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import type { Me } from '@/shared/schemas/auth';
 import { colors, layout, spacing } from '@/lib/theme';
 import { NavLink } from './nav-link';
@@ -19,9 +20,15 @@ export function AppShell({ me, children }: { me: Me; children: ReactNode }) {
   const items = navItemsForRole(me.role);
   const firm = me.memberships.find((m) => m.orgId === me.activeOrgId);
   const wide = width >= layout.wideBreakpoint;
+  const insets = useSafeAreaInsets();
 
   const links = items.map((item) => (
-    <NavLink key={item.href} item={item} active={isNavItemActive(item, pathname)} placement={wide ? 'side' : 'tab'} />
+    <NavLink
+      key={item.href}
+      item={item}
+      active={isNavItemActive(item, pathname)}
+      placement={wide ? 'side' : 'tab'}
+    />
   ));
   const firmLine = firm ? `${firm.orgName} · ${roleLabel(me.role)}` : roleLabel(me.role);
 
@@ -42,14 +49,14 @@ export function AppShell({ me, children }: { me: Me; children: ReactNode }) {
 
   return (
     <View style={styles.phoneRoot}>
-      <View style={styles.topBar}>
+      <View style={[styles.topBar, { paddingTop: spacing.sm + insets.top }]}>
         <Wordmark />
         <Text variant="caption" tone="muted" numberOfLines={1} style={styles.topFirm}>
           {firmLine}
         </Text>
       </View>
       <View style={styles.content}>{children}</View>
-      <View style={styles.tabBar} role="navigation" aria-label="Main">
+      <View style={[styles.tabBar, { paddingBottom: insets.bottom }]} role="navigation" aria-label="Main">
         {links}
       </View>
     </View>

@@ -7,10 +7,16 @@ import { Wordmark } from './wordmark';
 /** The frame around sign-in, sign-up and invitation pages: the wordmark, a title and one card. */
 export function AuthFrame({ title, children }: { title: string; children: ReactNode }) {
   return (
-    <ScrollView style={styles.scroll} contentContainerStyle={styles.content} keyboardShouldPersistTaps="handled">
+    <ScrollView
+      style={styles.scroll}
+      contentContainerStyle={styles.content}
+      keyboardShouldPersistTaps="handled"
+    >
       <View style={styles.column}>
         <Wordmark size="lg" />
-        <Text tone="muted">Preliminary header and beam checks, budgets and design requests for opening up walls.</Text>
+        <Text tone="muted">
+          Preliminary header and beam checks, budgets and design requests for opening up walls.
+        </Text>
         <View style={styles.card}>
           <Text variant="title">{title}</Text>
           {children}

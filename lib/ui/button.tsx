@@ -22,7 +22,15 @@ const look: Record<Variant, { bg: string; pressed: string; fg: string; border: s
 };
 
 /** A button at least 48 px tall. While `busy`, it shows a spinner and ignores presses. */
-export function Button({ label, variant = 'primary', icon, busy = false, block = false, disabled, ...rest }: ButtonProps) {
+export function Button({
+  label,
+  variant = 'primary',
+  icon,
+  busy = false,
+  block = false,
+  disabled,
+  ...rest
+}: ButtonProps) {
   const v = look[variant];
   const inactive = busy || Boolean(disabled);
   return (

@@ -16,14 +16,26 @@ type ChoiceGroupProps<T extends string> = {
 };
 
 /** A radio group drawn as large tappable options; the chosen one carries a tick as well as the accent. */
-export function ChoiceGroup<T extends string>({ label, choices, value, onChange, errors, testID }: ChoiceGroupProps<T>) {
+export function ChoiceGroup<T extends string>({
+  label,
+  choices,
+  value,
+  onChange,
+  errors,
+  testID,
+}: ChoiceGroupProps<T>) {
   const wide = choices.every((c) => !c.description);
   return (
     <View style={styles.wrap}>
       <Text variant="label" nativeID={testID ? `${testID}-label` : undefined}>
         {label}
       </Text>
-      <View role="radiogroup" aria-label={label} testID={testID} style={[styles.options, wide && styles.inline]}>
+      <View
+        role="radiogroup"
+        aria-label={label}
+        testID={testID}
+        style={[styles.options, wide && styles.inline]}
+      >
         {choices.map((choice) => {
           const selected = choice.value === value;
           return (
@@ -35,11 +47,7 @@ export function ChoiceGroup<T extends string>({ label, choices, value, onChange,
               aria-label={choice.label}
               testID={testID ? `${testID}-${choice.value}` : undefined}
               onPress={() => onChange(choice.value)}
-              style={({ pressed }) => [
-                styles.option,
-                selected && styles.selected,
-                pressed && styles.pressed,
-              ]}
+              style={({ pressed }) => [styles.option, selected && styles.selected, pressed && styles.pressed]}
             >
               <View style={[styles.dot, selected && styles.dotSelected]}>
                 {selected ? <Icon name="check" size={iconSize.sm} color={colors.onAccent} /> : null}

@@ -33,7 +33,13 @@ type NumberField = 'yearBuilt' | 'stories' | 'roofPitchIn12' | 'buildingWidthFt'
 
 /** Fields that may be left empty and then mean "not known" (null) rather than the schema default. */
 const nullableFields: ReadonlySet<NumberField> = new Set(['yearBuilt', 'buildingWidthFt']);
-const numberFields: readonly NumberField[] = ['yearBuilt', 'stories', 'roofPitchIn12', 'buildingWidthFt', 'groundSnowPsf'];
+const numberFields: readonly NumberField[] = [
+  'yearBuilt',
+  'stories',
+  'roofPitchIn12',
+  'buildingWidthFt',
+  'groundSnowPsf',
+];
 
 export function emptyJobDraft(): JobDraft {
   return {

@@ -1,7 +1,11 @@
 import type { Role } from '@/shared/schemas/auth';
 import type { IconName } from './icon';
 
-export type NavItem = { href: '/jobs' | '/members' | '/requests' | '/account'; label: string; icon: IconName };
+export type NavItem = {
+  href: '/jobs' | '/members' | '/requests' | '/account';
+  label: string;
+  icon: IconName;
+};
 
 const jobs: NavItem = { href: '/jobs', label: 'Jobs', icon: 'jobs' };
 const members: NavItem = { href: '/members', label: 'Members', icon: 'members' };

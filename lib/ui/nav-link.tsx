@@ -17,11 +17,18 @@ export function NavLink({ item, active, placement }: NavLinkProps) {
         aria-current={active ? 'page' : undefined}
         aria-label={item.label}
         testID={`nav-${item.label.toLowerCase()}`}
-        style={({ pressed }) => [side ? styles.side : styles.tab, pressed && styles.pressed, active && side && styles.sideActive]}
+        style={({ pressed }) => [
+          side ? styles.side : styles.tab,
+          pressed && styles.pressed,
+          active && side && styles.sideActive,
+        ]}
       >
         <View style={[side ? styles.sideBar : styles.tabBar, active && styles.barActive]} />
         <Icon name={item.icon} size={side ? iconSize.md : iconSize.lg} color={tint} />
-        <Text variant={active ? 'label' : 'caption'} style={[{ color: active ? colors.ink : colors.inkMuted }, side && styles.sideLabel]}>
+        <Text
+          variant={active ? 'label' : 'caption'}
+          style={[{ color: active ? colors.ink : colors.inkMuted }, side && styles.sideLabel]}
+        >
           {item.label}
         </Text>
       </Pressable>
@@ -37,7 +44,14 @@ const styles = StyleSheet.create({
     justifyContent: 'center',
     gap: spacing.xxs,
   },
-  tabBar: { position: 'absolute', top: 0, left: spacing.lg, right: spacing.lg, height: 4, borderRadius: radii.sm },
+  tabBar: {
+    position: 'absolute',
+    top: 0,
+    left: spacing.lg,
+    right: spacing.lg,
+    height: 4,
+    borderRadius: radii.sm,
+  },
   side: {
     minHeight: layout.touchTarget,
     flexDirection: 'row',
@@ -47,7 +61,14 @@ const styles = StyleSheet.create({
     borderRadius: radii.md,
   },
   sideActive: { backgroundColor: colors.accentSoft },
-  sideBar: { position: 'absolute', left: 0, top: spacing.sm, bottom: spacing.sm, width: 4, borderRadius: radii.sm },
+  sideBar: {
+    position: 'absolute',
+    left: 0,
+    top: spacing.sm,
+    bottom: spacing.sm,
+    width: 4,
+    borderRadius: radii.sm,
+  },
   sideLabel: { fontSize: 17 },
   barActive: { backgroundColor: colors.accent },
   pressed: { backgroundColor: colors.overlay },

@@ -15,7 +15,11 @@ type ScreenProps = {
 /** A scrolling page with a centred column and an optional title row. */
 export function Screen({ title, actions, children, narrow = false }: ScreenProps) {
   return (
-    <ScrollView style={styles.scroll} contentContainerStyle={styles.content} keyboardShouldPersistTaps="handled">
+    <ScrollView
+      style={styles.scroll}
+      contentContainerStyle={styles.content}
+      keyboardShouldPersistTaps="handled"
+    >
       <View style={[styles.column, { maxWidth: narrow ? layout.formMaxWidth : layout.contentMaxWidth }]}>
         {title || actions ? (
           <View style={styles.header}>

@@ -31,7 +31,9 @@ export function SessionGate({ require, children }: SessionGateProps) {
 
   if (me) return <>{children}</>;
   if (isSignedOut(error)) {
-    return <Redirect href={pathname === '/' ? '/sign-in' : { pathname: '/sign-in', params: { next: pathname } }} />;
+    return (
+      <Redirect href={pathname === '/' ? '/sign-in' : { pathname: '/sign-in', params: { next: pathname } }} />
+    );
   }
   if (error) {
     return (

@@ -47,7 +47,14 @@ export function SignUpForm() {
   return (
     <View style={styles.form}>
       {error ? <Notice tone="error">{error.message}</Notice> : null}
-      <TextField label="Your name" testID="sign-up-name" value={name} onChangeText={setName} errors={errors.name} autoComplete="name" />
+      <TextField
+        label="Your name"
+        testID="sign-up-name"
+        value={name}
+        onChangeText={setName}
+        errors={errors.name}
+        autoComplete="name"
+      />
       <TextField
         label="E-mail"
         testID="sign-up-email"
@@ -76,7 +83,14 @@ export function SignUpForm() {
         errors={errors.firmName}
         autoComplete="organization"
       />
-      <ChoiceGroup label="Kind of firm" testID="sign-up-firm-kind" choices={firmKinds} value={firmKind} onChange={setFirmKind} errors={errors.firmKind} />
+      <ChoiceGroup
+        label="Kind of firm"
+        testID="sign-up-firm-kind"
+        choices={firmKinds}
+        value={firmKind}
+        onChange={setFirmKind}
+        errors={errors.firmKind}
+      />
       <Button label="Create account" testID="sign-up-submit" busy={busy} onPress={submit} block />
       <View>
         <Text tone="muted">Already have an account?</Text>

@@ -13,7 +13,16 @@ type TextFieldProps = Omit<TextInputProps, 'style' | 'placeholderTextColor'> & {
 };
 
 /** Labelled text input with a hint and its field-level error messages below. */
-export function TextField({ label, hint, errors, unit, multiline, onFocus, onBlur, ...rest }: TextFieldProps) {
+export function TextField({
+  label,
+  hint,
+  errors,
+  unit,
+  multiline,
+  onFocus,
+  onBlur,
+  ...rest
+}: TextFieldProps) {
   const [focused, setFocused] = useState(false);
   const invalid = Boolean(errors?.length);
   return (

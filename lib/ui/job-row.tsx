@@ -1,0 +1,49 @@
+import { Link } from 'expo-router';
+import { Pressable, StyleSheet, View } from 'react-native';
+import type { Job } from '@/shared/schemas/jobs';
+import { colors, layout, radii, spacing } from '@/lib/theme';
+import { Icon } from './icon';
+import { yearBuiltLabel } from './job-labels';
+import { Text } from './text';
+
+/** One job in the list: name, address, year built and load standard; opens the job. */
+export function JobRow({ job }: { job: Job }) {
+  return (
+    <Link href={{ pathname: '/jobs/[jobId]', params: { jobId: job.id } }} asChild>
+      <Pressable
+        aria-label={`${job.name}, ${job.address || 'no address'}`}
+        testID="job-row"
+        style={({ pressed }) => [styles.row, pressed && styles.pressed]}
+      >
+        <View style={styles.text}>
+          <Text variant="bodyStrong" numberOfLines={2}>
+            {job.name}
+          </Text>
+          <Text tone="muted" numberOfLines={2}>
+            {job.address || 'No address yet'}
+          </Text>
+          <Text variant="caption" tone="muted">
+            {yearBuiltLabel(job)} · {job.loadStandard}
+          </Text>
+        </View>
+        <Icon name="chevronRight" color={colors.inkMuted} />
+      </Pressable>
+    </Link>
+  );
+}
+
+const styles = StyleSheet.create({
+  row: {
+    minHeight: layout.touchTarget,
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: spacing.md,
+    padding: spacing.lg,
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: radii.lg,
+  },
+  pressed: { backgroundColor: colors.surfaceSunken },
+  text: { flex: 1, gap: spacing.xxs },
+});
