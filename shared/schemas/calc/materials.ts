@@ -9,6 +9,8 @@ import { z } from 'zod';
 const psi = z.number().positive().finite();
 const factor = z.number().positive().max(2);
 const provenance = z.enum(['references', 'from memory']);
+/** Largest nominal width a row covers; Infinity stands for "and wider". */
+const widthBound = z.union([z.number().positive(), z.custom<number>((v) => v === Infinity)]);
 
 export const sawnReferenceRowSchema = z
   .object({
@@ -45,7 +47,7 @@ export const timberReferenceRowSchema = z
   .refine((row) => row.EminPsi < row.EPsi, { message: 'E_min must be below E' });
 
 export const sizeFactorRowSchema = z.object({
-  maxNominalWidthIn: z.number().positive(),
+  maxNominalWidthIn: widthBound,
   fbThin: factor,
   fbThick: factor,
   ft: factor,
@@ -53,7 +55,7 @@ export const sizeFactorRowSchema = z.object({
 });
 
 export const flatUseRowSchema = z.object({
-  maxNominalWidthIn: z.number().positive(),
+  maxNominalWidthIn: widthBound,
   thin: z.number().min(1).max(1.5),
   thick: z.number().min(1).max(1.5),
 });
@@ -130,22 +132,20 @@ const positive = (label: string) =>
   z.number({ message: `Enter ${label}` }).positive({ message: `${label} must be above 0` });
 
 /** Inputs of a post check (lib/calc/columns checkColumn). */
-export const columnInputSchema = z
-  .object({
-    materialId: z.string().min(1, { message: 'Choose a material' }),
-    sizeId: z.string().min(1).optional(),
-    heightFt: positive('the post height').max(40, { message: 'At most 40 ft' }),
-    loadLb: z
-      .number()
-      .min(0, { message: 'Load cannot be negative' })
-      .max(200_000, { message: 'At most 200,000 lb' }),
-    CD: z.number().min(0.9).max(2),
-    weakAxisBraced: z.boolean().optional(),
-    weakAxisUnbracedFt: positive('the weak-axis unbraced length').optional(),
-    fastening: z.enum(['nailed', 'bolted']).optional(),
-    wet: z.boolean().optional(),
-  })
-  .refine((input) => input.sizeId !== undefined, { message: 'Choose a post size', path: ['sizeId'] });
+export const columnInputSchema = z.object({
+  materialId: z.string().min(1, { message: 'Choose a material' }),
+  sizeId: z.string().min(1, { message: 'Choose a post size' }),
+  heightFt: positive('the post height').max(40, { message: 'At most 40 ft' }),
+  loadLb: z
+    .number()
+    .min(0, { message: 'Load cannot be negative' })
+    .max(200_000, { message: 'At most 200,000 lb' }),
+  CD: z.number().min(0.9).max(2),
+  weakAxisBraced: z.boolean().optional(),
+  weakAxisUnbracedFt: positive('the weak-axis unbraced length').optional(),
+  fastening: z.enum(['nailed', 'bolted']).optional(),
+  wet: z.boolean().optional(),
+});
 
 /** Inputs of a temporary shoring wall check (lib/calc/columns checkShoringWall). */
 export const shoringWallInputSchema = z.object({
