@@ -1,4 +1,4 @@
-import { desc, eq } from 'drizzle-orm';
+import { desc, eq, sql } from 'drizzle-orm';
 import type { DbOrTx } from '@/db/client';
 import { mailOutbox } from '@/db/schema';
 import type { CapturedMail } from '@/shared/schemas/mail';
@@ -15,7 +15,7 @@ export function listCapturedMail(db: DbOrTx, limit: number): CapturedMail[] {
     })
     .from(mailOutbox)
     .where(eq(mailOutbox.captured, true))
-    .orderBy(desc(mailOutbox.createdAt), desc(mailOutbox.id))
+    .orderBy(desc(mailOutbox.createdAt), desc(sql`${mailOutbox}.rowid`))
     .limit(limit)
     .all();
 }

@@ -1,4 +1,4 @@
-import { and, desc, eq, isNotNull, isNull } from 'drizzle-orm';
+import { and, desc, eq, isNotNull, isNull, sql } from 'drizzle-orm';
 import type { DbOrTx } from '@/db/client';
 import { newId } from '@/db/new-id';
 import { jobs } from '@/db/schema';
@@ -17,7 +17,8 @@ export function listJobs(db: DbOrTx, orgId: string, archived: boolean): Job[] {
     .select()
     .from(jobs)
     .where(and(eq(jobs.orgId, orgId), archived ? isNotNull(jobs.archivedAt) : isNull(jobs.archivedAt)))
-    .orderBy(desc(jobs.createdAt), desc(jobs.id))
+    // rowid breaks ties between rows written in the same millisecond, keeping insertion order.
+    .orderBy(desc(jobs.createdAt), desc(sql`${jobs}.rowid`))
     .all()
     .map(toJob);
 }

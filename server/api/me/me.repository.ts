@@ -1,4 +1,4 @@
-import { asc, eq } from 'drizzle-orm';
+import { asc, eq, sql } from 'drizzle-orm';
 import type { DbOrTx } from '@/db/client';
 import { memberships, organizations, users } from '@/db/schema';
 import type { Membership } from '@/shared/schemas/auth';
@@ -15,7 +15,7 @@ export function listMemberships(db: DbOrTx, userId: string): Membership[] {
     .from(memberships)
     .innerJoin(organizations, eq(organizations.id, memberships.orgId))
     .where(eq(memberships.userId, userId))
-    .orderBy(asc(memberships.createdAt), asc(memberships.id))
+    .orderBy(asc(memberships.createdAt), asc(sql`${memberships}.rowid`))
     .all();
 }
 

@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, isNull } from 'drizzle-orm';
+import { and, asc, desc, eq, isNull, sql } from 'drizzle-orm';
 import type { DbOrTx } from '@/db/client';
 import { newId } from '@/db/new-id';
 import { invitations, memberships, organizations, users } from '@/db/schema';
@@ -30,7 +30,7 @@ export function listMembers(db: DbOrTx, orgId: string): MemberRow[] {
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .where(eq(memberships.orgId, orgId))
-    .orderBy(asc(memberships.createdAt), asc(users.email))
+    .orderBy(asc(memberships.createdAt), asc(sql`${memberships}.rowid`))
     .all();
 }
 
@@ -50,7 +50,7 @@ export function listPendingInvitations(db: DbOrTx, orgId: string): InvitationRow
     .select(invitationRow)
     .from(invitations)
     .where(and(eq(invitations.orgId, orgId), isNull(invitations.acceptedAt)))
-    .orderBy(desc(invitations.createdAt))
+    .orderBy(desc(invitations.createdAt), desc(sql`${invitations}.rowid`))
     .all();
 }
 
