@@ -1,18 +1,11 @@
+import { loadDurationFactor } from '@/lib/calc/factors/load-duration';
 import type { LoadCombination, LoadType } from '@/lib/calc/types';
 import type { LoadStandard } from '@/shared/schemas/jobs';
-import { LOAD_DURATION_CD } from '@/lib/calc/loads/load-duration';
 
-/** C_D of a combination: the largest (shortest-duration) factor among the load types it carries. */
-function durationFactor(factors: Partial<Record<LoadType, number>>): number {
-  let cd = 0;
-  for (const type of Object.keys(factors) as LoadType[]) {
-    cd = Math.max(cd, LOAD_DURATION_CD[type]);
-  }
-  return cd;
-}
-
+/** A frozen combination whose C_D is that of its shortest-duration load (NDS Table 2.3.2). */
 function combination(name: string, factors: Partial<Record<LoadType, number>>): LoadCombination {
-  return Object.freeze({ name, factors: Object.freeze(factors), CD: durationFactor(factors) });
+  const CD = loadDurationFactor(Object.keys(factors) as LoadType[]);
+  return Object.freeze({ name, factors: Object.freeze(factors), CD });
 }
 
 /**

@@ -1,6 +1,5 @@
 export { buildMemberLoads } from '@/lib/calc/loads/build-member-loads';
 export { asdCombinations } from '@/lib/calc/loads/combinations';
-export { LOAD_DURATION_CD } from '@/lib/calc/loads/load-duration';
 export { CONTINUOUS_JOIST_FACTOR } from '@/lib/calc/loads/continuous-joist';
 export { roofAngleDeg, slopeToHorizontalFactor } from '@/lib/calc/loads/roof-slope';
 export type { MemberLoads, TakedownLine } from '@/lib/calc/loads/takedown-line';
