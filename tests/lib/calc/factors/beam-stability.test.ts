@@ -74,7 +74,7 @@ describe('beam stability factor C_L (NDS 2018 §3.3.3)', () => {
     const slender = beamStabilityFactor({
       bIn: 1.5,
       dIn: 11.25,
-      unbracedLengthIn: 240,
+      unbracedLengthIn: 360,
       loadCase: 'uniform',
       EminAdjPsi: 580_000,
       FbStarPsi: 900,
