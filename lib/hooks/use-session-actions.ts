@@ -3,7 +3,7 @@ import { useCallback } from 'react';
 import { useSWRConfig } from 'swr';
 import { setActiveOrgId } from '@/lib/api/active-org';
 import { signIn, signOut, signUp } from '@/lib/api/auth';
-import { isFirmScopedKey } from '@/lib/api/keys';
+import { isFirmScopedKey, keys } from '@/lib/api/keys';
 import { acceptInvitation } from '@/lib/api/orgs';
 import type { SignInInput, SignUpInput } from '@/shared/schemas/auth';
 import type { AcceptInvitationInput } from '@/shared/schemas/orgs';
@@ -44,12 +44,18 @@ export function useSessionActions() {
       },
       [refreshFirmData, router],
     ),
-    signOut: useCallback(async () => {
-      await signOut();
-      setActiveOrgId(null);
-      await mutate(isFirmScopedKey, undefined, { revalidate: false });
-      router.replace('/sign-in');
-    }, [mutate, router]),
+    /** Ends the session; `returnTo` (an in-app path) is where sign-in leads afterwards. */
+    signOut: useCallback(
+      async (returnTo?: string) => {
+        await signOut();
+        setActiveOrgId(null);
+        await mutate(isFirmScopedKey, undefined, { revalidate: false });
+        if (!returnTo) return router.replace('/sign-in');
+        router.replace(returnTo);
+        await mutate(keys.me(null));
+      },
+      [mutate, router],
+    ),
     switchFirm: useCallback(
       async (orgId: string) => {
         setActiveOrgId(orgId);

@@ -1,0 +1,121 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { ApiError } from '@/lib/api/client';
+import { useMe } from '@/lib/hooks/use-me';
+import { useSessionActions } from '@/lib/hooks/use-session-actions';
+import { useSubmit } from '@/lib/hooks/use-submit';
+import { spacing } from '@/lib/theme';
+import { fieldErrors } from '@/shared/errors';
+import { acceptInvitationSchema, type InvitationPreview } from '@/shared/schemas/orgs';
+import { Button } from './button';
+import { mergeFieldErrors } from './form-errors';
+import { LinkButton } from './link-button';
+import { LoadingView } from './loading-view';
+import { Notice } from './notice';
+import { Text } from './text';
+import { TextField } from './text-field';
+
+type Props = { token: string; preview: InvitationPreview };
+
+/** The action that fits who is looking: a new person sets a name and password; an existing one accepts. */
+export function AcceptInvitation({ token, preview }: Props) {
+  const { data: me, error: meError } = useMe();
+  const actions = useSessionActions();
+  const accept = useSubmit(actions.acceptInvitation);
+  const leave = useSubmit(actions.signOut);
+  const [name, setName] = useState('');
+  const [password, setPassword] = useState('');
+  const [clientErrors, setClientErrors] = useState<Record<string, string[]>>({});
+  const errors = mergeFieldErrors(clientErrors, accept.error);
+  const here = `/invite/${token}`;
+  const signedOut = meError instanceof ApiError && meError.status === 401;
+
+  if (!me && !meError) return <LoadingView />;
+
+  if (me && me.user.email === preview.email) {
+    return (
+      <View style={styles.form}>
+        {accept.error ? <Notice tone="error">{accept.error.message}</Notice> : null}
+        <Text>{`You are signed in as ${me.user.email}.`}</Text>
+        <Button
+          label={`Join ${preview.orgName}`}
+          testID="invite-accept"
+          busy={accept.busy}
+          onPress={() => void accept.run(token, {})}
+          block
+        />
+      </View>
+    );
+  }
+
+  if (me) {
+    return (
+      <View style={styles.form}>
+        <Notice tone="warning" title="Signed in as someone else">
+          {`You are signed in as ${me.user.email}, but this invitation is for ${preview.email}. Sign out, then open the link again.`}
+        </Notice>
+        <Button label="Sign out" variant="secondary" busy={leave.busy} onPress={() => void leave.run(here)} />
+      </View>
+    );
+  }
+
+  if (preview.hasAccount || !signedOut) {
+    return (
+      <View style={styles.form}>
+        <Text>{`${preview.email} already has a Tributary account. Sign in with it to accept.`}</Text>
+        <LinkButton
+          href={{ pathname: '/sign-in', params: { next: here } }}
+          label="Sign in to accept"
+          testID="invite-sign-in"
+          block
+        />
+      </View>
+    );
+  }
+
+  const submit = () => {
+    const parsed = acceptInvitationSchema.required().safeParse({ name, password });
+    setClientErrors(parsed.success ? {} : fieldErrors(parsed.error));
+    if (parsed.success) void accept.run(token, parsed.data);
+  };
+
+  return (
+    <View style={styles.form}>
+      {accept.error ? <Notice tone="error">{accept.error.message}</Notice> : null}
+      <TextField
+        label="E-mail"
+        value={preview.email}
+        editable={false}
+        hint="The invitation is for this address."
+      />
+      <TextField
+        label="Your name"
+        testID="invite-name"
+        value={name}
+        onChangeText={setName}
+        errors={errors.name}
+        autoComplete="name"
+      />
+      <TextField
+        label="Choose a password"
+        hint="At least 10 characters."
+        testID="invite-password"
+        value={password}
+        onChangeText={setPassword}
+        errors={errors.password}
+        autoComplete="new-password"
+        secureTextEntry
+        onSubmitEditing={submit}
+      />
+      <Button
+        label={`Join ${preview.orgName}`}
+        testID="invite-accept"
+        busy={accept.busy}
+        onPress={submit}
+        block
+      />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({ form: { gap: spacing.lg } });
