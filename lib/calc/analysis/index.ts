@@ -1,5 +1,22 @@
+/**
+ * Beam analysis: span models (simple span today), span states for fast superposition, diagram sampling.
+ * Reference: AWC Design Aid No. 6 (2007); AISC Manual Table 3-23; NDS 2018 §3.4.3.1.
+ */
 export type { DiagramSample, Extremum, ShearSide, SpanModel, SupportReaction } from './span-model';
-export { createSimpleSpan, type SimpleSpanInput } from './simple-span';
+export { createSimpleSpan, IN3_PER_FT3, type SimpleSpanInput } from './simple-span';
+export { simpleSpanBreakpoints, simpleSpanState } from './simple-span-state';
+export {
+  combineStates,
+  emptySpanState,
+  stateEiSlope,
+  stateEiY,
+  stateMaxEiDeflection,
+  stateMaxMoment,
+  stateMaxShear,
+  stateMomentLbFt,
+  stateShearLb,
+  type SpanState,
+} from './span-state';
 export { sampleDiagram } from './sample-diagram';
 export { loadsAwayFromSupports } from './loads-near-supports';
 export { findRoot } from './find-root';

@@ -1,0 +1,133 @@
+import type { BeamLoad } from '@/lib/calc/types';
+import { emptySpanState, type SpanState } from './span-state';
+import { splitSpanLoads, type PointPiece, type SpanLoads, type UniformPiece } from './span-loads';
+
+/**
+ * The breakpoints of a simple span under several load sets: 0, the span, every point load and every end of a
+ * partial uniform load, sorted and unique. States built on these breakpoints can be combined.
+ * @param spanFt design span, ft
+ * @param loadSets loads (ft, plf, lb), e.g. one set per load type
+ * @returns breakpoints, ft
+ * @throws CalcInputError for a load off the span
+ * @example simpleSpanBreakpoints(10, [[{ kind: 'point', pLb: 500, atFt: 4 }]]); // [0, 4, 10]
+ * Reference: AWC Design Aid No. 6 (2007) load cases.
+ */
+export function simpleSpanBreakpoints(
+  spanFt: number,
+  loadSets: readonly (readonly BeamLoad[])[],
+): Float64Array {
+  const xs = [0, spanFt];
+  for (const loads of loadSets) {
+    const { points, uniforms } = splitSpanLoads(spanFt, loads);
+    for (const p of points) xs.push(p.aFt);
+    for (const u of uniforms) xs.push(u.aFt, u.bFt);
+  }
+  xs.sort((a, b) => a - b);
+  return Float64Array.from(xs.filter((x, i) => i === 0 || x !== xs[i - 1]));
+}
+
+/**
+ * The response of a simple span (pinned left, roller right) to loads, stored at breakpoints. Each load's
+ * closed form is written with singularity (Macaulay) functions and superposed:
+ * V = R_A − ΣP⟨x−a⟩⁰ − Σw(⟨x−a⟩¹ − ⟨x−b⟩¹), M = ∫V, E·I·y'' = M with y(0) = y(L) = 0.
+ * @param spanFt design span, ft
+ * @param loads loads from the left support (ft, plf, lb)
+ * @param xs breakpoints, ft; default those of `loads`; must contain every breakpoint of `loads`
+ * @returns the span state (lb, lb·ft, lb·ft², lb·ft³, plf)
+ * @throws CalcInputError for a non-positive span or a load off the span
+ * @example stateMaxMoment(simpleSpanState(12, [{ kind: 'uniform', wPlf: 400 }])).value; // 7200 = wl²/8
+ * Reference: AWC Design Aid No. 6 (2007) cases 1, 4, 5, 7, 8, 9; AISC Manual Table 3-23.
+ */
+export function simpleSpanState(
+  spanFt: number,
+  loads: readonly BeamLoad[],
+  xs: Float64Array = simpleSpanBreakpoints(spanFt, [loads]),
+): SpanState {
+  const pieces = splitSpanLoads(spanFt, loads);
+  const { points, uniforms } = pieces;
+  const L = spanFt;
+  let totalLb = 0;
+  let aboutRightLbFt = 0;
+  for (const p of points) {
+    totalLb += p.pLb;
+    aboutRightLbFt += p.pLb * (L - p.aFt);
+  }
+  for (const u of uniforms) {
+    const wTotal = u.wPlf * (u.bFt - u.aFt);
+    totalLb += wTotal;
+    aboutRightLbFt += wTotal * (L - 0.5 * (u.aFt + u.bFt));
+  }
+  const rA = aboutRightLbFt / L;
+  const c1 = -eiYNoConstant(rA, pieces, L) / L;
+  const state = emptySpanState(L, xs);
+  state.reactionsLb[0] = rA;
+  state.reactionsLb[1] = totalLb - rA;
+  for (let i = 0; i < xs.length; i++) {
+    const x = xs[i];
+    state.vAfterLb[i] = shearAfter(rA, points, uniforms, x);
+    state.momentLbFt[i] = moment(rA, pieces, x);
+    state.eiSlope[i] = eiSlope(rA, pieces, x) + c1;
+    state.eiY[i] = eiYNoConstant(rA, pieces, x) + c1 * x;
+    if (i + 1 < xs.length) state.wPlf[i] = segmentLoad(uniforms, x, xs[i + 1]);
+  }
+  return state;
+}
+
+function shearAfter(
+  rA: number,
+  points: readonly PointPiece[],
+  uniforms: readonly UniformPiece[],
+  x: number,
+): number {
+  let v = rA;
+  for (const p of points) if (p.aFt <= x) v -= p.pLb;
+  for (const u of uniforms) if (x > u.aFt) v -= u.wPlf * (Math.min(x, u.bFt) - u.aFt);
+  return v;
+}
+
+function segmentLoad(uniforms: readonly UniformPiece[], x0: number, x1: number): number {
+  let w = 0;
+  for (const u of uniforms) if (u.aFt <= x0 && u.bFt >= x1) w += u.wPlf;
+  return w;
+}
+
+function moment(rA: number, { points, uniforms }: SpanLoads, x: number): number {
+  let m = rA * x;
+  for (const p of points) if (x > p.aFt) m -= p.pLb * (x - p.aFt);
+  for (const u of uniforms) {
+    const da = Math.max(0, x - u.aFt);
+    const db = Math.max(0, x - u.bFt);
+    m -= 0.5 * u.wPlf * (da * da - db * db);
+  }
+  return m;
+}
+
+/** E·I·y' without the integration constant, lb·ft². */
+function eiSlope(rA: number, { points, uniforms }: SpanLoads, x: number): number {
+  let s = (rA * x * x) / 2;
+  for (const p of points) {
+    const d = Math.max(0, x - p.aFt);
+    s -= (p.pLb * d * d) / 2;
+  }
+  for (const u of uniforms) {
+    const da = Math.max(0, x - u.aFt);
+    const db = Math.max(0, x - u.bFt);
+    s -= (u.wPlf * (da * da * da - db * db * db)) / 6;
+  }
+  return s;
+}
+
+/** E·I·y without the integration constant term, lb·ft³; y(0) = 0 by construction. */
+function eiYNoConstant(rA: number, { points, uniforms }: SpanLoads, x: number): number {
+  let y = (rA * x * x * x) / 6;
+  for (const p of points) {
+    const d = Math.max(0, x - p.aFt);
+    y -= (p.pLb * d * d * d) / 6;
+  }
+  for (const u of uniforms) {
+    const da = Math.max(0, x - u.aFt);
+    const db = Math.max(0, x - u.bFt);
+    y -= (u.wPlf * (da * da * da * da - db * db * db * db)) / 24;
+  }
+  return y;
+}

@@ -1,0 +1,218 @@
+import { findRoot } from './find-root';
+import type { Extremum, ShearSide } from './span-model';
+
+/**
+ * A span's response stored at its breakpoints (supports, point loads, ends of partial loads): shear just after
+ * each breakpoint, moment, E·I·slope and E·I·deflection there, and the uniform load on each segment. Inside a
+ * segment the response is an exact polynomial in t = x − x_i (V = V_i − w·t, M = M_i + V_i·t − w·t²/2, and so
+ * on), so any value or extreme comes from the stored numbers alone. Responses are linear in the loads, so
+ * states of load groups on the same breakpoints combine by weighted sums (`combineStates`): that is how one
+ * set of load groups serves every load combination and every member size without a new analysis.
+ *
+ * Units: x in ft, shear lb, moment lb·ft, E·I·slope lb·ft², E·I·y lb·ft³ (y upward, so sagging is negative),
+ * w plf. Arrays are indexed by breakpoint (wPlf by segment, one shorter).
+ */
+export interface SpanState {
+  readonly spanFt: number;
+  readonly xs: Float64Array;
+  readonly vAfterLb: Float64Array;
+  readonly momentLbFt: Float64Array;
+  readonly eiSlope: Float64Array;
+  readonly eiY: Float64Array;
+  readonly wPlf: Float64Array;
+  /** Left and right support reactions, lb upward. */
+  readonly reactionsLb: Float64Array;
+}
+
+/**
+ * A state of zeros on the given breakpoints, to be filled by `combineStates`.
+ * @param spanFt design span, ft; xs breakpoints, ft, sorted, xs[0] = 0 and the last = spanFt
+ * @example const scratch = emptySpanState(12, new Float64Array([0, 12]));
+ * Reference: AWC Design Aid No. 6 (2007) — superposition of load cases on a simple beam.
+ */
+export function emptySpanState(spanFt: number, xs: Float64Array): SpanState {
+  const n = xs.length;
+  return {
+    spanFt,
+    xs,
+    vAfterLb: new Float64Array(n),
+    momentLbFt: new Float64Array(n),
+    eiSlope: new Float64Array(n),
+    eiY: new Float64Array(n),
+    wPlf: new Float64Array(n - 1),
+    reactionsLb: new Float64Array(2),
+  };
+}
+
+/**
+ * target = Σ coeffs[k] · states[k], all on the same breakpoints (the target's xs).
+ * @param target state to overwrite (its arrays are reused, no allocation)
+ * @param states states on the same breakpoints
+ * @param coeffs dimensionless factors, one per state
+ * @returns target
+ * @example combineStates(scratch, [dead, live], [1, 0.75]);
+ * Reference: AWC Design Aid No. 6 (2007) — superposition; ASCE 7 §2.4.1 load combinations.
+ */
+export function combineStates(
+  target: SpanState,
+  states: readonly SpanState[],
+  coeffs: readonly number[],
+): SpanState {
+  const arrays = ['vAfterLb', 'momentLbFt', 'eiSlope', 'eiY', 'wPlf', 'reactionsLb'] as const;
+  for (const key of arrays) {
+    const out = target[key];
+    out.fill(0);
+    for (let k = 0; k < states.length; k++) {
+      const c = coeffs[k];
+      if (c === 0) continue;
+      const src = states[k][key];
+      for (let i = 0; i < out.length; i++) out[i] += c * src[i];
+    }
+  }
+  return target;
+}
+
+/** Index of the segment holding x (the last segment for x at or past the right end). */
+function segmentOf(xs: Float64Array, x: number): number {
+  let lo = 0;
+  let hi = xs.length - 2;
+  while (lo < hi) {
+    const mid = (lo + hi + 1) >> 1;
+    if (xs[mid] <= x) lo = mid;
+    else hi = mid - 1;
+  }
+  return lo;
+}
+
+/**
+ * Shear at x, lb. At a point load `side` picks just before or just after it; at the supports the value just
+ * inside the span is returned.
+ * @example stateShearLb(state, 3, 'after');
+ * Reference: AWC Design Aid No. 6 (2007), shear diagrams.
+ */
+export function stateShearLb(s: SpanState, x: number, side: ShearSide = 'after'): number {
+  const { xs } = s;
+  let i = segmentOf(xs, x);
+  if (side === 'before' && i > 0 && x === xs[i]) i -= 1;
+  const t = Math.min(Math.max(x, xs[i]), xs[i + 1]) - xs[i];
+  return s.vAfterLb[i] - s.wPlf[i] * t;
+}
+
+/**
+ * Moment at x, lb·ft, sagging positive.
+ * @example stateMomentLbFt(state, 6);
+ * Reference: AWC Design Aid No. 6 (2007), moment diagrams.
+ */
+export function stateMomentLbFt(s: SpanState, x: number): number {
+  const i = segmentOf(s.xs, x);
+  const t = x - s.xs[i];
+  return s.momentLbFt[i] + s.vAfterLb[i] * t - (s.wPlf[i] * t * t) / 2;
+}
+
+/**
+ * E·I·slope at x, lb·ft² (y upward).
+ * @example stateEiSlope(state, 0);
+ * Reference: elastic curve E·I·y'' = M (AWC Design Aid No. 6, 2007).
+ */
+export function stateEiSlope(s: SpanState, x: number): number {
+  const i = segmentOf(s.xs, x);
+  return eiSlopeIn(s, i, x - s.xs[i]);
+}
+
+/**
+ * E·I·y at x, lb·ft³ (y upward: a sagging beam gives negative values).
+ * @example -stateEiY(state, 6) * 1728 / eiLbIn2; // downward deflection in in
+ * Reference: elastic curve E·I·y'' = M (AWC Design Aid No. 6, 2007).
+ */
+export function stateEiY(s: SpanState, x: number): number {
+  const i = segmentOf(s.xs, x);
+  return eiYIn(s, i, x - s.xs[i]);
+}
+
+function eiSlopeIn(s: SpanState, i: number, t: number): number {
+  return s.eiSlope[i] + s.momentLbFt[i] * t + (s.vAfterLb[i] * t * t) / 2 - (s.wPlf[i] * t * t * t) / 6;
+}
+
+function eiYIn(s: SpanState, i: number, t: number): number {
+  const t2 = t * t;
+  return (
+    s.eiY[i] +
+    s.eiSlope[i] * t +
+    (s.momentLbFt[i] * t2) / 2 +
+    (s.vAfterLb[i] * t2 * t) / 6 -
+    (s.wPlf[i] * t2 * t2) / 24
+  );
+}
+
+/**
+ * Largest |shear| (signed value, lb) and where: shear is linear between breakpoints, so the extreme sits at
+ * one side of a breakpoint.
+ * @example stateMaxShear(state).value;
+ * Reference: AWC Design Aid No. 6 (2007).
+ */
+export function stateMaxShear(s: SpanState): Extremum {
+  let best: Extremum = { value: 0, atFt: 0 };
+  for (let i = 0; i + 1 < s.xs.length; i++) {
+    const after = s.vAfterLb[i];
+    const before = after - s.wPlf[i] * (s.xs[i + 1] - s.xs[i]);
+    if (Math.abs(after) > Math.abs(best.value)) best = { value: after, atFt: s.xs[i] };
+    if (Math.abs(before) > Math.abs(best.value)) best = { value: before, atFt: s.xs[i + 1] };
+  }
+  return best;
+}
+
+/**
+ * Largest |moment| (signed value, lb·ft) and where: at a breakpoint, or where the shear crosses zero inside
+ * a segment, solved exactly (t = V_i / w, M = M_i + V_i²/2w).
+ * @example stateMaxMoment(state).atFt;
+ * Reference: AWC Design Aid No. 6 (2007) — maximum moment where the shear is zero.
+ */
+export function stateMaxMoment(s: SpanState): Extremum {
+  const { xs } = s;
+  let best: Extremum = { value: s.momentLbFt[0], atFt: 0 };
+  for (let i = 0; i + 1 < xs.length; i++) {
+    const next = s.momentLbFt[i + 1];
+    if (Math.abs(next) > Math.abs(best.value)) best = { value: next, atFt: xs[i + 1] };
+    const v0 = s.vAfterLb[i];
+    const w = s.wPlf[i];
+    const v1 = v0 - w * (xs[i + 1] - xs[i]);
+    if ((v0 > 0 && v1 < 0) || (v0 < 0 && v1 > 0)) {
+      const t = v0 / w;
+      const m = s.momentLbFt[i] + (v0 * v0) / (2 * w);
+      if (Math.abs(m) > Math.abs(best.value)) best = { value: m, atFt: xs[i] + t };
+    }
+  }
+  return best;
+}
+
+/** Sub-intervals per segment when looking for a zero slope (the slope is a cubic inside a segment). */
+const SLOPE_SCAN_STEPS = 4;
+
+/**
+ * Largest |E·I·deflection| as a downward value (lb·ft³) and where: found where the slope is zero, solved by
+ * bisection on the segment's cubic to 1e-12 of the span. Divide by E·I in lb·ft² for ft, or take
+ * 1728 · value / (E·I in lb·in²) for in.
+ * @example 1728 * stateMaxEiDeflection(state).value / eiLbIn2; // in
+ * Reference: AWC Design Aid No. 6 (2007) — maximum deflection where the slope is zero.
+ */
+export function stateMaxEiDeflection(s: SpanState): Extremum {
+  const { xs } = s;
+  let best: Extremum = { value: 0, atFt: s.spanFt / 2 };
+  for (let i = 0; i + 1 < xs.length; i++) {
+    const step = (xs[i + 1] - xs[i]) / SLOPE_SCAN_STEPS;
+    let tLo = 0;
+    let sLo = eiSlopeIn(s, i, 0);
+    for (let k = 1; k <= SLOPE_SCAN_STEPS; k++) {
+      const tHi = k === SLOPE_SCAN_STEPS ? xs[i + 1] - xs[i] : k * step;
+      const sHi = eiSlopeIn(s, i, tHi);
+      if ((sLo <= 0 && sHi >= 0) || (sLo >= 0 && sHi <= 0)) {
+        const t = findRoot((tt) => eiSlopeIn(s, i, tt), tLo, tHi, (1e-12 * s.spanFt) / Math.max(tHi, 1e-300));
+        const down = -eiYIn(s, i, t);
+        if (Math.abs(down) > Math.abs(best.value)) best = { value: down, atFt: xs[i] + t };
+      }
+      tLo = tHi;
+      sLo = sHi;
+    }
+  }
+  return best;
+}
