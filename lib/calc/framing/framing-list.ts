@@ -12,6 +12,7 @@ export interface FramingLine {
   note: string;
 }
 
+/** Output of buildFramingList: the lines to cut and buy, the header length (in), warnings and notes. */
 export interface FramingList {
   lines: FramingLine[];
   /** Header length: RO width plus the jacks under both ends, in. */

@@ -2,5 +2,6 @@ export { buildMemberLoads } from '@/lib/calc/loads/build-member-loads';
 export { asdCombinations } from '@/lib/calc/loads/combinations';
 export { CONTINUOUS_JOIST_FACTOR } from '@/lib/calc/loads/continuous-joist';
 export { roofAngleDeg, slopeToHorizontalFactor } from '@/lib/calc/loads/roof-slope';
+/** Output types of the load takedown (see takedown-line.ts). */
 export type { MemberLoads, TakedownLine } from '@/lib/calc/loads/takedown-line';
 export { LOAD_DEFAULTS, type LoadDefault } from '@/lib/calc/loads/defaults';

@@ -16,6 +16,7 @@ const REFERENCE = 'IRC 2021 R602.7.4 (R602.7.2 in earlier editions): nonbearing 
  */
 export type NonbearingVerdict = 'flat-2x4' | 'header-on-edge' | 'bearing-header' | 'engineer';
 
+/** Output of nonbearingHeader. */
 export interface NonbearingHeaderResult {
   verdict: NonbearingVerdict;
   /** One sentence saying what to frame. */

@@ -6,11 +6,14 @@ import {
   MIXED,
   mixedNumberValue,
   normalizeEntry,
+  shown,
   type NumberProblem,
 } from '@/lib/calc/units/number-text';
 
+/** Unit a bare number takes in a length field ('ft' or 'in'); defined by shared/schemas/calc/units. */
 export type { LengthUnit };
 
+/** Options of parseLength: the unit of a bare number and the field's name for messages. */
 export interface ParseLengthOptions {
   /** Unit of a bare number; default 'in'. */
   defaultUnit?: LengthUnit;
@@ -101,10 +104,4 @@ function problemText(problem: NumberProblem, text: string): string {
   if (problem === 'improper-fraction')
     return `the fraction in "${shown(text)}" should be under 1, e.g. 6 1/2`;
   return `"${shown(text)}" is too large`;
-}
-
-/** The typed text as quoted in a message: trimmed and cut to 40 characters. */
-export function shown(text: string): string {
-  const trimmed = text.trim();
-  return trimmed.length > 40 ? `${trimmed.slice(0, 40)}…` : trimmed;
 }

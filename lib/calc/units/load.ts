@@ -1,11 +1,12 @@
 import { unit } from 'mathjs';
 import { CalcInputError } from '@/lib/calc/types';
 import type { LoadKind } from '@/shared/schemas/calc/units';
-import { shown } from '@/lib/calc/units/length';
-import { DECIMAL, normalizeEntry } from '@/lib/calc/units/number-text';
+import { DECIMAL, normalizeEntry, shown } from '@/lib/calc/units/number-text';
 
+/** What a load field holds ('psf', 'plf' or 'lb'); defined by shared/schemas/calc/units. */
 export type { LoadKind };
 
+/** Options of parseLoad: the field's name for messages. */
 export interface ParseLoadOptions {
   /** Field name for messages ("Roof dead load"); default the field path. */
   label?: string;

@@ -1,9 +1,15 @@
 /**
- * Number patterns shared by the length and load parsers (source text for RegExp). A decimal is "13",
- * "13.5" or ".5"; a fraction "1/2"; a mixed number "6 1/2", "6-1/2", a fraction or a decimal.
+ * RegExp source of an unsigned decimal: "13", "13.5", ".5".
+ * @example new RegExp(`^${DECIMAL}$`).test('13.5') // true
+ * Reference: input convention (no standard).
  */
 export const DECIMAL = String.raw`(?:\d+(?:\.\d*)?|\.\d+)`;
 const FRACTION = String.raw`\d+\s*/\s*\d+`;
+/**
+ * RegExp source of a mixed number: "6 1/2", "6-1/2", a lone fraction "3/4" or a decimal.
+ * @example new RegExp(`^${MIXED}$`).test('6-1/2') // true
+ * Reference: tape-measure notation (common practice).
+ */
 export const MIXED = String.raw`(?:${DECIMAL}(?:\s+|\s*-\s*)${FRACTION}|${FRACTION}|${DECIMAL})`;
 
 /** What went wrong reading a number, for the caller's message. */
@@ -52,4 +58,14 @@ export function normalizeEntry(text: string): string {
     .replace(/''/g, '"')
     .replace(/(\d),(?=\d{3}(?:\D|$))/g, '$1')
     .replace(/\s+/g, ' ');
+}
+
+/**
+ * The typed text as quoted in a message: trimmed and cut to 40 characters.
+ * @example shown('  13x  ') // "13x"
+ * Reference: message convention (no standard).
+ */
+export function shown(text: string): string {
+  const trimmed = text.trim();
+  return trimmed.length > 40 ? `${trimmed.slice(0, 40)}…` : trimmed;
 }
