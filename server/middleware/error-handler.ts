@@ -17,13 +17,13 @@ function isBodyParserError(error: unknown): error is { type: string; status: num
   return typeof error === 'object' && error !== null && 'type' in error && 'status' in error;
 }
 
+/** Drizzle wraps driver errors (`DrizzleQueryError`), so the SQLite code may sit on a `cause`. */
 function isUniqueViolation(error: unknown): boolean {
-  return (
-    typeof error === 'object' &&
-    error !== null &&
-    'code' in error &&
-    error.code === 'SQLITE_CONSTRAINT_UNIQUE'
-  );
+  for (let current = error; typeof current === 'object' && current !== null; current = current.cause) {
+    if ('code' in current && current.code === 'SQLITE_CONSTRAINT_UNIQUE') return true;
+    if (!('cause' in current)) return false;
+  }
+  return false;
 }
 
 function describe(error: unknown): { status: number; body: ApiErrorBody } {

@@ -1,0 +1,44 @@
+import { describe, expect, it } from 'vitest';
+import { loadEnv } from '@/server/env';
+
+describe('loadEnv', () => {
+  it('fills the documented defaults', () => {
+    const env = loadEnv({});
+    expect(env).toMatchObject({
+      NODE_ENV: 'development',
+      PORT: 8080,
+      HOST: '127.0.0.1',
+      DATABASE_URL: 'file:data/tributary.db',
+      APP_ORIGIN: 'http://127.0.0.1:8080',
+      SESSION_DAYS: 30,
+      SEED_DEMO: '1',
+    });
+    expect(env.SMTP_HOST).toBeUndefined();
+  });
+
+  it('reads numbers from strings and drops a trailing slash from APP_ORIGIN', () => {
+    const env = loadEnv({
+      PORT: '3000',
+      SESSION_DAYS: '7',
+      APP_ORIGIN: 'https://app.example.test/',
+      SMTP_PORT: '2525',
+    });
+    expect([env.PORT, env.SESSION_DAYS, env.APP_ORIGIN, env.SMTP_PORT]).toEqual([
+      3000,
+      7,
+      'https://app.example.test',
+      2525,
+    ]);
+  });
+
+  it('names every bad variable', () => {
+    expect(() => loadEnv({ PORT: 'eighty', NODE_ENV: 'staging' })).toThrow(
+      /PORT[\s\S]*NODE_ENV|NODE_ENV[\s\S]*PORT/,
+    );
+  });
+
+  it('requires a real SMTP server in production', () => {
+    expect(() => loadEnv({ NODE_ENV: 'production' })).toThrow(/SMTP_HOST/);
+    expect(loadEnv({ NODE_ENV: 'production', SMTP_HOST: 'smtp.example.test' }).NODE_ENV).toBe('production');
+  });
+});

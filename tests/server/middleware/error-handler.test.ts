@@ -1,0 +1,60 @@
+import express from 'express';
+import request from 'supertest';
+import { describe, expect, it } from 'vitest';
+import { CalcInputError } from '@/lib/calc/types';
+import { AppError } from '@/server/app-error';
+import { errorHandler } from '@/server/middleware/error-handler';
+
+function appThrowing(error: unknown, logged: string[] = []) {
+  const app = express();
+  app.get('/boom', () => {
+    throw error;
+  });
+  app.use(errorHandler((line) => logged.push(line)));
+  return app;
+}
+
+describe('error handler', () => {
+  it('answers an unexpected error with a bare 500: the stack goes to the log, not the client', async () => {
+    const logged: string[] = [];
+    const res = await request(appThrowing(new Error('secret path /etc/tributary.db'), logged)).get('/boom');
+    expect(res.status).toBe(500);
+    expect(res.body).toEqual({ error: { code: 'internal', message: 'Something went wrong on our side' } });
+    expect(res.text).not.toContain('secret');
+    expect(logged.join('\n')).toContain('secret path /etc/tributary.db');
+    expect(logged.join('\n')).toContain('at ');
+  });
+
+  it('turns a CalcInputError into 400 with that field', async () => {
+    const res = await request(appThrowing(new CalcInputError('spanFt', 'Span must be above 0'))).get('/boom');
+    expect(res.status).toBe(400);
+    expect(res.body).toEqual({
+      error: {
+        code: 'bad_request',
+        message: 'Span must be above 0',
+        fields: { spanFt: ['Span must be above 0'] },
+      },
+    });
+  });
+
+  it.each([
+    ['unauthorized', 401],
+    ['forbidden', 403],
+    ['not_found', 404],
+    ['conflict', 409],
+    ['rate_limited', 429],
+  ] as const)('maps AppError %s to %i', async (code, status) => {
+    const res = await request(appThrowing(new AppError(code, 'message'))).get('/boom');
+    expect(res.status).toBe(status);
+    expect(res.body.error.code).toBe(code);
+  });
+
+  it('maps a unique-constraint race to 409 instead of 500', async () => {
+    const error = Object.assign(new Error('UNIQUE constraint failed: users.email'), {
+      code: 'SQLITE_CONSTRAINT_UNIQUE',
+    });
+    const res = await request(appThrowing(error)).get('/boom');
+    expect(res.status).toBe(409);
+    expect(res.text).not.toContain('users.email');
+  });
+});
