@@ -50,7 +50,7 @@ export function createApp(options: AppOptions): Express {
       sessions,
       appOrigin: options.appOrigin,
       signInLimit: options.signInLimit ?? DEFAULT_SIGN_IN_LIMIT,
-      devMail: (options.devMail ?? !production) && !production,
+      devMail: !production && (options.devMail ?? true),
     }),
   );
 

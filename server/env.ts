@@ -24,7 +24,7 @@ const envSchema = z
 export type Env = z.infer<typeof envSchema>;
 
 /** Reads and checks the environment once; the only module that touches `process.env`. */
-export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
+export function loadEnv(source: Record<string, string | undefined> = process.env): Env {
   const parsed = envSchema.safeParse(source);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((issue) => `  ${issue.path.join('.')}: ${issue.message}`);

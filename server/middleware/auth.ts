@@ -71,9 +71,14 @@ export function requireRole(...roles: Role[]): RequestHandler {
   };
 }
 
-/** Opens a new session for `userId` and sets its cookie on the response. */
+/**
+ * Opens a new session for `userId` and sets its cookie. A session the request already carried is ended
+ * first, so signing in never keeps an older session id alive in this browser.
+ */
 export async function startSession(sessions: Sessions, res: Response, userId: string): Promise<void> {
+  if (res.locals.session) await sessions.invalidateSession(res.locals.session.id);
   const session = await sessions.createSession(userId, {});
+  res.locals.session = session;
   res.append('Set-Cookie', sessions.createSessionCookie(session.id).serialize());
 }
 

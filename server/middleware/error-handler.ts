@@ -19,9 +19,10 @@ function isBodyParserError(error: unknown): error is { type: string; status: num
 
 /** Drizzle wraps driver errors (`DrizzleQueryError`), so the SQLite code may sit on a `cause`. */
 function isUniqueViolation(error: unknown): boolean {
-  for (let current = error; typeof current === 'object' && current !== null; current = current.cause) {
+  let current = error;
+  while (typeof current === 'object' && current !== null) {
     if ('code' in current && current.code === 'SQLITE_CONSTRAINT_UNIQUE') return true;
-    if (!('cause' in current)) return false;
+    current = 'cause' in current ? current.cause : undefined;
   }
   return false;
 }

@@ -160,3 +160,15 @@ describe('sessions', () => {
     expect(apiErrorBodySchema.parse(res.body).error.code).toBe('unauthorized');
   });
 });
+
+describe('signing in again', () => {
+  it('ends the session the browser already had', async () => {
+    const { agent, body, me } = await signedUpAgent(server.app);
+    const [first] = server.db.select().from(sessions).where(eq(sessions.userId, me.user.id)).all();
+    await agent.post('/api/auth/sign-in').send({ email: body.email, password: body.password }).expect(200);
+    const rows = server.db.select().from(sessions).where(eq(sessions.userId, me.user.id)).all();
+    expect(rows).toHaveLength(1);
+    expect(rows[0].id).not.toBe(first.id);
+    await agent.get('/api/me').expect(200);
+  });
+});
