@@ -13,14 +13,16 @@ function toJob(row: typeof jobs.$inferSelect): Job {
 }
 
 export function listJobs(db: DbOrTx, orgId: string, archived: boolean): Job[] {
-  return db
-    .select()
-    .from(jobs)
-    .where(and(eq(jobs.orgId, orgId), archived ? isNotNull(jobs.archivedAt) : isNull(jobs.archivedAt)))
-    // rowid breaks ties between rows written in the same millisecond, keeping insertion order.
-    .orderBy(desc(jobs.createdAt), desc(sql`${jobs}.rowid`))
-    .all()
-    .map(toJob);
+  return (
+    db
+      .select()
+      .from(jobs)
+      .where(and(eq(jobs.orgId, orgId), archived ? isNotNull(jobs.archivedAt) : isNull(jobs.archivedAt)))
+      // rowid breaks ties between rows written in the same millisecond, keeping insertion order.
+      .orderBy(desc(jobs.createdAt), desc(sql`${jobs}.rowid`))
+      .all()
+      .map(toJob)
+  );
 }
 
 /** Only a job of `orgId`: another firm's id reads as missing. */
