@@ -12,10 +12,7 @@ import { splitSpanLoads, type PointPiece, type SpanLoads, type UniformPiece } fr
  * @example simpleSpanBreakpoints(10, [[{ kind: 'point', pLb: 500, atFt: 4 }]]); // [0, 4, 10]
  * Reference: AWC Design Aid No. 6 (2007) load cases.
  */
-export function simpleSpanBreakpoints(
-  spanFt: number,
-  loadSets: readonly (readonly BeamLoad[])[],
-): Float64Array {
+export function simpleSpanBreakpoints(spanFt: number, loadSets: readonly (readonly BeamLoad[])[]): number[] {
   const xs = [0, spanFt];
   for (const loads of loadSets) {
     const { points, uniforms } = splitSpanLoads(spanFt, loads);
@@ -23,7 +20,7 @@ export function simpleSpanBreakpoints(
     for (const u of uniforms) xs.push(u.aFt, u.bFt);
   }
   xs.sort((a, b) => a - b);
-  return Float64Array.from(xs.filter((x, i) => i === 0 || x !== xs[i - 1]));
+  return xs.filter((x, i) => i === 0 || x !== xs[i - 1]);
 }
 
 /**
@@ -41,7 +38,7 @@ export function simpleSpanBreakpoints(
 export function simpleSpanState(
   spanFt: number,
   loads: readonly BeamLoad[],
-  xs: Float64Array = simpleSpanBreakpoints(spanFt, [loads]),
+  xs: readonly number[] = simpleSpanBreakpoints(spanFt, [loads]),
 ): SpanState {
   const pieces = splitSpanLoads(spanFt, loads);
   const { points, uniforms } = pieces;

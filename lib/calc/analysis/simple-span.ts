@@ -8,6 +8,7 @@ import {
   stateMaxShear,
   stateMomentLbFt,
   stateShearLb,
+  type SpanState,
 } from './span-state';
 
 /** Inputs of a simple span: design span ft, loads from the left support, stiffness E·I in lb·in². */
@@ -39,11 +40,22 @@ export const IN3_PER_FT3 = 12 * 12 * 12;
  * Reference: AWC Design Aid No. 6 (2007), simple beam cases 1, 4, 5, 7, 8, 9; AISC Manual Table 3-23.
  */
 export function createSimpleSpan(input: SimpleSpanInput): SpanModel {
-  const { eiLbIn2 } = input;
+  return spanModelFromState(simpleSpanState(input.spanFt, input.loads), input.eiLbIn2);
+}
+
+/**
+ * Wraps a span state (for instance one load combination built by `combineStates`) as a SpanModel.
+ * @param state span state (ft, lb, lb·ft, lb·ft², lb·ft³)
+ * @param eiLbIn2 E (psi) × I (in⁴), lb·in²
+ * @returns a SpanModel: shear lb, moment lb·ft, deflection in (downward positive)
+ * @throws CalcInputError for a non-positive stiffness
+ * @example spanModelFromState(simpleSpanState(10, [{ kind: 'uniform', wPlf: 100 }]), 7.6e7).maxMoment().value; // 1250
+ * Reference: AWC Design Aid No. 6 (2007).
+ */
+export function spanModelFromState(state: SpanState, eiLbIn2: number): SpanModel {
   if (!Number.isFinite(eiLbIn2) || eiLbIn2 <= 0) {
     throw new CalcInputError('eiLbIn2', 'The stiffness E·I must be above 0');
   }
-  const state = simpleSpanState(input.spanFt, input.loads);
   const toIn = IN3_PER_FT3 / eiLbIn2;
   let maxShear: Extremum | undefined;
   let maxMoment: Extremum | undefined;
@@ -57,7 +69,7 @@ export function createSimpleSpan(input: SimpleSpanInput): SpanModel {
     shearLb: (x, side) => stateShearLb(state, x, side),
     momentLbFt: (x) => stateMomentLbFt(state, x),
     deflectionIn: (x) => -stateEiY(state, x) * toIn,
-    breakpointsFt: () => Array.from(state.xs),
+    breakpointsFt: () => state.xs,
     maxShear: () => (maxShear ??= stateMaxShear(state)),
     maxMoment: () => (maxMoment ??= stateMaxMoment(state)),
     maxDeflection: () => {

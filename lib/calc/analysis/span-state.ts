@@ -1,4 +1,3 @@
-import { findRoot } from './find-root';
 import type { Extremum, ShearSide } from './span-model';
 
 /**
@@ -14,33 +13,33 @@ import type { Extremum, ShearSide } from './span-model';
  */
 export interface SpanState {
   readonly spanFt: number;
-  readonly xs: Float64Array;
-  readonly vAfterLb: Float64Array;
-  readonly momentLbFt: Float64Array;
-  readonly eiSlope: Float64Array;
-  readonly eiY: Float64Array;
-  readonly wPlf: Float64Array;
+  readonly xs: readonly number[];
+  readonly vAfterLb: number[];
+  readonly momentLbFt: number[];
+  readonly eiSlope: number[];
+  readonly eiY: number[];
+  readonly wPlf: number[];
   /** Left and right support reactions, lb upward. */
-  readonly reactionsLb: Float64Array;
+  readonly reactionsLb: number[];
 }
 
 /**
  * A state of zeros on the given breakpoints, to be filled by `combineStates`.
  * @param spanFt design span, ft; xs breakpoints, ft, sorted, xs[0] = 0 and the last = spanFt
- * @example const scratch = emptySpanState(12, new Float64Array([0, 12]));
+ * @example const scratch = emptySpanState(12, [0, 12]);
  * Reference: AWC Design Aid No. 6 (2007) — superposition of load cases on a simple beam.
  */
-export function emptySpanState(spanFt: number, xs: Float64Array): SpanState {
+export function emptySpanState(spanFt: number, xs: readonly number[]): SpanState {
   const n = xs.length;
   return {
     spanFt,
     xs,
-    vAfterLb: new Float64Array(n),
-    momentLbFt: new Float64Array(n),
-    eiSlope: new Float64Array(n),
-    eiY: new Float64Array(n),
-    wPlf: new Float64Array(n - 1),
-    reactionsLb: new Float64Array(2),
+    vAfterLb: new Array<number>(n).fill(0),
+    momentLbFt: new Array<number>(n).fill(0),
+    eiSlope: new Array<number>(n).fill(0),
+    eiY: new Array<number>(n).fill(0),
+    wPlf: new Array<number>(n - 1).fill(0),
+    reactionsLb: [0, 0],
   };
 }
 
@@ -58,22 +57,36 @@ export function combineStates(
   states: readonly SpanState[],
   coeffs: readonly number[],
 ): SpanState {
-  const arrays = ['vAfterLb', 'momentLbFt', 'eiSlope', 'eiY', 'wPlf', 'reactionsLb'] as const;
-  for (const key of arrays) {
-    const out = target[key];
-    out.fill(0);
-    for (let k = 0; k < states.length; k++) {
-      const c = coeffs[k];
-      if (c === 0) continue;
-      const src = states[k][key];
-      for (let i = 0; i < out.length; i++) out[i] += c * src[i];
+  const n = target.xs.length;
+  const { vAfterLb, momentLbFt, eiSlope, eiY, wPlf, reactionsLb } = target;
+  for (let i = 0; i < n; i++) {
+    vAfterLb[i] = 0;
+    momentLbFt[i] = 0;
+    eiSlope[i] = 0;
+    eiY[i] = 0;
+  }
+  for (let i = 0; i + 1 < n; i++) wPlf[i] = 0;
+  reactionsLb[0] = 0;
+  reactionsLb[1] = 0;
+  for (let k = 0; k < states.length; k++) {
+    const c = coeffs[k];
+    if (c === 0) continue;
+    const src = states[k];
+    for (let i = 0; i < n; i++) {
+      vAfterLb[i] += c * src.vAfterLb[i];
+      momentLbFt[i] += c * src.momentLbFt[i];
+      eiSlope[i] += c * src.eiSlope[i];
+      eiY[i] += c * src.eiY[i];
     }
+    for (let i = 0; i + 1 < n; i++) wPlf[i] += c * src.wPlf[i];
+    reactionsLb[0] += c * src.reactionsLb[0];
+    reactionsLb[1] += c * src.reactionsLb[1];
   }
   return target;
 }
 
 /** Index of the segment holding x (the last segment for x at or past the right end). */
-function segmentOf(xs: Float64Array, x: number): number {
+function segmentOf(xs: readonly number[], x: number): number {
   let lo = 0;
   let hi = xs.length - 2;
   while (lo < hi) {
@@ -187,32 +200,61 @@ export function stateMaxMoment(s: SpanState): Extremum {
 
 /** Sub-intervals per segment when looking for a zero slope (the slope is a cubic inside a segment). */
 const SLOPE_SCAN_STEPS = 4;
+/** Newton steps before the search gives up refining (it converges in a handful). */
+const MAX_NEWTON_STEPS = 60;
 
 /**
- * Largest |E·I·deflection| as a downward value (lb·ft³) and where: found where the slope is zero, solved by
- * bisection on the segment's cubic to 1e-12 of the span. Divide by E·I in lb·ft² for ft, or take
+ * Largest |E·I·deflection| as a downward value (lb·ft³) and where: found where the slope is zero, solved on
+ * the segment's cubic by Newton's method kept inside a sign-change bracket (the slope's derivative is the
+ * moment, known exactly), to 1e-12 of the span. Divide by E·I in lb·ft² for ft, or take
  * 1728 · value / (E·I in lb·in²) for in.
  * @example 1728 * stateMaxEiDeflection(state).value / eiLbIn2; // in
  * Reference: AWC Design Aid No. 6 (2007) — maximum deflection where the slope is zero.
  */
 export function stateMaxEiDeflection(s: SpanState): Extremum {
   const { xs } = s;
-  let best: Extremum = { value: 0, atFt: s.spanFt / 2 };
+  const tol = 1e-12 * s.spanFt;
+  let bestValue = 0;
+  let bestAt = s.spanFt / 2;
   for (let i = 0; i + 1 < xs.length; i++) {
-    const step = (xs[i + 1] - xs[i]) / SLOPE_SCAN_STEPS;
+    const h = xs[i + 1] - xs[i];
     let tLo = 0;
     let sLo = eiSlopeIn(s, i, 0);
     for (let k = 1; k <= SLOPE_SCAN_STEPS; k++) {
-      const tHi = k === SLOPE_SCAN_STEPS ? xs[i + 1] - xs[i] : k * step;
+      const tHi = k === SLOPE_SCAN_STEPS ? h : (k * h) / SLOPE_SCAN_STEPS;
       const sHi = eiSlopeIn(s, i, tHi);
       if ((sLo <= 0 && sHi >= 0) || (sLo >= 0 && sHi <= 0)) {
-        const t = findRoot((tt) => eiSlopeIn(s, i, tt), tLo, tHi, (1e-12 * s.spanFt) / Math.max(tHi, 1e-300));
+        const t = slopeZero(s, i, tLo, sLo, tHi, tol);
         const down = -eiYIn(s, i, t);
-        if (Math.abs(down) > Math.abs(best.value)) best = { value: down, atFt: xs[i] + t };
+        if (Math.abs(down) > Math.abs(bestValue)) {
+          bestValue = down;
+          bestAt = xs[i] + t;
+        }
       }
       tLo = tHi;
       sLo = sHi;
     }
   }
-  return best;
+  return { value: bestValue, atFt: bestAt };
+}
+
+/** Zero of the slope on segment i between tLo and tHi (a sign change), Newton inside the bracket. */
+function slopeZero(s: SpanState, i: number, tLo: number, sLo: number, tHi: number, tol: number): number {
+  if (sLo === 0) return tLo;
+  let lo = tLo;
+  let hi = tHi;
+  const loNegative = sLo < 0;
+  let t = 0.5 * (lo + hi);
+  for (let step = 0; step < MAX_NEWTON_STEPS && hi - lo > tol; step++) {
+    const slope = eiSlopeIn(s, i, t);
+    if (slope === 0) return t;
+    if (slope < 0 === loNegative) lo = t;
+    else hi = t;
+    const m = s.momentLbFt[i] + s.vAfterLb[i] * t - (s.wPlf[i] * t * t) / 2;
+    const next = m === 0 ? NaN : t - slope / m;
+    const nextT = next > lo && next < hi ? next : 0.5 * (lo + hi);
+    if (Math.abs(nextT - t) <= tol) return nextT;
+    t = nextT;
+  }
+  return t;
 }

@@ -1,0 +1,234 @@
+import { sampleDiagram, spanModelFromState, combineStates, emptySpanState } from '@/lib/calc/analysis';
+import { checkColumn, PRESUMPTIVE_SOIL_BEARING_PSF, sizeFootingPad } from '@/lib/calc/columns';
+import { getMaterial, getSize } from '@/lib/calc/materials';
+import { CAUTION_TEXT } from '@/lib/calc/prescriptive/caution';
+import { LOAD_TYPES, type LoadType } from '@/lib/calc/types';
+import type { MemberCheckInput, MemberCheckOptions, MemberCheckResult } from '@/shared/schemas/calc/member';
+import { jackStuds } from './bearing-jacks';
+import { DEFLECTION_PRESETS } from './deflection-presets';
+import { describeChecks } from './describe-checks';
+import { echoInputs } from './echo-inputs';
+import { evaluateSize, type SizeEvaluation, type SupportSpec } from './evaluate-size';
+import { mountRequirements } from './mount-requirements';
+import { prepareMember, type PreparedMember } from './prepare-member';
+import { resolveMember } from './resolve-member';
+import { sectionFactors, supportFcPerpPsi, type ServiceConditions } from './section-factors';
+
+/** Plate under the jack studs when none is named: Spruce-Pine-Fir No.1/No.2 (common framing stock). */
+export const DEFAULT_PLATE_MATERIAL_ID = 'sawn-spruce-pine-fir-no1-no2';
+/** Support width when none is given: a 2x4 wall, 3-1/2 in (NDS Supplement Table 1B). */
+export const DEFAULT_SUPPORT_WIDTH_IN = 3.5;
+/** Footing pad thickness when none is given, in (common practice). */
+export const DEFAULT_PAD_THICKNESS_IN = 12;
+const DEFAULT_TEMPERATURE_F = 70;
+
+/**
+ * Service conditions of a member input, defaults filled.
+ * @example serviceConditions(input).temperatureF; // 70 when not given
+ * Reference: NDS 2018 §2.3.3 (temperature), §4.3.3 (wet service), §4.3.7–4.3.9.
+ */
+export function serviceConditions(input: MemberCheckInput): ServiceConditions {
+  return {
+    wetService: input.wetService ?? false,
+    temperatureF: input.temperatureF ?? DEFAULT_TEMPERATURE_F,
+    incised: input.incised ?? false,
+    flatUse: input.flatUse ?? false,
+    repetitive: input.repetitive ?? false,
+  };
+}
+
+/**
+ * The support under the member: jack studs on a plate (the plate's F'_c⊥ counts) or a post.
+ * @param input member input (supportKind, supportWidthIn in, plateMaterialId)
+ * @returns support width (in), plate F'_c⊥ (psi) and the plate's label
+ * @example supportSpec(input).spec.widthIn; // 3.5 by default
+ * Reference: NDS 2018 §3.10.
+ */
+export function supportSpec(input: MemberCheckInput): { spec: SupportSpec; plateLabel: string | null } {
+  const kind = input.supportKind ?? 'jacks';
+  const widthIn = input.supportWidthIn ?? DEFAULT_SUPPORT_WIDTH_IN;
+  if (kind === 'post') return { spec: { kind, widthIn, plateFcPerpPsi: null }, plateLabel: null };
+  const plateId = input.plateMaterialId ?? DEFAULT_PLATE_MATERIAL_ID;
+  const plateFcPerpPsi = supportFcPerpPsi(plateId, getSize(plateId, '2x4'), serviceConditions(input));
+  return { spec: { kind, widthIn, plateFcPerpPsi }, plateLabel: getMaterial(plateId).label };
+}
+
+function baseSources(prepared: PreparedMember, materialSource: string): string[] {
+  const preset = DEFLECTION_PRESETS[prepared.input.deflectionUse ?? 'floor'];
+  return [
+    'NDS 2018 §3.3 bending',
+    'NDS 2018 §3.4 shear',
+    'NDS 2018 §3.5 deflection (§3.5.2 creep)',
+    'NDS 2018 §3.10 bearing',
+    'NDS 2018 Table 2.3.2 load duration factors',
+    'AWC Design Aid No. 6 beam formulas',
+    `${materialSource} reference design values`,
+    preset.source,
+    ...prepared.sources,
+  ];
+}
+
+function postsFor(prepared: PreparedMember, evaluation: SizeEvaluation): MemberCheckResult['posts'] {
+  const posts = prepared.input.posts;
+  if (!posts) return undefined;
+  const ends = ['left', 'right'] as const;
+  return ends.map((end, e) => {
+    let best = { ratio: -1, pass: true, combination: '', loadLb: 0 };
+    let maxLoadLb = 0;
+    for (const prep of prepared.combinations) {
+      if (prep.skipped) continue;
+      const loadLb =
+        prep.state.reactionsLb[e] +
+        (prep.combination.factors.D ?? 0) * evaluation.selfWeightPlf * (prepared.spans.designSpanFt / 2);
+      maxLoadLb = Math.max(maxLoadLb, loadLb);
+      const check = checkColumn({
+        materialId: posts.materialId,
+        sizeId: posts.sizeId,
+        heightFt: posts.heightFt,
+        loadLb,
+        CD: prep.combination.CD,
+        weakAxisBraced: posts.weakAxisBraced,
+        wet: prepared.input.wetService,
+      });
+      if (check.ratio > best.ratio)
+        best = { ratio: check.ratio, pass: check.pass, combination: prep.combination.name, loadLb };
+    }
+    const soilBearingPsf = posts.soilBearingPsf ?? PRESUMPTIVE_SOIL_BEARING_PSF;
+    const pad = sizeFootingPad({
+      loadLb: Math.max(maxLoadLb, 1),
+      soilBearingPsf,
+      padThicknessIn: posts.padThicknessIn ?? DEFAULT_PAD_THICKNESS_IN,
+    });
+    return {
+      end,
+      loadLb: maxLoadLb,
+      ratio: best.ratio,
+      pass: best.pass,
+      combination: best.combination,
+      footingSideIn: pad.sideIn,
+      footingAreaFt2: pad.providedAreaFt2,
+      soilBearingPsf: pad.soilBearingPsf,
+    };
+  });
+}
+
+/**
+ * Preliminary check of a header or beam (NDS ASD): loads to per-foot loads by type, the job edition's ASD
+ * combinations (combinations naming a load type that carries nothing are skipped, another always governs
+ * them), and per combination bending, shear, deflection (live against the use's limit, total with creep
+ * against the total limit and any cap) and bearing on the member and the plate → jack studs; flush or
+ * dropped requirements; posts and footing pads when asked. Every check lists the factors it used; C_D never
+ * touches F_c⊥ or E.
+ *
+ * Creep (NDS 3.5.2): the sustained load is the dead load, self-weight and `sustainedLiveFraction` of the
+ * occupancy live load (default 0 — residential live load is mostly transient; enter a part for storage or
+ * heavy furniture). Roof live and snow are taken as short-term.
+ *
+ * @param input parsed memberCheckInputSchema (ft, in, psf, plf, lb)
+ * @param options diagrams: sample V, M, y of the governing combination
+ * @returns the result (stresses psi, deflections and bearing lengths in, loads lb)
+ * @throws CalcInputError naming the input field for anything the engine cannot check
+ * @example checkMember(memberCheckInputSchema.parse({ kind: 'header', edition: 'ASCE 7-22', clearSpanFt: 6, sources: [...], materialId: 'sawn-douglas-fir-larch-no2', sizeId: '2-ply-2x10' })).governing;
+ * Reference: NDS 2018 §§3.3–3.5, 3.10, Tables 2.3.2, 4.3.1, 5.3.1, 8.3.1; ASCE 7-16/7-22 §2.4.1.
+ */
+export function checkMember(input: MemberCheckInput, options: MemberCheckOptions = {}): MemberCheckResult {
+  const resolved = resolveMember(input);
+  const { material, size } = resolved;
+  const prepared = prepareMember(input);
+  const section = sectionFactors(material.id, size, prepared.spans.designSpanFt, serviceConditions(input));
+  const support = supportSpec(input);
+  const evaluation = evaluateSize(prepared, section, size.selfWeightPlf, support.spec);
+  const checks = describeChecks(prepared, section, evaluation);
+  const jacks = jackStuds(evaluation.bearing.requiredLengthIn, input.clearSpanFt);
+  const mount = mountRequirements(input, section.dIn, size.plies);
+  const warnings = [...resolved.warnings, ...prepared.warnings];
+  if (material.generic) warnings.push("Generic values: confirm with the manufacturer's published values.");
+  if (input.unbracedLengthFt === undefined) {
+    warnings.push(
+      'Top edge taken as braced by the framing along its length (C_L = 1.0); say so if it is not.',
+    );
+  }
+  const takedown = [...prepared.takedown];
+  if (prepared.selfWeight) {
+    takedown.push({
+      label: 'Self-weight',
+      type: 'D',
+      expression: `${size.label}: ${evaluation.selfWeightPlf.toFixed(1)} plf`,
+      wPlf: evaluation.selfWeightPlf,
+    });
+  }
+  const swHalfLb = evaluation.selfWeightPlf * (prepared.spans.designSpanFt / 2);
+  const byType = {} as Record<LoadType, { leftLb: number; rightLb: number }>;
+  for (const t of LOAD_TYPES) {
+    const [leftLb, rightLb] = prepared.reactionsByType[t];
+    const sw = t === 'D' ? swHalfLb : 0;
+    byType[t] = { leftLb: leftLb + sw, rightLb: rightLb + sw };
+  }
+  const governingCheck = checks.find((c) => c.id === evaluation.governing.id) ?? checks[0];
+  const result: MemberCheckResult = {
+    caution: CAUTION_TEXT,
+    pass: checks.every((c) => c.pass) && mount.depthFits !== false,
+    member: {
+      kind: input.kind,
+      label: input.label,
+      materialId: material.id,
+      materialLabel: material.label,
+      sizeId: size.id,
+      sizeLabel: size.label,
+      plies: size.plies,
+      bIn: size.bIn,
+      dIn: size.dIn,
+      selfWeightPlf: evaluation.selfWeightPlf,
+    },
+    spans: prepared.spans,
+    inputs: echoInputs(input, prepared.spans, {
+      materialLabel: material.label,
+      sizeLabel: size.label,
+      plateLabel: support.plateLabel,
+      supportWidthIn: support.spec.widthIn,
+    }),
+    takedown,
+    combinations: prepared.combinations.map((c) => ({
+      name: c.combination.name,
+      CD: c.combination.CD,
+      skipped: c.skipped,
+    })),
+    checks,
+    governing: {
+      check: governingCheck.id,
+      combination: governingCheck.combination,
+      ratio: governingCheck.ratio,
+    },
+    reactions: {
+      leftLb: evaluation.bearing.leftLb,
+      rightLb: evaluation.bearing.rightLb,
+      combination: prepared.combinations[evaluation.bearing.combinationIndex].combination.name,
+      byType,
+    },
+    bearing: {
+      requiredLengthIn: evaluation.bearing.requiredLengthIn,
+      providedLengthIn: Math.min(prepared.spans.bearingLeftIn, prepared.spans.bearingRightIn),
+      jackStuds: jacks.count,
+      jackStudsNote: jacks.note,
+      governedBy: evaluation.bearing.governedBy,
+    },
+    mount,
+    posts: postsFor(prepared, evaluation),
+    warnings,
+    sources: baseSources(prepared, material.source),
+  };
+  if (options.diagrams) {
+    const index = prepared.combinations.findIndex((c) => c.combination.name === governingCheck.combination);
+    const prep = prepared.combinations[Math.max(0, index)];
+    const state = combineStates(
+      emptySpanState(prepared.spans.designSpanFt, prep.state.xs),
+      [prep.state, prepared.unitSelfWeight],
+      [1, (prep.combination.factors.D ?? 0) * evaluation.selfWeightPlf],
+    );
+    result.diagram = {
+      combination: prep.combination.name,
+      samples: sampleDiagram(spanModelFromState(state, evaluation.eiLbIn2), options.diagramPoints ?? 41),
+    };
+  }
+  return result;
+}

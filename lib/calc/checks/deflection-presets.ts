@@ -1,0 +1,68 @@
+import type { DeflectionUse } from '@/shared/schemas/calc/member';
+
+/**
+ * Deflection limits by use, as span divided by a number (L/360 → 360). `liveRatio` applies to the variable load
+ * (occupancy live, roof live or snow); `totalRatio` to dead + variable with creep on the sustained part.
+ */
+export interface DeflectionPreset {
+  label: string;
+  liveRatio: number;
+  totalRatio: number;
+  /** Where the numbers come from, for the result's sources list. */
+  source: string;
+}
+
+/**
+ * The live-load limits are those of IRC Table R301.7 (floors L/360; ceilings with plaster L/360, with gypsum
+ * L/240; roofs without a ceiling L/180). IRC R301.7 gives no total-load limit; the total limits here are those
+ * IBC Table 1604.3 pairs with the same live limits (L/240 with L/360, L/180 with L/240, L/120 with L/180 —
+ * from memory, confirm in the IBC). Tile floors: L/480 live is the DESIGN.md preset and common practice for
+ * ceramic tile; its L/360 total is common practice.
+ *
+ * @example
+ * DEFLECTION_PRESETS.floor; // { label: 'Floor', liveRatio: 360, totalRatio: 240, ... }
+ *
+ * Reference: IRC 2021 Table R301.7; IBC 2018 Table 1604.3 (from memory).
+ */
+export const DEFLECTION_PRESETS: Readonly<Record<DeflectionUse, DeflectionPreset>> = {
+  floor: {
+    label: 'Floor',
+    liveRatio: 360,
+    totalRatio: 240,
+    source: 'IRC 2021 Table R301.7 (L/360 live); IBC 2018 Table 1604.3 (L/240 total, from memory)',
+  },
+  'floor-tile': {
+    label: 'Floor under tile or stone',
+    liveRatio: 480,
+    totalRatio: 360,
+    source: 'Common practice for tile floors (L/480 live, L/360 total)',
+  },
+  'plaster-ceiling': {
+    label: 'Under a plaster ceiling',
+    liveRatio: 360,
+    totalRatio: 240,
+    source:
+      'IRC 2021 Table R301.7 (L/360 live, plaster ceiling); IBC 2018 Table 1604.3 (L/240 total, from memory)',
+  },
+  'gypsum-ceiling': {
+    label: 'Under a gypsum ceiling',
+    liveRatio: 240,
+    totalRatio: 180,
+    source:
+      'IRC 2021 Table R301.7 (L/240 live, gypsum ceiling); IBC 2018 Table 1604.3 (L/180 total, from memory)',
+  },
+  roof: {
+    label: 'Roof with a ceiling',
+    liveRatio: 240,
+    totalRatio: 180,
+    source:
+      'IRC 2021 Table R301.7 (L/240 live, all other members); IBC 2018 Table 1604.3 (L/180 total, from memory)',
+  },
+  'roof-no-ceiling': {
+    label: 'Roof, no ceiling',
+    liveRatio: 180,
+    totalRatio: 120,
+    source:
+      'IRC 2021 Table R301.7 (L/180 live, rafters with no finished ceiling attached); IBC 2018 Table 1604.3 (L/120 total, from memory)',
+  },
+};
