@@ -1,9 +1,11 @@
 import { MailList } from '@/lib/ui/mail-list';
 import { Screen } from '@/lib/ui/screen';
+import { TextLink } from '@/lib/ui/text-link';
 
 export default function DevMail() {
   return (
     <Screen title="Captured mail">
+      <TextLink href="/" label="Back to Tributary" />
       <MailList />
     </Screen>
   );

@@ -51,7 +51,7 @@ export function AppShell({ me, children }: { me: Me; children: ReactNode }) {
     <View style={styles.phoneRoot}>
       <View style={[styles.topBar, { paddingTop: spacing.sm + insets.top }]}>
         <Wordmark />
-        <Text variant="caption" tone="muted" numberOfLines={1} style={styles.topFirm}>
+        <Text variant="caption" tone="muted" numberOfLines={2} style={styles.topFirm}>
           {firmLine}
         </Text>
       </View>

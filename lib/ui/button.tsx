@@ -41,35 +41,35 @@ export function Button({
       aria-disabled={inactive}
       aria-busy={busy}
       disabled={inactive}
-      style={({ pressed }) => [
-        styles.base,
-        block && styles.block,
-        { backgroundColor: pressed ? v.pressed : v.bg, borderColor: v.border },
-        inactive && styles.inactive,
-      ]}
+      // Flat style object: expo-router Link asChild merges the child style by object spread.
+      style={StyleSheet.flatten([styles.base, block && styles.block, inactive && styles.inactive])}
       {...rest}
     >
-      <View style={styles.row}>
-        {busy ? <ActivityIndicator color={v.fg} /> : icon ? <Icon name={icon} color={v.fg} /> : null}
-        <Text variant="bodyStrong" style={{ color: v.fg }}>
-          {label}
-        </Text>
-      </View>
+      {({ pressed }) => (
+        <View style={[styles.face, { backgroundColor: pressed ? v.pressed : v.bg, borderColor: v.border }]}>
+          {busy ? <ActivityIndicator color={v.fg} /> : icon ? <Icon name={icon} color={v.fg} /> : null}
+          <Text variant="bodyStrong" style={{ color: v.fg }}>
+            {label}
+          </Text>
+        </View>
+      )}
     </Pressable>
   );
 }
 
 const styles = StyleSheet.create({
-  base: {
+  base: { alignSelf: 'flex-start', borderRadius: radii.md },
+  block: { alignSelf: 'stretch' },
+  face: {
     minHeight: layout.touchTarget,
     minWidth: layout.touchTarget,
     paddingHorizontal: spacing.lg,
     borderRadius: radii.md,
     borderWidth: 2,
+    flexDirection: 'row',
+    alignItems: 'center',
     justifyContent: 'center',
-    alignSelf: 'flex-start',
+    gap: spacing.sm,
   },
-  block: { alignSelf: 'stretch' },
-  row: { flexDirection: 'row', alignItems: 'center', justifyContent: 'center', gap: spacing.sm },
   inactive: { opacity: 0.6 },
 });

@@ -52,10 +52,6 @@ export function JobForm({ initial, submitLabel, onSubmit, onCancel }: JobFormPro
 
   return (
     <View style={styles.form}>
-      {error ? <Notice tone="error">{error.message}</Notice> : null}
-      {Object.keys(clientErrors).length ? (
-        <Notice tone="error">Some fields need another look; see the messages below.</Notice>
-      ) : null}
       <Card title="The house">
         <TextField
           label="Job name"
@@ -169,6 +165,10 @@ export function JobForm({ initial, submitLabel, onSubmit, onCancel }: JobFormPro
           multiline
         />
       </Card>
+      {error ? <Notice tone="error">{error.message}</Notice> : null}
+      {Object.keys(clientErrors).length ? (
+        <Notice tone="error">Some fields need another look; see the messages above.</Notice>
+      ) : null}
       <View style={styles.actions}>
         <Button label={submitLabel} testID="job-submit" busy={busy} onPress={submit} />
         {onCancel ? <Button label="Cancel" variant="secondary" onPress={onCancel} /> : null}

@@ -13,26 +13,31 @@ export function JobRow({ job }: { job: Job }) {
       <Pressable
         aria-label={`${job.name}, ${job.address || 'no address'}`}
         testID="job-row"
-        style={({ pressed }) => [styles.row, pressed && styles.pressed]}
+        style={styles.link}
       >
-        <View style={styles.text}>
-          <Text variant="bodyStrong" numberOfLines={2}>
-            {job.name}
-          </Text>
-          <Text tone="muted" numberOfLines={2}>
-            {job.address || 'No address yet'}
-          </Text>
-          <Text variant="caption" tone="muted">
-            {yearBuiltLabel(job)} · {job.loadStandard}
-          </Text>
-        </View>
-        <Icon name="chevronRight" color={colors.inkMuted} />
+        {({ pressed }) => (
+          <View style={[styles.row, pressed && styles.pressed]}>
+            <View style={styles.text}>
+              <Text variant="bodyStrong" numberOfLines={2}>
+                {job.name}
+              </Text>
+              <Text tone="muted" numberOfLines={2}>
+                {job.address || 'No address yet'}
+              </Text>
+              <Text variant="caption" tone="muted">
+                {yearBuiltLabel(job)} · {job.loadStandard}
+              </Text>
+            </View>
+            <Icon name="chevronRight" color={colors.inkMuted} />
+          </View>
+        )}
       </Pressable>
     </Link>
   );
 }
 
 const styles = StyleSheet.create({
+  link: { borderRadius: radii.lg },
   row: {
     minHeight: layout.touchTarget,
     flexDirection: 'row',

@@ -8,7 +8,7 @@ type LinkButtonProps = Omit<ComponentProps<typeof Button>, 'onPress'> & { href: 
 export function LinkButton({ href, ...button }: LinkButtonProps) {
   return (
     <Link href={href} asChild>
-      <Button {...button} />
+      <Button role="link" accessibilityRole="link" {...button} />
     </Link>
   );
 }

@@ -19,9 +19,6 @@ export function MembersPanel() {
   const pending = data.invitations.filter((inv) => inv.acceptedAt === null);
   return (
     <>
-      <Card title="Invite someone">
-        <InviteForm onInvite={invite} />
-      </Card>
       <Card title={`Members (${data.members.length})`}>
         <MemberList members={data.members} />
       </Card>
@@ -32,6 +29,9 @@ export function MembersPanel() {
           revoking={revoking.busy}
           onRevoke={(id) => void revoking.run(id)}
         />
+      </Card>
+      <Card title="Invite someone">
+        <InviteForm onInvite={invite} />
       </Card>
     </>
   );

@@ -17,11 +17,8 @@ export function NavLink({ item, active, placement }: NavLinkProps) {
         aria-current={active ? 'page' : undefined}
         aria-label={item.label}
         testID={`nav-${item.label.toLowerCase()}`}
-        style={({ pressed }) => [
-          side ? styles.side : styles.tab,
-          pressed && styles.pressed,
-          active && side && styles.sideActive,
-        ]}
+        // Flat style object: expo-router Link asChild merges the child style by object spread.
+        style={StyleSheet.flatten([side ? styles.side : styles.tab, active && side && styles.sideActive])}
       >
         <View style={[side ? styles.sideBar : styles.tabBar, active && styles.barActive]} />
         <Icon name={item.icon} size={side ? iconSize.md : iconSize.lg} color={tint} />
@@ -71,5 +68,4 @@ const styles = StyleSheet.create({
   },
   sideLabel: { fontSize: 17 },
   barActive: { backgroundColor: colors.accent },
-  pressed: { backgroundColor: colors.overlay },
 });

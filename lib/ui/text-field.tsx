@@ -19,6 +19,7 @@ export function TextField({
   errors,
   unit,
   multiline,
+  editable,
   onFocus,
   onBlur,
   ...rest
@@ -40,6 +41,7 @@ export function TextField({
           aria-invalid={invalid}
           placeholderTextColor={colors.inkMuted}
           multiline={multiline}
+          editable={editable}
           onFocus={(e) => {
             setFocused(true);
             onFocus?.(e);
@@ -53,6 +55,7 @@ export function TextField({
             multiline && styles.multiline,
             focused && styles.focused,
             invalid && styles.invalid,
+            editable === false && styles.readOnly,
           ]}
           {...rest}
         />
@@ -86,5 +89,6 @@ const styles = StyleSheet.create({
   multiline: { minHeight: 120, textAlignVertical: 'top' },
   focused: { borderColor: colors.focus },
   invalid: { borderColor: colors.danger },
+  readOnly: { backgroundColor: colors.surfaceSunken, borderColor: colors.line },
   unit: { minWidth: 36 },
 });
