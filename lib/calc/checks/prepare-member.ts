@@ -34,7 +34,10 @@ export interface MemberSpans {
 /** One ASD combination prepared on the member's load groups (self-weight apart). */
 export interface PreparedCombination {
   combination: LoadCombination;
-  /** True when a load type the combination names carries no load: another combination always governs it. */
+  /**
+   * True when a variable load type the combination names carries no load (another combination with the same
+   * loads and a C_D no larger always governs it), or for "D" alone when there is no dead load.
+   */
   skipped: boolean;
   /** Σ factor · state of each load type, self-weight excluded. */
   state: SpanState;
@@ -171,7 +174,11 @@ export function prepareMember(input: MemberCheckInput): PreparedMember {
   const scratch = emptySpanState(L, xs);
   const combinations = asdCombinations(input.edition).map((combination): PreparedCombination => {
     const types = Object.keys(combination.factors) as LoadType[];
-    const skipped = types.some((t) => loadsByType[t].length === 0 && !(t === 'D' && selfWeight));
+    const deadLoaded = loadsByType.D.length > 0 || selfWeight;
+    const skipped =
+      types.length === 1 && types[0] === 'D'
+        ? !deadLoaded
+        : types.some((t) => t !== 'D' && loadsByType[t].length === 0);
     const coeffs = LOAD_TYPES.map((t) => combination.factors[t] ?? 0);
     const state = combineStates(emptySpanState(L, xs), typeStates, coeffs);
     const variableCoeffs = coeffs.map((c, i) => (LOAD_TYPES[i] === 'D' ? 0 : c));
