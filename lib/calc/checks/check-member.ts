@@ -3,7 +3,12 @@ import { checkColumn, PRESUMPTIVE_SOIL_BEARING_PSF, sizeFootingPad } from '@/lib
 import { getMaterial, getSize } from '@/lib/calc/materials';
 import { CAUTION_TEXT } from '@/lib/calc/prescriptive/caution';
 import { LOAD_TYPES, type LoadType } from '@/lib/calc/types';
-import type { MemberCheckInput, MemberCheckOptions, MemberCheckResult } from '@/shared/schemas/calc/member';
+import type {
+  MemberCheckInput,
+  MemberCheckOptions,
+  MemberCheckResult,
+  MemberLoadingInput,
+} from '@/shared/schemas/calc/member';
 import { jackStuds } from './bearing-jacks';
 import { DEFLECTION_PRESETS } from './deflection-presets';
 import { describeChecks } from './describe-checks';
@@ -27,7 +32,7 @@ const DEFAULT_TEMPERATURE_F = 70;
  * @example serviceConditions(input).temperatureF; // 70 when not given
  * Reference: NDS 2018 §2.3.3 (temperature), §4.3.3 (wet service), §4.3.7–4.3.9.
  */
-export function serviceConditions(input: MemberCheckInput): ServiceConditions {
+export function serviceConditions(input: MemberLoadingInput): ServiceConditions {
   return {
     wetService: input.wetService ?? false,
     temperatureF: input.temperatureF ?? DEFAULT_TEMPERATURE_F,
@@ -44,7 +49,7 @@ export function serviceConditions(input: MemberCheckInput): ServiceConditions {
  * @example supportSpec(input).spec.widthIn; // 3.5 by default
  * Reference: NDS 2018 §3.10.
  */
-export function supportSpec(input: MemberCheckInput): { spec: SupportSpec; plateLabel: string | null } {
+export function supportSpec(input: MemberLoadingInput): { spec: SupportSpec; plateLabel: string | null } {
   const kind = input.supportKind ?? 'jacks';
   const widthIn = input.supportWidthIn ?? DEFAULT_SUPPORT_WIDTH_IN;
   if (kind === 'post') return { spec: { kind, widthIn, plateFcPerpPsi: null }, plateLabel: null };

@@ -1,4 +1,4 @@
-import type { MemberCheckInput } from '@/shared/schemas/calc/member';
+import type { MemberLoadingInput } from '@/shared/schemas/calc/member';
 
 /** Default joist spacing, in (common practice). */
 export const DEFAULT_JOIST_SPACING_IN = 16;
@@ -28,7 +28,7 @@ export interface MountResult {
  * @example mountRequirements({ ...input, mount: 'flush', joistDepthIn: 9.25 }, 9.25, 2).hangers;
  * Reference: DESIGN.md §5 "flush or dropped" (common practice); NDS 2018 §12 fasteners for ply-to-ply connection.
  */
-export function mountRequirements(input: MemberCheckInput, dIn: number, plies: number): MountResult {
+export function mountRequirements(input: MemberLoadingInput, dIn: number, plies: number): MountResult {
   const kind = input.mount ?? 'dropped';
   const requirements: string[] = [];
   if (kind === 'flush') {

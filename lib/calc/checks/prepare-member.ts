@@ -12,7 +12,7 @@ import { asdCombinations, buildMemberLoads, type TakedownLine } from '@/lib/calc
 import { roofSnowLoad } from '@/lib/calc/snow';
 import { LOAD_TYPES, type BeamLoad, type LoadCombination, type LoadType } from '@/lib/calc/types';
 import type { LoadSource } from '@/shared/schemas/calc/loads';
-import type { MemberCheckInput } from '@/shared/schemas/calc/member';
+import type { MemberLoadingInput } from '@/shared/schemas/calc/member';
 import { creepFactor } from './creep';
 import { endShearsAtD } from './end-shears';
 
@@ -57,7 +57,7 @@ export interface PreparedCombination {
  * by weighted sums of these states (see evaluateSize), so the shortlist never repeats the analysis.
  */
 export interface PreparedMember {
-  input: MemberCheckInput;
+  input: MemberLoadingInput;
   spans: MemberSpans;
   takedown: TakedownLine[];
   warnings: string[];
@@ -111,7 +111,7 @@ function shift(source: LoadSource, offsetFt: number): LoadSource {
  *
  * Reference: ASCE 7-16 / 7-22 §2.4.1 ASD combinations; NDS 2018 §3.5.2 (creep); AWC Design Aid No. 6 (2007).
  */
-export function prepareMember(input: MemberCheckInput): PreparedMember {
+export function prepareMember(input: MemberLoadingInput): PreparedMember {
   const bearingLeftIn = input.bearingLeftIn ?? DEFAULT_BEARING_IN;
   const bearingRightIn = input.bearingRightIn ?? DEFAULT_BEARING_IN;
   const spans: MemberSpans = {

@@ -128,6 +128,12 @@ export const memberCheckInputSchema = z.object({
   flags: z.record(z.string(), inputFlagSchema).optional(),
 });
 export type MemberCheckInput = z.infer<typeof memberCheckInputSchema>;
+/** The loading, support and use of a member without its material and size (shared with the shortlist). */
+export type MemberLoadingInput = Omit<
+  MemberCheckInput,
+  'materialId' | 'sizeId' | 'plies' | 'gradeUnknown' | 'measuredPly' | 'posts'
+> &
+  Partial<Pick<MemberCheckInput, 'posts'>>;
 export type MemberCheckInputBody = z.input<typeof memberCheckInputSchema>;
 
 /** Options of a member check that do not change its numbers. */
