@@ -32,7 +32,9 @@ const DEFAULT_TEMPERATURE_F = 70;
  * @example serviceConditions(input).temperatureF; // 70 when not given
  * Reference: NDS 2018 §2.3.3 (temperature), §4.3.3 (wet service), §4.3.7–4.3.9.
  */
-export function serviceConditions(input: MemberLoadingInput): ServiceConditions {
+export function serviceConditions(
+  input: Pick<MemberLoadingInput, 'wetService' | 'temperatureF' | 'incised' | 'flatUse' | 'repetitive'>,
+): ServiceConditions {
   return {
     wetService: input.wetService ?? false,
     temperatureF: input.temperatureF ?? DEFAULT_TEMPERATURE_F,
@@ -49,7 +51,19 @@ export function serviceConditions(input: MemberLoadingInput): ServiceConditions 
  * @example supportSpec(input).spec.widthIn; // 3.5 by default
  * Reference: NDS 2018 §3.10.
  */
-export function supportSpec(input: MemberLoadingInput): { spec: SupportSpec; plateLabel: string | null } {
+export function supportSpec(
+  input: Pick<
+    MemberLoadingInput,
+    | 'supportKind'
+    | 'supportWidthIn'
+    | 'plateMaterialId'
+    | 'wetService'
+    | 'temperatureF'
+    | 'incised'
+    | 'flatUse'
+    | 'repetitive'
+  >,
+): { spec: SupportSpec; plateLabel: string | null } {
   const kind = input.supportKind ?? 'jacks';
   const widthIn = input.supportWidthIn ?? DEFAULT_SUPPORT_WIDTH_IN;
   if (kind === 'post') return { spec: { kind, widthIn, plateFcPerpPsi: null }, plateLabel: null };

@@ -1,0 +1,113 @@
+import { serviceConditions, supportSpec } from '@/lib/calc/checks/check-member';
+import { creepFactor } from '@/lib/calc/checks/creep';
+import { DEFAULT_BEARING_IN } from '@/lib/calc/checks/prepare-member';
+import { DEFLECTION_PRESETS } from '@/lib/calc/checks/deflection-presets';
+import { sectionFactors } from '@/lib/calc/checks/section-factors';
+import { formatSpanFtIn } from '@/lib/format';
+import { asdCombinations } from '@/lib/calc/loads';
+import { getMaterial, listSizes } from '@/lib/calc/materials';
+import { CAUTION_TEXT } from '@/lib/calc/prescriptive/caution';
+import { CalcInputError, type LoadCombination, type LoadType } from '@/lib/calc/types';
+import type { SpanTableInput, SpanTableResult } from '@/shared/schemas/calc/span-table';
+import { uniformSpanLimits, type UniformSpanCase } from './uniform-span-limits';
+
+const IN_PER_FT = 12;
+/** Span used to look up section factors; only glulam C_V depends on span and it is solved per span. */
+const LOOKUP_SPAN_FT = 21;
+
+/**
+ * A span table for the user's own loads: for each size of the chosen materials and each tributary width,
+ * the largest design span it carries under D (+ self-weight), L, Lr and S per foot of tributary width, by
+ * the same rules as the member check (ASD combinations of the edition, C_D per combination, bending with
+ * C_L = 1.0 for a braced top edge, shear at d, live and total deflection with creep, bearing on the member
+ * and the plate), each limit solved in closed form (glulam bending by bisection to 1/16 in). Never a code
+ * table: the numbers come from the user's loads.
+ *
+ * @param input parsed spanTableInputSchema (psf, ft, in)
+ * @returns rows by size with one cell per tributary width (span ft, printed ft-in, the governing check)
+ * @throws CalcInputError for unknown materials
+ * @example buildSpanTable(spanTableInputSchema.parse({ edition: 'ASCE 7-16', deadPsf: 10, livePsf: 40, tributaryWidthsFt: [16 / 12], materialIds: ['sawn-spruce-pine-fir-no1-no2'], repetitive: true, selfWeight: false })).rows[0].cells[0].spanText;
+ * Reference: AWC Design Aid No. 6 (2007) case 1; NDS 2018 §§3.3–3.5, 3.10; ASCE 7-16/7-22 §2.4.1.
+ */
+export function buildSpanTable(input: SpanTableInput): SpanTableResult {
+  const conditions = serviceConditions(input);
+  const support = supportSpec(input).spec;
+  const combinations: readonly LoadCombination[] = asdCombinations(input.edition);
+  const psfByType: Record<LoadType, number> = {
+    D: input.deadPsf,
+    L: input.livePsf ?? 0,
+    Lr: input.roofLivePsf ?? 0,
+    S: input.roofSnowPsf ?? 0,
+  };
+  const active = combinations.filter((c) =>
+    (Object.keys(c.factors) as LoadType[]).every((t) => t === 'D' || psfByType[t] > 0),
+  );
+  const selfWeight = input.selfWeight ?? true;
+  const bearingIn = input.bearingIn ?? DEFAULT_BEARING_IN;
+  const warnings: string[] = [];
+  const rows: SpanTableResult['rows'] = [];
+  const plies = input.plies ?? [1, 2, 3, 4];
+  const preset = DEFLECTION_PRESETS[input.deflectionUse ?? 'floor'];
+
+  for (const materialId of input.materialIds) {
+    const material = getMaterial(materialId);
+    if (material.generic)
+      warnings.push(`${material.label}: generic values, confirm with the manufacturer's published values.`);
+    for (const size of listSizes(materialId, { plies })) {
+      let section;
+      try {
+        section = sectionFactors(materialId, size, LOOKUP_SPAN_FT, conditions);
+      } catch (error) {
+        if (!(error instanceof CalcInputError)) throw error;
+        warnings.push(`${material.label} ${size.label}: ${error.message}`);
+        continue;
+      }
+      const cells = input.tributaryWidthsFt.map((tributaryFt) => {
+        const spanCase: UniformSpanCase = {
+          wPlfByType: {
+            D: psfByType.D * tributaryFt,
+            L: psfByType.L * tributaryFt,
+            Lr: psfByType.Lr * tributaryFt,
+            S: psfByType.S * tributaryFt,
+          },
+          combinations: active,
+          selfWeightPlf: selfWeight ? size.selfWeightPlf : 0,
+          preset,
+          deflectionCapIn: input.deflectionCapIn ?? null,
+          creepKcr: creepFactor(conditions.wetService),
+          sustainedLiveFraction: input.sustainedLiveFraction ?? 0,
+          shearAtD: input.shearAtD ?? true,
+          bearingIn,
+          support,
+        };
+        const limits = uniformSpanLimits(materialId, size, section, spanCase);
+        return {
+          tributaryFt,
+          spanFt: limits.spanFt,
+          spanText: formatSpanFtIn(limits.spanFt * IN_PER_FT),
+          governedBy: limits.governedBy,
+          combination: limits.combination,
+        };
+      });
+      rows.push({ materialId, materialLabel: material.label, sizeId: size.id, sizeLabel: size.label, cells });
+    }
+  }
+  return {
+    caution: CAUTION_TEXT,
+    tributaryWidthsFt: input.tributaryWidthsFt,
+    rows,
+    notes: [
+      'Spans are design spans, support centre to support centre; the clear span is the design span less half the bearing at each end.',
+      'Printed spans are rounded down to the inch.',
+      `Top edge braced along its length (C_L = 1.0); bearing ${bearingIn} in at each end; deflection ${preset.label}: L/${preset.liveRatio} variable, L/${preset.totalRatio} total with creep.`,
+      'Uniform loads only: point loads and partial loads need a member check.',
+    ],
+    warnings,
+    sources: [
+      'AWC Design Aid No. 6 beam formulas (simple span, uniform load)',
+      'NDS 2018 §§3.3–3.5, 3.10',
+      `${input.edition} §2.4.1 ASD load combinations`,
+      preset.source,
+    ],
+  };
+}
