@@ -36,7 +36,7 @@ const DEMO_FIRMS: DemoFirm[] = [
     ],
     jobs: [
       {
-        name: 'Ranch kitchen opening',
+        name: 'Ranch dining-room opening',
         address: '418 Larkmoor Lane, Demo Falls',
         yearBuilt: 1957,
         stories: 1,
@@ -48,7 +48,7 @@ const DEMO_FIRMS: DemoFirm[] = [
         groundSnowSource: SNOW_SOURCE,
         foundation: 'crawlspace',
         notes:
-          'Open 14 ft of the kitchen-to-dining wall. Ceiling joists lap over the wall; rafters meet a ridge board.',
+          'Open 14 ft of the wall between the dining room and the living room. Ceiling joists lap over the wall; rafters meet a ridge board.',
       },
       {
         name: 'Bungalow hall doorway',
