@@ -265,3 +265,33 @@ export const memberCheckResultSchema = z.object({
   diagram: z.object({ combination: z.string(), samples: z.array(diagramSampleSchema) }).optional(),
 });
 export type MemberCheckResult = z.infer<typeof memberCheckResultSchema>;
+
+/** Input of the prescriptive-path verdict: a header's member input plus the job facts code tables key on. */
+export const prescriptiveInputSchema = z.object({
+  member: memberCheckInputSchema,
+  /** Building width perpendicular to the ridge, ft (the job's); null when not known. */
+  buildingWidthFt: z.number().finite().positive().max(80).nullable(),
+  /** Ground snow, psf (the job's). */
+  groundSnowPsf: z.number().finite().min(0).max(300),
+});
+export type PrescriptiveInput = z.infer<typeof prescriptiveInputSchema>;
+
+export const prescriptiveResultSchema = z.object({
+  caution: z.string(),
+  verdict: z.enum(['likely-covered', 'engineer-needed']),
+  message: z.string(),
+  /** Every reason the case sits outside what header tables cover (empty when likely covered). */
+  reasons: z.array(z.string()),
+  /** Tributary's own smallest sawn 2x header for the same loads (when likely covered). */
+  computed: z
+    .object({
+      materialId: z.string(),
+      sizeId: z.string(),
+      sizeLabel: z.string(),
+      utilization: z.number(),
+      governingCheck: z.string(),
+    })
+    .nullable(),
+  notes: z.array(z.string()),
+});
+export type PrescriptiveResult = z.infer<typeof prescriptiveResultSchema>;
