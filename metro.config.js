@@ -1,3 +1,4 @@
+/* global require, module, __dirname */
 // Metro for the web client. In development (`expo start --web`) same-origin /api calls are passed on to
 // the Express API so the session cookie works exactly as in production; `expo export` ignores this file.
 const http = require('node:http');

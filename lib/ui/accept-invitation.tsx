@@ -11,6 +11,7 @@ import { Button } from './button';
 import { mergeFieldErrors } from './form-errors';
 import { LinkButton } from './link-button';
 import { LoadingView } from './loading-view';
+import { FormProblem } from './form-problem';
 import { Notice } from './notice';
 import { Text } from './text';
 import { TextField } from './text-field';
@@ -81,7 +82,7 @@ export function AcceptInvitation({ token, preview }: Props) {
 
   return (
     <View style={styles.form}>
-      {accept.error ? <Notice tone="error">{accept.error.message}</Notice> : null}
+      <FormProblem error={accept.error} />
       <TextField
         label="E-mail"
         value={preview.email}

@@ -11,6 +11,7 @@ import {
 import { Button } from './button';
 import { ChoiceGroup, type Choice } from './choice-group';
 import { mergeFieldErrors } from './form-errors';
+import { FormProblem } from './form-problem';
 import { Notice } from './notice';
 import { TextField } from './text-field';
 
@@ -60,7 +61,7 @@ export function InviteForm({
       {sentTo ? (
         <Notice tone="success" title="Invitation sent">{`An invitation e-mail went to ${sentTo}.`}</Notice>
       ) : null}
-      {error ? <Notice tone="error">{error.message}</Notice> : null}
+      <FormProblem error={error} />
       <TextField
         label="E-mail"
         testID="invite-email"

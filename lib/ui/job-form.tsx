@@ -15,6 +15,7 @@ import {
   type RoofType,
 } from './job-draft';
 import { foundationLabels, roofTypeLabels } from './job-labels';
+import { FormProblem } from './form-problem';
 import { Notice } from './notice';
 import { TextField } from './text-field';
 
@@ -165,7 +166,7 @@ export function JobForm({ initial, submitLabel, onSubmit, onCancel }: JobFormPro
           multiline
         />
       </Card>
-      {error ? <Notice tone="error">{error.message}</Notice> : null}
+      <FormProblem error={error} fieldsAre="above" />
       {Object.keys(clientErrors).length ? (
         <Notice tone="error">Some fields need another look; see the messages above.</Notice>
       ) : null}

@@ -7,7 +7,7 @@ export function NotFoundView() {
   return (
     <AuthFrame title="Page not found">
       <Text>There is no page at this address. It may have moved, or the link may be mistyped.</Text>
-      <TextLink href="/" label="Go to your jobs" />
+      <TextLink href="/" label="Go to the start page" />
     </AuthFrame>
   );
 }

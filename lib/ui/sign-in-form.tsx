@@ -8,7 +8,7 @@ import { fieldErrors } from '@/shared/errors';
 import { signInSchema } from '@/shared/schemas/auth';
 import { Button } from './button';
 import { mergeFieldErrors } from './form-errors';
-import { Notice } from './notice';
+import { FormProblem } from './form-problem';
 import { safeNextPath } from './safe-next-path';
 import { Text } from './text';
 import { TextField } from './text-field';
@@ -33,7 +33,7 @@ export function SignInForm() {
 
   return (
     <View style={styles.form}>
-      {error ? <Notice tone="error">{error.message}</Notice> : null}
+      <FormProblem error={error} />
       <TextField
         label="E-mail"
         testID="sign-in-email"

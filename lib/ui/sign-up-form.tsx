@@ -8,7 +8,7 @@ import { signUpSchema, type OrgKind } from '@/shared/schemas/auth';
 import { Button } from './button';
 import { ChoiceGroup, type Choice } from './choice-group';
 import { mergeFieldErrors } from './form-errors';
-import { Notice } from './notice';
+import { FormProblem } from './form-problem';
 import { Text } from './text';
 import { TextField } from './text-field';
 import { TextLink } from './text-link';
@@ -46,7 +46,7 @@ export function SignUpForm() {
 
   return (
     <View style={styles.form}>
-      {error ? <Notice tone="error">{error.message}</Notice> : null}
+      <FormProblem error={error} />
       <TextField
         label="Your name"
         testID="sign-up-name"

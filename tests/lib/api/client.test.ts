@@ -52,7 +52,13 @@ describe('apiRequest', () => {
   it('carries code, status and field messages of a 400 answer', async () => {
     answer(
       400,
-      JSON.stringify({ error: { code: 'bad_request', message: 'Check the fields', fields: { email: ['Enter a valid e-mail address'] } } }),
+      JSON.stringify({
+        error: {
+          code: 'bad_request',
+          message: 'Check the fields',
+          fields: { email: ['Enter a valid e-mail address'] },
+        },
+      }),
     );
     const error = await failure(apiRequest('POST', '/api/auth/sign-in', z.object({}), {}));
     expect(error.code).toBe('bad_request');

@@ -15,7 +15,13 @@ describe('draftToJobFields', () => {
   });
 
   it('puts a message under each field that does not read or does not pass the shared schema', () => {
-    const result = draftToJobFields({ ...emptyJobDraft(), name: '', yearBuilt: 'old', stories: '9', groundSnowPsf: '-5' });
+    const result = draftToJobFields({
+      ...emptyJobDraft(),
+      name: '',
+      yearBuilt: 'old',
+      stories: '9',
+      groundSnowPsf: '-5',
+    });
     expect(result.ok).toBe(false);
     if (result.ok) return;
     expect(result.fields.name).toEqual(['Give the job a name']);
