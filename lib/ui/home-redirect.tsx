@@ -1,7 +1,7 @@
 import { Redirect } from 'expo-router';
-import { SessionGate } from './session-gate';
 import { useMe } from '@/lib/hooks/use-me';
 import { homePathForRole } from './nav-items';
+import { SessionGate } from './session-gate';
 
 function RoleHome() {
   const { data: me } = useMe();
