@@ -218,10 +218,11 @@ export function stateMaxEiDeflection(s: SpanState): Extremum {
   let bestAt = s.spanFt / 2;
   for (let i = 0; i + 1 < xs.length; i++) {
     const h = xs[i + 1] - xs[i];
+    const steps = momentKeepsSign(s, i, h) ? 1 : SLOPE_SCAN_STEPS;
     let tLo = 0;
     let sLo = eiSlopeIn(s, i, 0);
-    for (let k = 1; k <= SLOPE_SCAN_STEPS; k++) {
-      const tHi = k === SLOPE_SCAN_STEPS ? h : (k * h) / SLOPE_SCAN_STEPS;
+    for (let k = 1; k <= steps; k++) {
+      const tHi = k === steps ? h : (k * h) / steps;
       const sHi = eiSlopeIn(s, i, tHi);
       if ((sLo <= 0 && sHi >= 0) || (sLo >= 0 && sHi <= 0)) {
         const t = slopeZero(s, i, tLo, sLo, tHi, tol);
@@ -236,6 +237,25 @@ export function stateMaxEiDeflection(s: SpanState): Extremum {
     }
   }
   return { value: bestValue, atFt: bestAt };
+}
+
+/**
+ * True when the moment keeps one sign over segment i (checked at both ends and where the shear is zero): the
+ * slope is then monotonic there and has at most one zero, so one bracket suffices.
+ */
+function momentKeepsSign(s: SpanState, i: number, h: number): boolean {
+  const m0 = s.momentLbFt[i];
+  const v0 = s.vAfterLb[i];
+  const w = s.wPlf[i];
+  const m1 = m0 + v0 * h - (w * h * h) / 2;
+  let lo = Math.min(m0, m1);
+  let hi = Math.max(m0, m1);
+  if (w !== 0 && v0 / w > 0 && v0 / w < h) {
+    const mPeak = m0 + (v0 * v0) / (2 * w);
+    lo = Math.min(lo, mPeak);
+    hi = Math.max(hi, mPeak);
+  }
+  return lo >= 0 || hi <= 0;
 }
 
 /** Zero of the slope on segment i between tLo and tHi (a sign change), Newton inside the bracket. */

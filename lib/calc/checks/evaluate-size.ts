@@ -104,13 +104,12 @@ export function evaluateSize(
   const glulam = section.family === 'glulam';
   const Kcr = prepared.creepKcr;
   const n = combinations.length;
-  const FbPrime = new Array<number>(n).fill(0);
-  const stabilities = new Array<BeamStability | null>(n).fill(null);
-  const bendBound = new Array<number>(n).fill(-1);
-  const totalBound = new Array<number>(n).fill(-1);
+  const { FbPrime, stabilities, bendBound, totalBound } = prepared.work;
+  bendBound.fill(-1);
+  totalBound.fill(-1);
 
   let shear: SizeEvaluation['shear'] | null = null;
-  let live: SizeEvaluation['deflectionLive'] = {
+  const live: SizeEvaluation['deflectionLive'] = {
     id: 'deflection-live',
     demand: 0,
     capacity: liveLimitIn,
@@ -170,14 +169,20 @@ export function evaluateSize(
     rightLb = Math.max(rightLb, rR);
 
     const liveIn = Math.abs(prep.eiVariableDeflection.value) * toIn;
-    if (liveIn > live.demand)
-      live = { ...live, demand: liveIn, ratio: liveIn / liveLimitIn, combinationIndex: c };
+    if (liveIn > live.demand) {
+      live.demand = liveIn;
+      live.ratio = liveIn / liveLimitIn;
+      live.combinationIndex = c;
+    }
   }
   if (!shear) throw new CalcInputError('sources', 'No load combination carries load: add a load source');
 
   let bending: BendingNumbers | null = null;
-  for (const c of byBoundDescending(bendBound)) {
-    if (bending && bendBound[c] <= bending.ratio) break;
+  const firstBend = largestIndex(bendBound);
+  for (let k = -1; k < n; k++) {
+    const c = k < 0 ? firstBend : k;
+    if ((k >= 0 && c === firstBend) || bendBound[c] < 0 || (bending && bendBound[c] <= bending.ratio))
+      continue;
     const prep = combinations[c];
     combineStates(scratch, [prep.state, unitSelfWeight], [1, s * (prep.combination.factors.D ?? 0)]);
     const momentLbFt = Math.abs(stateMaxMoment(scratch).value);
@@ -200,8 +205,11 @@ export function evaluateSize(
 
   let total: SizeEvaluation['deflectionTotal'] | null = null;
   const extra = Kcr - 1;
-  for (const c of byBoundDescending(totalBound)) {
-    if (total && totalBound[c] <= total.demand) break;
+  const firstTotal = largestIndex(totalBound);
+  for (let k = -1; k < n; k++) {
+    const c = k < 0 ? firstTotal : k;
+    if ((k >= 0 && c === firstTotal) || totalBound[c] < 0 || (total && totalBound[c] <= total.demand))
+      continue;
     const prep = combinations[c];
     combineStates(
       scratch,
@@ -249,11 +257,11 @@ export function evaluateSize(
   };
 }
 
-/** Indices of the non-negative bounds, largest first (skipped combinations carry −1). */
-function byBoundDescending(bounds: readonly number[]): number[] {
-  const order: number[] = [];
-  for (let i = 0; i < bounds.length; i++) if (bounds[i] >= 0) order.push(i);
-  return order.sort((a, b) => bounds[b] - bounds[a]);
+/** Index of the largest bound (the combination most likely to govern, solved first so the rest can be skipped). */
+function largestIndex(bounds: readonly number[]): number {
+  let best = 0;
+  for (let i = 1; i < bounds.length; i++) if (bounds[i] > bounds[best]) best = i;
+  return best;
 }
 
 function bearingNumbers(

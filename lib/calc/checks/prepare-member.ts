@@ -7,7 +7,7 @@ import {
   stateMaxMoment,
   type SpanState,
 } from '@/lib/calc/analysis/span-state';
-import type { BeamStabilityCase } from '@/lib/calc/factors';
+import type { BeamStability, BeamStabilityCase } from '@/lib/calc/factors';
 import { asdCombinations, buildMemberLoads, type TakedownLine } from '@/lib/calc/loads';
 import { roofSnowLoad } from '@/lib/calc/snow';
 import { LOAD_TYPES, type BeamLoad, type LoadCombination, type LoadType } from '@/lib/calc/types';
@@ -78,6 +78,13 @@ export interface PreparedMember {
   combinations: PreparedCombination[];
   /** Scratch state reused by evaluateSize (no allocation per size). */
   scratch: SpanState;
+  /** Per-combination work arrays reused by evaluateSize (no allocation per size). */
+  work: {
+    FbPrime: number[];
+    stabilities: (BeamStability | null)[];
+    bendBound: number[];
+    totalBound: number[];
+  };
   /** End shears per load type and for the unit self-weight, by depth (see endShearsFor). */
   shearCache: Map<number, EndShears>;
 }
@@ -181,6 +188,18 @@ export function prepareMember(input: MemberLoadingInput): PreparedMember {
         : types.some((t) => t !== 'D' && loadsByType[t].length === 0);
     const coeffs = LOAD_TYPES.map((t) => combination.factors[t] ?? 0);
     const state = combineStates(emptySpanState(L, xs), typeStates, coeffs);
+    if (skipped) {
+      const none = { value: 0, atFt: L / 2 };
+      return {
+        combination,
+        skipped,
+        state,
+        eiVariableDeflection: none,
+        sustainedLiveFactor: 0,
+        maxMomentLbFt: 0,
+        eiTotalDeflection: 0,
+      };
+    }
     const variableCoeffs = coeffs.map((c, i) => (LOAD_TYPES[i] === 'D' ? 0 : c));
     const eiVariableDeflection = variableCoeffs.some((c) => c !== 0)
       ? stateMaxEiDeflection(combineStates(scratch, typeStates, variableCoeffs))
@@ -224,6 +243,12 @@ export function prepareMember(input: MemberLoadingInput): PreparedMember {
     creepKcr,
     combinations,
     scratch,
+    work: {
+      FbPrime: combinations.map(() => 0),
+      stabilities: combinations.map(() => null),
+      bendBound: combinations.map(() => -1),
+      totalBound: combinations.map(() => -1),
+    },
     shearCache: new Map(),
   };
 }

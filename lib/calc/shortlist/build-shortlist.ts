@@ -143,7 +143,12 @@ export function buildShortlist(input: ShortlistInput): ShortlistResult {
       checked++;
       const ratio = evaluation.governing.ratio;
       const b = evaluation.bearing;
-      if (!evaluation.pass && b.ratio > 1 && failingText(evaluation, comboName).split('; ').length === 1) {
+      const othersPass =
+        evaluation.bending.ratio <= 1 &&
+        evaluation.shear.ratio <= 1 &&
+        evaluation.deflectionLive.ratio <= 1 &&
+        evaluation.deflectionTotal.ratio <= 1;
+      if (b.ratio > 1 && othersPass) {
         bearingOnly++;
         bearingNeededIn = Math.min(bearingNeededIn, b.demand);
       }

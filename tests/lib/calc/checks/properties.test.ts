@@ -67,8 +67,13 @@ describe('member check properties', () => {
   it('the governing ratio never falls when the span grows or the loads grow', () => {
     fc.assert(
       fc.property(memberArb, fc.double({ min: 1.01, max: 2, noNaN: true }), (body, k) => {
-        const base = check(body).governing.ratio;
-        const longer = check({ ...body, clearSpanFt: Math.min(40, body.clearSpanFt * k) }).governing.ratio;
+        // span: uniform loads only (a point load fixed in place may sit nearer mid-span on a longer span and
+        // lower an end shear — physics, not a defect)
+        const uniformOnly = { ...body, sources: body.sources.filter((s) => s.kind !== 'point') };
+        const base = check(uniformOnly).governing.ratio;
+        const longer = check({ ...uniformOnly, clearSpanFt: Math.min(40, body.clearSpanFt * k) }).governing
+          .ratio;
+        const loaded = check(body).governing.ratio;
         const heavier = check({
           ...body,
           sources: body.sources.map((s) =>
@@ -76,7 +81,7 @@ describe('member check properties', () => {
           ),
         }).governing.ratio;
         expect(longer).toBeGreaterThanOrEqual(base * (1 - 1e-9));
-        expect(heavier).toBeGreaterThanOrEqual(base * (1 - 1e-9));
+        expect(heavier).toBeGreaterThanOrEqual(loaded * (1 - 1e-9));
       }),
       { numRuns: 150 },
     );

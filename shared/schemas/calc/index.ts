@@ -1,0 +1,8 @@
+/** Zod contracts of the calculation engine's inputs and results, shared by client and server. */
+export * from './units';
+export * from './loads';
+export * from './materials';
+export * from './framing';
+export * from './member';
+export * from './shortlist';
+export * from './span-table';
