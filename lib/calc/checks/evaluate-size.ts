@@ -28,6 +28,7 @@ export interface CheckNumbers {
   combinationIndex: number;
 }
 
+/** Bending numbers: moment lb·ft, C_D and the beam stability result of the governing combination (NDS 2018 §3.3). */
 export interface BendingNumbers extends CheckNumbers {
   momentLbFt: number;
   CD: number;
@@ -36,6 +37,7 @@ export interface BendingNumbers extends CheckNumbers {
   volumeOrStability: 'C_L' | 'C_V';
 }
 
+/** Bearing numbers: largest reactions lb, required bearing length in, and what governs (NDS 2018 §3.10). */
 export interface BearingNumbers extends CheckNumbers {
   leftLb: number;
   rightLb: number;

@@ -5,6 +5,7 @@ export const DEFAULT_JOIST_SPACING_IN = 16;
 /** Default least clear height under a dropped member, in: a 6 ft 8 in door (common practice). */
 export const DEFAULT_MIN_HEADROOM_IN = 80;
 
+/** What mounting asks for: depth fit, hangers (flush), headroom in (dropped) and requirements in words. */
 export interface MountResult {
   kind: 'dropped' | 'flush';
   /** Flush: depth within the joist depth; dropped: headroom met; null when the needed input is missing. */
