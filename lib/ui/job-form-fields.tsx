@@ -28,7 +28,7 @@ export function JobFormFields({ draft, set, errors }: JobFormFieldsProps) {
       <Card title="The house">
         <TextField
           label="Job name"
-          hint="What your crew calls it, e.g. “Miller kitchen wall”."
+          hint="What your crew calls it, e.g. “Alder Street hallway”."
           testID="job-name"
           value={draft.name}
           onChangeText={set('name')}

@@ -4,10 +4,10 @@ import type { Job } from '@/shared/schemas/jobs';
 
 describe('draftToJobFields', () => {
   it('turns typed text into job fields, blanks into "not known"', () => {
-    const result = draftToJobFields({ ...emptyJobDraft(), name: ' Miller kitchen ', roofPitchIn12: '7 1/2' });
+    const result = draftToJobFields({ ...emptyJobDraft(), name: ' Alder hallway ', roofPitchIn12: '7 1/2' });
     expect(result.ok).toBe(true);
     if (!result.ok) return;
-    expect(result.value.name).toBe('Miller kitchen');
+    expect(result.value.name).toBe('Alder hallway');
     expect(result.value.roofPitchIn12).toBe(7.5);
     expect(result.value.yearBuilt).toBeNull();
     expect(result.value.buildingWidthFt).toBeNull();
