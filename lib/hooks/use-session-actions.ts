@@ -50,8 +50,7 @@ export function useSessionActions() {
         await signOut();
         setActiveOrgId(null);
         await mutate(isFirmScopedKey, undefined, { revalidate: false });
-        if (!returnTo) return router.replace('/sign-in');
-        router.replace(returnTo);
+        router.replace(returnTo ?? '/sign-in');
         await mutate(keys.me(null));
       },
       [mutate, router],
