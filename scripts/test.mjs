@@ -25,7 +25,9 @@ function ensureChromium() {
   if (found) return found;
   if (process.getuid?.() !== 0) throw new Error('Debian chromium is missing and this user cannot install it');
   console.log('\n▶ installing Debian chromium for the browser tests');
-  execSync('apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium', { stdio: 'inherit' });
+  execSync('apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium', {
+    stdio: 'inherit',
+  });
   return spawnSync('sh', ['-c', 'command -v chromium'], { encoding: 'utf8' }).stdout.trim();
 }
 
@@ -34,17 +36,36 @@ run('format (prettier --check)', 'npx', ['prettier', '--check', '.', '--log-leve
 run('lint (eslint)', 'npx', ['eslint', '.']);
 run('types (tsc --noEmit)', 'npx', ['tsc', '--noEmit']);
 run('unit and API tests (vitest)', 'npx', [
-  'vitest', 'run', '--config', 'vitest.config.mts',
-  '--reporter=default', '--reporter=json', '--outputFile.json=test-results/unit.json',
+  'vitest',
+  'run',
+  '--config',
+  'vitest.config.mts',
+  '--reporter=default',
+  '--reporter=json',
+  '--outputFile.json=test-results/unit.json',
 ]);
 countVitest('test-results/unit.json');
 
-if (run('web export (expo export)', 'npx', ['expo', 'export', '--platform', 'web', '--output-dir', 'dist'], { CI: '1' })) {
+if (
+  run('web export (expo export)', 'npx', ['expo', 'export', '--platform', 'web', '--output-dir', 'dist'], {
+    CI: '1',
+  })
+) {
   const chromium = ensureChromium();
-  run('browser tests (playwright-core + Debian chromium)', 'npx', [
-    'vitest', 'run', '--config', 'vitest.e2e.config.mts',
-    '--reporter=default', '--reporter=json', '--outputFile.json=test-results/e2e.json',
-  ], { CHROMIUM_PATH: chromium });
+  run(
+    'browser tests (playwright-core + Debian chromium)',
+    'npx',
+    [
+      'vitest',
+      'run',
+      '--config',
+      'vitest.e2e.config.mts',
+      '--reporter=default',
+      '--reporter=json',
+      '--outputFile.json=test-results/e2e.json',
+    ],
+    { CHROMIUM_PATH: chromium },
+  );
   countVitest('test-results/e2e.json');
 }
 

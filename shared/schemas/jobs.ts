@@ -20,12 +20,30 @@ export const jobInputSchema = z.object({
     .max(currentYear + 1, { message: 'Year built cannot be in the future' })
     .nullable()
     .default(null),
-  stories: z.number().int().min(1, { message: 'At least 1 story' }).max(4, { message: 'At most 4 stories' }).default(1),
+  stories: z
+    .number()
+    .int()
+    .min(1, { message: 'At least 1 story' })
+    .max(4, { message: 'At most 4 stories' })
+    .default(1),
   roofType: z.enum(roofTypes).default('gable'),
-  roofPitchIn12: z.number().min(0, { message: 'Slope cannot be negative' }).max(24, { message: 'At most 24 in 12' }).default(6),
-  buildingWidthFt: z.number().positive({ message: 'Enter a width above 0' }).max(80, { message: 'At most 80 ft' }).nullable().default(null),
+  roofPitchIn12: z
+    .number()
+    .min(0, { message: 'Slope cannot be negative' })
+    .max(24, { message: 'At most 24 in 12' })
+    .default(6),
+  buildingWidthFt: z
+    .number()
+    .positive({ message: 'Enter a width above 0' })
+    .max(80, { message: 'At most 80 ft' })
+    .nullable()
+    .default(null),
   loadStandard: loadStandardSchema.default('ASCE 7-22'),
-  groundSnowPsf: z.number().min(0, { message: 'Ground snow cannot be negative' }).max(300, { message: 'At most 300 psf' }).default(0),
+  groundSnowPsf: z
+    .number()
+    .min(0, { message: 'Ground snow cannot be negative' })
+    .max(300, { message: 'At most 300 psf' })
+    .default(0),
   groundSnowSource: z.string().trim().max(300).default(''),
   foundation: z.enum(foundationTypes).default('unknown'),
   notes: z.string().max(5000).default(''),

@@ -64,10 +64,26 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
 
 describe('demo roles see only what their role may see (phone)', () => {
   const cases = [
-    { email: 'owner@demo.tributary.test', visible: ['nav-jobs', 'nav-members', 'nav-account'], hidden: ['nav-requests'] },
-    { email: 'contractor@demo.tributary.test', visible: ['nav-jobs', 'nav-account'], hidden: ['nav-members', 'nav-requests'] },
-    { email: 'estimator@demo.tributary.test', visible: ['nav-jobs', 'nav-account'], hidden: ['nav-members', 'nav-requests'] },
-    { email: 'engineer@demo.tributary.test', visible: ['nav-requests', 'nav-account'], hidden: ['nav-jobs', 'nav-members'] },
+    {
+      email: 'owner@demo.tributary.test',
+      visible: ['nav-jobs', 'nav-members', 'nav-account'],
+      hidden: ['nav-requests'],
+    },
+    {
+      email: 'contractor@demo.tributary.test',
+      visible: ['nav-jobs', 'nav-account'],
+      hidden: ['nav-members', 'nav-requests'],
+    },
+    {
+      email: 'estimator@demo.tributary.test',
+      visible: ['nav-jobs', 'nav-account'],
+      hidden: ['nav-members', 'nav-requests'],
+    },
+    {
+      email: 'engineer@demo.tributary.test',
+      visible: ['nav-requests', 'nav-account'],
+      hidden: ['nav-jobs', 'nav-members'],
+    },
   ];
   for (const role of cases) {
     it(role.email, async () => {

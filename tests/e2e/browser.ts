@@ -21,7 +21,9 @@ const FLAGS = [
 ];
 
 /** Opens Debian's chromium with a fresh profile at the given viewport. Close with the returned `close`. */
-export async function openBrowser(name: ViewportName): Promise<{ page: Page; context: BrowserContext; close: () => Promise<void> }> {
+export async function openBrowser(
+  name: ViewportName,
+): Promise<{ page: Page; context: BrowserContext; close: () => Promise<void> }> {
   const executablePath = process.env.CHROMIUM_PATH || '/usr/bin/chromium';
   const profile = mkdtempSync(join(tmpdir(), 'tributary-chromium-'));
   const { width, height, ...device } = viewports[name];
