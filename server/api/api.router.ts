@@ -6,6 +6,8 @@ import type { Mailer } from '@/server/services/mail/mailer';
 import type { Sessions } from '@/server/services/sessions';
 import { authRouter } from './auth/auth.router';
 import { createAuthService } from './auth/auth.service';
+import { calcRouter } from './calc/calc.router';
+import { createCalcService } from './calc/calc.service';
 import { devMailRouter } from './dev-mail/dev-mail.router';
 import { healthRouter } from './health/health.router';
 import { invitationsRouter } from './invitations/invitations.router';
@@ -40,6 +42,7 @@ export function apiRouter(options: ApiOptions): Router {
   router.use('/orgs', orgsRouter({ db, orgs: createOrgsService(options) }));
   router.use('/invitations', invitationsRouter({ invitations: createInvitationsService(db), me, sessions }));
   router.use('/jobs', jobsRouter({ db, jobs: createJobsService(db) }));
+  router.use('/calc', calcRouter({ calc: createCalcService() }));
   if (options.devMail) router.use('/dev/mail', devMailRouter({ db }));
   router.use(() => {
     throw new AppError('not_found', 'No such API route');
