@@ -1,4 +1,4 @@
-import type { Request } from 'express';
+import type { Request, RequestHandler } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import { AppError } from '@/server/app-error';
 
@@ -14,8 +14,10 @@ function emailOf(req: Request): string {
   return typeof email === 'string' ? email.trim().toLowerCase() : '';
 }
 
-/** Failed sign-in attempts per client address and e-mail; successful ones do not count. */
-export function signInLimit(options: RateLimitOptions) {
+/** A client address may fail this many times the per-e-mail limit, across all e-mails, in one window. */
+export const ADDRESS_LIMIT_MULTIPLE = 10;
+
+function limiter(options: RateLimitOptions, key: (req: Request) => string) {
   const minutes = Math.ceil(options.windowMs / 60000);
   return rateLimit({
     windowMs: options.windowMs,
@@ -23,8 +25,20 @@ export function signInLimit(options: RateLimitOptions) {
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     skipSuccessfulRequests: true,
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${emailOf(req)}`,
+    keyGenerator: key,
     handler: (_req, _res, next) =>
       next(new AppError('rate_limited', `Too many sign-in attempts. Try again in ${minutes} minutes.`)),
   });
+}
+
+/**
+ * Failed sign-in attempts are limited twice: per client address and e-mail (guessing one person's password)
+ * and per client address alone at a multiple of that (trying many e-mails). Successful ones do not count.
+ */
+export function signInLimit(options: RateLimitOptions): RequestHandler {
+  const address = (req: Request) => ipKeyGenerator(req.ip ?? '');
+  const byAddress = limiter({ ...options, limit: options.limit * ADDRESS_LIMIT_MULTIPLE }, address);
+  const byEmail = limiter(options, (req) => `${address(req)}|${emailOf(req)}`);
+  return (req, res, next) =>
+    byAddress(req, res, (error?: unknown) => (error ? next(error) : byEmail(req, res, next)));
 }

@@ -5,6 +5,7 @@ import { sessions, users } from '@/db/schema';
 import { meSchema } from '@/shared/schemas/auth';
 import { apiErrorBodySchema } from '@/shared/errors';
 import { createTestServer, signUpBody, signedUpAgent, type TestServer } from '@/tests/helpers/server';
+import { ADDRESS_LIMIT_MULTIPLE } from '@/server/middleware/sign-in-limit';
 
 let server: TestServer;
 beforeEach(async () => {
@@ -118,6 +119,20 @@ describe('POST /api/auth/sign-in', () => {
       .post('/api/auth/sign-in')
       .send({ email: 'someone.else@example.test', password: 'wrong one' })
       .expect(401);
+  });
+  it('answers 429 when one address fails across many e-mails', async () => {
+    // The test server allows 3 failures per e-mail, so 30 per address (ADDRESS_LIMIT_MULTIPLE = 10).
+    for (let attempt = 0; attempt < 3 * ADDRESS_LIMIT_MULTIPLE; attempt += 1) {
+      await request(server.app)
+        .post('/api/auth/sign-in')
+        .send({ email: `spray-${attempt}@example.test`, password: 'wrong one' })
+        .expect(401);
+    }
+    const limited = await request(server.app)
+      .post('/api/auth/sign-in')
+      .send({ email: 'spray-last@example.test', password: 'wrong one' })
+      .expect(429);
+    expect(limited.body.error.code).toBe('rate_limited');
   });
 });
 
