@@ -1,6 +1,7 @@
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
-import express, { type Express } from 'express';
+import compression from 'compression';
+import express, { type Express, type Response } from 'express';
 import type { Db } from '@/db/client';
 import { apiRouter } from './api/api.router';
 import { readSession } from './middleware/auth';
@@ -28,6 +29,13 @@ export interface AppOptions {
   log?: (line: string) => void;
 }
 
+/** Exported bundles, fonts and images carry a content hash in their path: cache them for good. */
+const HASHED_PATH = /[\\/](_expo[\\/]static|assets)[\\/]/;
+
+function cacheHeaders(res: Response, path: string): void {
+  res.setHeader('Cache-Control', HASHED_PATH.test(path) ? 'public, max-age=31536000, immutable' : 'no-cache');
+}
+
 /** Builds the Express app without listening, so tests drive it with supertest. */
 export function createApp(options: AppOptions): Express {
   const production = options.production ?? false;
@@ -41,6 +49,7 @@ export function createApp(options: AppOptions): Express {
   app.set('trust proxy', 'loopback');
   if (options.log) app.use(requestLog(options.log));
   app.use(securityHeaders(production));
+  app.use(compression());
   app.use('/api', express.json({ limit: '200kb' }), readSession(sessions), originCheck([options.appOrigin]));
   app.use(
     '/api',
@@ -56,7 +65,7 @@ export function createApp(options: AppOptions): Express {
 
   const webDir = options.webDir && resolve(options.webDir);
   if (webDir && existsSync(join(webDir, 'index.html'))) {
-    app.use(express.static(webDir, { index: false, maxAge: production ? '1h' : 0 }));
+    app.use(express.static(webDir, { index: false, setHeaders: cacheHeaders }));
     app.get('/{*splat}', (_req, res) => {
       res.sendFile(join(webDir, 'index.html'));
     });

@@ -1,4 +1,4 @@
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import nodemailer from 'nodemailer';
@@ -84,12 +84,21 @@ describe('routing', () => {
     try {
       writeFileSync(join(webDir, 'index.html'), '<!doctype html><title>Tributary</title>');
       writeFileSync(join(webDir, 'app.js'), 'console.log(1)');
+      mkdirSync(join(webDir, '_expo/static/js/web'), { recursive: true });
+      writeFileSync(join(webDir, '_expo/static/js/web/entry-abc123.js'), 'console.log(2);'.repeat(200));
       server = await createTestServer({ webDir });
       const deep = await request(server.app).get('/jobs/123/members').expect(200);
       expect(deep.headers['content-type']).toMatch(/text\/html/);
       expect(deep.text).toContain('<title>Tributary</title>');
       const asset = await request(server.app).get('/app.js').expect(200);
       expect(asset.text).toBe('console.log(1)');
+      expect(asset.headers['cache-control']).toBe('no-cache');
+      const hashed = await request(server.app).get('/_expo/static/js/web/entry-abc123.js').expect(200);
+      expect(hashed.headers['cache-control']).toBe('public, max-age=31536000, immutable');
+      const gzipped = await request(server.app)
+        .get('/_expo/static/js/web/entry-abc123.js')
+        .set('Accept-Encoding', 'gzip');
+      expect(gzipped.headers['content-encoding']).toBe('gzip');
       await request(server.app).get('/api/unknown').expect(404);
     } finally {
       rmSync(webDir, { recursive: true, force: true });
