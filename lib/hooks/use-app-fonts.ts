@@ -1,17 +1,8 @@
-import { Inter_400Regular } from '@expo-google-fonts/inter/400Regular';
-import { Inter_500Medium } from '@expo-google-fonts/inter/500Medium';
-import { Inter_600SemiBold } from '@expo-google-fonts/inter/600SemiBold';
-import { Inter_700Bold } from '@expo-google-fonts/inter/700Bold';
 import { useFonts } from 'expo-font';
-import { fonts } from '@/lib/theme';
+import { appFontFiles } from './app-font-files';
 
-/** Loads the four Inter weights the type scale uses. True once loaded, or once loading failed (system font). */
+/** Loads the app's fonts. True once loaded, or once loading failed (system font). */
 export function useAppFonts(): boolean {
-  const [loaded, error] = useFonts({
-    [fonts.regular]: Inter_400Regular,
-    [fonts.medium]: Inter_500Medium,
-    [fonts.semibold]: Inter_600SemiBold,
-    [fonts.bold]: Inter_700Bold,
-  });
+  const [loaded, error] = useFonts(appFontFiles);
   return loaded || error !== null;
 }
