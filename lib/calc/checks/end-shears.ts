@@ -1,11 +1,12 @@
 import type { BeamLoad } from '@/lib/calc/types';
 
 /**
- * Design shear at each end of a simple span from non-negative loads, lb: the shear at d from the left support
- * and at d from the right support, with uniform loads within d of a support left out and point loads within
- * d multiplied by x/d (NDS 3.4.3.1). With downward loads the shear only falls from left to right, so these
- * two values bound it over [d, L − d]. Point loads sitting on a support go straight into it. With d = 0 the
- * values are the end shears of the whole span.
+ * Design shear V at each end of a simple span from non-negative loads, lb, per NDS 3.4.3.1: uniform loads
+ * within d of a support are left out and point loads within d are multiplied by x/d, then V is the end
+ * reaction of the loads so reduced. A reduced point load near a support still adds to that support's V (it
+ * is not subtracted as a load to the left of a section at d, which would let a heavy post beside a support
+ * lower the shear). For uniform loads alone the values equal the shear at d, w(L/2 − d). Point loads sitting
+ * on a support go straight into it. With d = 0 the values are the end shears of the whole span.
  *
  * @param spanFt design span, ft
  * @param loads non-negative loads from the left support (ft, plf, lb)
@@ -21,8 +22,6 @@ export function endShearsAtD(spanFt: number, loads: readonly BeamLoad[], dFt: nu
   const hi = L - lo;
   let rA = 0;
   let rB = 0;
-  let pointsLeft = 0;
-  let pointsRight = 0;
   for (const load of loads) {
     if (load.kind === 'point') {
       const a = load.atFt;
@@ -31,8 +30,6 @@ export function endShearsAtD(spanFt: number, loads: readonly BeamLoad[], dFt: nu
       const p = fromSupportFt >= dFt ? load.pLb : (load.pLb * fromSupportFt) / dFt;
       rA += (p * (L - a)) / L;
       rB += (p * a) / L;
-      if (a < lo) pointsLeft += p;
-      if (a > hi) pointsRight += p;
       continue;
     }
     const a = Math.max(load.startFt ?? 0, lo);
@@ -43,5 +40,5 @@ export function endShearsAtD(spanFt: number, loads: readonly BeamLoad[], dFt: nu
     rA += (total * (L - centroid)) / L;
     rB += (total * centroid) / L;
   }
-  return [rA - pointsLeft, rB - pointsRight];
+  return [rA, rB];
 }
