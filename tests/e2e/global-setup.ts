@@ -1,9 +1,5 @@
-import { spawn, type ChildProcess } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import type { TestProject } from 'vitest/node';
+import { startServer, type RunningServer } from '@/tests/helpers/start-server';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -11,61 +7,14 @@ declare module 'vitest' {
   }
 }
 
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      const port = typeof address === 'object' && address ? address.port : 0;
-      probe.close(() => resolve(port));
-    });
-  });
-}
+let server: RunningServer | undefined;
 
-let server: ChildProcess | undefined;
-let dataDir = '';
-
-/** Starts the real server (exported web app + API) on a free loopback port with a throwaway database. */
+/** Starts the real server on a free loopback port with a throwaway database for the browser tests. */
 export async function setup(project: TestProject): Promise<void> {
-  const port = await freePort();
-  dataDir = mkdtempSync(join(tmpdir(), 'tributary-e2e-'));
-  const baseUrl = `http://127.0.0.1:${port}`;
-  server = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-    env: {
-      ...process.env,
-      NODE_ENV: 'test',
-      HOST: '127.0.0.1',
-      PORT: String(port),
-      APP_ORIGIN: baseUrl,
-      DATABASE_URL: join(dataDir, 'e2e.db'),
-      STORAGE_DIR: join(dataDir, 'storage'),
-      SEED_DEMO: '1',
-    },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
-  let log = '';
-  await new Promise<void>((resolve, reject) => {
-    const timer = setTimeout(() => reject(new Error(`server did not start:\n${log}`)), 60000);
-    const onData = (chunk: Buffer) => {
-      log += chunk.toString();
-      if (log.includes('listening on')) {
-        clearTimeout(timer);
-        resolve();
-      }
-    };
-    server?.stdout?.on('data', onData);
-    server?.stderr?.on('data', onData);
-    server?.once('exit', (code) => reject(new Error(`server exited with ${code}:\n${log}`)));
-  });
-  project.provide('baseUrl', baseUrl);
+  server = await startServer();
+  project.provide('baseUrl', server.baseUrl);
 }
 
 export async function teardown(): Promise<void> {
-  if (server && server.exitCode === null) {
-    const exited = new Promise((resolve) => server?.once('exit', resolve));
-    server.kill('SIGTERM');
-    await exited;
-  }
-  rmSync(dataDir, { recursive: true, force: true });
+  await server?.stop();
 }
