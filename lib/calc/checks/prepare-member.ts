@@ -66,7 +66,10 @@ export interface PreparedMember {
   loadsByType: Record<LoadType, BeamLoad[]>;
   /** Unfactored [left, right] reactions by load type, lb (dead without self-weight). */
   reactionsByType: Record<LoadType, [number, number]>;
-  /** NDS Table 3.3.3 case for C_L: uniform, a single centre point load alone, or any other loading. */
+  /**
+   * NDS Table 3.3.3 case for C_L: uniform over the whole span, a single centre point load alone, or any other
+   * loading (point loads with uniform load, partial uniform loads).
+   */
   stabilityCase: BeamStabilityCase;
   /** A unit self-weight, 1 plf over the design span, on the same breakpoints. */
   unitSelfWeight: SpanState;
@@ -172,9 +175,12 @@ export function prepareMember(input: MemberLoadingInput): PreparedMember {
   const unitSelfWeight = simpleSpanState(L, [{ kind: 'uniform', wPlf: 1 }], xs);
   const selfWeight = input.selfWeight ?? true;
   const anyUniform = selfWeight || built.loads.some((l) => l.kind === 'uniform');
+  const anyPartial = built.loads.some((l) => l.kind === 'uniform' && l.startFt !== undefined);
   const centred = pointPositions.size === 1 && Math.abs([...pointPositions][0] - L / 2) <= 1e-6 * L;
+  // Table 3.3.3's "uniformly distributed load" row is for a load over the whole span; a partial uniform load
+  // takes the "any other load" row (1.84 l_u when l_u/d > 14.3).
   const stabilityCase: BeamStabilityCase =
-    pointPositions.size === 0 ? 'uniform' : centred && !anyUniform ? 'point-center' : 'any';
+    pointPositions.size === 0 && !anyPartial ? 'uniform' : centred && !anyUniform ? 'point-center' : 'any';
   const creepKcr = creepFactor(input.wetService ?? false);
   const sustainedLive = input.sustainedLiveFraction ?? 0;
 
