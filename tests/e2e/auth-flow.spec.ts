@@ -112,3 +112,37 @@ describe('demo roles see only what their role may see (phone)', () => {
     }
   });
 });
+
+describe('invitation by e-mail (phone)', () => {
+  it('an owner invites an estimator, who follows the captured e-mail link and joins the firm', async () => {
+    const owner = await openBrowser('phone');
+    const invitee = await openBrowser('phone');
+    try {
+      const email = `hand-${Date.now()}@example.test`;
+      await signIn(owner.page, 'owner@demo.tributary.test', 'tributary-demo');
+      await owner.page.getByTestId('nav-members').click();
+      await owner.page.getByTestId('invite-email').fill(email);
+      await owner.page.getByTestId('invite-role-estimator').click();
+      await owner.page.getByTestId('invite-submit').click();
+      await owner.page.getByText(email).first().waitFor();
+
+      await invitee.page.goto(`${baseUrl}/dev/mail`);
+      const link = invitee.page.getByRole('link', { name: /\/invite\// }).first();
+      await link.waitFor();
+      const href = (await link.getAttribute('href')) ?? '';
+      expect(href).toContain('/invite/');
+      await invitee.page.goto(href);
+      await invitee.page.getByTestId('invite-name').fill('Robin Newhand');
+      await invitee.page.getByTestId('invite-password').fill('another long passphrase');
+      await snap(invitee.page, 'phone-accept-invitation');
+      await invitee.page.getByTestId('invite-accept').click();
+      await invitee.page.getByTestId('nav-jobs').waitFor();
+      expect(await invitee.page.getByTestId('nav-members').count()).toBe(0);
+      await invitee.page.getByTestId('nav-account').click();
+      await invitee.page.getByText('Estimator').first().waitFor();
+    } finally {
+      await owner.close();
+      await invitee.close();
+    }
+  });
+});
