@@ -42,7 +42,11 @@ export function describeChecks(
     { symbol: 'C_D', value: bending.CD, note: CD_NOTE },
     { symbol: 'C_M', value: section.CM.fb, note: 'wet service' },
     { symbol: 'C_t', value: section.Ct.fb, note: 'temperature' },
-    { symbol: 'C_L', value: stability.CL, note: glulam ? `${clNote}; lesser of C_L and C_V used` : clNote },
+    {
+      symbol: 'C_L',
+      value: stability.CL,
+      note: section.volumeLesserOfCL ? `${clNote}; lesser of C_L and C_V used` : clNote,
+    },
     section.sizeFactor,
     { symbol: 'C_fu', value: section.Cfu, note: 'flat use' },
     { symbol: 'C_i', value: section.Ci.fb, note: 'incising' },
@@ -51,7 +55,9 @@ export function describeChecks(
   const bendingFormula = glulam
     ? `f_b = M/S; F'_b = F_b·C_D·C_M·C_t·min(C_L, C_V)·C_r, F_b = ${ref.FbPsi} psi`
     : section.family === 'lvl'
-      ? `f_b = M/S; F'_b = F_b·C_D·C_M·C_t·C_L·C_V·C_r, F_b = ${ref.FbPsi} psi`
+      ? section.volumeLesserOfCL
+        ? `f_b = M/S; F'_b = F_b·C_D·C_M·C_t·min(C_L, C_V)·C_r (C_V ≤ 1.0, NDS 8.3.6), F_b = ${ref.FbPsi} psi`
+        : `f_b = M/S; F'_b = F_b·C_D·C_M·C_t·C_L·C_V·C_r (C_V > 1.0, NDS 8.3.6), F_b = ${ref.FbPsi} psi`
       : `f_b = M/S; F'_b = F_b·C_D·C_M·C_t·C_L·C_F·C_fu·C_i·C_r, F_b = ${ref.FbPsi} psi`;
   const dFt = (prepared.input.shearAtD ?? true) ? section.dIn / 12 : 0;
   return [

@@ -33,7 +33,7 @@ export interface BendingNumbers extends CheckNumbers {
   momentLbFt: number;
   CD: number;
   stability: BeamStability;
-  /** C_L or C_V actually used (glulam takes the lesser). */
+  /** C_L or C_V actually used (glulam, and LVL with C_V ≤ 1.0, take the lesser). */
   volumeOrStability: 'C_L' | 'C_V';
 }
 
@@ -103,7 +103,7 @@ export function evaluateSize(
   const capIn = input.deflectionCapIn ?? Infinity;
   const totalLimitIn = Math.min(ratioLimitIn, capIn);
   const toIn = IN3_PER_FT3 / eiLbIn2;
-  const glulam = section.family === 'glulam';
+  const lesser = section.volumeLesserOfCL;
   const Kcr = prepared.creepKcr;
   const n = combinations.length;
   const { FbPrime, stabilities, bendBound, totalBound } = prepared.work;
@@ -138,7 +138,7 @@ export function evaluateSize(
     });
     stabilities[c] = stability;
     FbPrime[c] =
-      section.FbBasePsi * CD * (glulam ? Math.min(stability.CL, section.sizeFactor.value) : stability.CL);
+      section.FbBasePsi * CD * (lesser ? Math.min(stability.CL, section.sizeFactor.value) : stability.CL);
     bendBound[c] = ((prep.maxMomentLbFt + swPlf * unit.momentLbFt) * IN_PER_FT) / section.sxIn3 / FbPrime[c];
     totalBound[c] = (prep.eiTotalDeflection + Kcr * swPlf * unit.eiDeflection) * toIn;
 
@@ -200,7 +200,7 @@ export function evaluateSize(
         momentLbFt,
         CD: prep.combination.CD,
         stability,
-        volumeOrStability: glulam && section.sizeFactor.value < stability.CL ? 'C_V' : 'C_L',
+        volumeOrStability: lesser && section.sizeFactor.value < stability.CL ? 'C_V' : 'C_L',
       };
     }
   }

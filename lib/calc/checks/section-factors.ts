@@ -43,9 +43,14 @@ export interface SectionFactors {
   Ci: StressFactors;
   /** C_F (sawn), C_V (glulam volume; lesser of it and C_L) or the LVL depth factor. */
   sizeFactor: FactorUse;
+  /**
+   * True when C_V and C_L are not applied together and the lesser governs: glulam always (NDS 2018 §5.3.6),
+   * structural composite lumber when its C_V ≤ 1.0 (NDS 2018 §8.3.6). F_bBase then leaves C_V out.
+   */
+  volumeLesserOfCL: boolean;
   Cfu: number;
   Cr: number;
-  /** F_b × every factor but C_D, C_L and (glulam) C_V, psi. */
+  /** F_b × every factor but C_D, C_L and C_V where volumeLesserOfCL, psi. */
   FbBasePsi: number;
   /** F_b* for C_L: F_b × all factors except C_D, C_fu, C_V and C_L (C_D is applied per combination), psi. */
   FbStarBasePsi: number;
@@ -61,7 +66,8 @@ export interface SectionFactors {
 /**
  * The load-independent adjustment factors of one size in one material, for ASD:
  * sawn F'_b = F_b·C_D·C_M·C_t·C_L·C_F·C_fu·C_i·C_r; glulam F'_b = F_b·C_D·C_M·C_t·(lesser of C_L, C_V)·C_r
- * (C_r 1.0); LVL F'_b = F_b·C_D·C_M·C_t·C_L·C_V·C_r; F'_v = F_v·C_D·C_M·C_t·C_i; F'_c⊥ = F_c⊥·C_M·C_t·C_i·C_b;
+ * (C_r 1.0); LVL F'_b = F_b·C_D·C_M·C_t·(lesser of C_L, C_V when C_V ≤ 1.0, else C_L·C_V)·C_r;
+ * F'_v = F_v·C_D·C_M·C_t·C_i; F'_c⊥ = F_c⊥·C_M·C_t·C_i·C_b;
  * E' = E·C_M·C_t·C_i. C_D and C_L are left to the combination.
  *
  * @param materialId material id; size the member size (in); designSpanFt for the glulam C_V (ft)
@@ -69,7 +75,7 @@ export interface SectionFactors {
  * @returns section (in) and factors (dimensionless), stresses in psi
  * @throws CalcInputError for flat use or incising of glulam or LVL, flat use of more than one ply
  * @example sectionFactors('sawn-hem-fir-no1', getSize('sawn-hem-fir-no1', '2x8'), 14, { wetService: false, temperatureF: 70, incised: false, flatUse: false, repetitive: true }).FbBasePsi; // 975 × 1.2 × 1.15 = 1345.5
- * Reference: NDS 2018 Table 4.3.1 (sawn), Table 5.3.1 (glulam), Table 8.3.1 (SCL).
+ * Reference: NDS 2018 Table 4.3.1 (sawn), Table 5.3.1 and §5.3.6 (glulam), Table 8.3.1 and §8.3.6 (SCL).
  */
 export function sectionFactors(
   materialId: string,
@@ -95,6 +101,7 @@ export function sectionFactors(
   const common = reference.FbPsi * CM.fb * Ct.fb * Ci.fb * Cr;
   const sawn = family === 'sawn';
   const flat = conditions.flatUse;
+  const volumeLesserOfCL = family === 'glulam' || (family === 'lvl' && sizeFactor.value <= 1);
   const bIn = flat ? size.dIn : size.bIn;
   const dIn = flat ? size.bIn : size.dIn;
   return {
@@ -109,9 +116,10 @@ export function sectionFactors(
     Ct,
     Ci,
     sizeFactor,
+    volumeLesserOfCL,
     Cfu,
     Cr,
-    FbBasePsi: common * Cfu * (family === 'glulam' ? 1 : sizeFactor.value),
+    FbBasePsi: common * Cfu * (volumeLesserOfCL ? 1 : sizeFactor.value),
     FbStarBasePsi: common * (sawn ? sizeFactor.value : 1),
     FvBasePsi: reference.FvPsi * CM.fv * Ct.fv * Ci.fv,
     FcPerpPrimePsi: reference.FcPerpPsi * CM.fcPerp * Ct.fcPerp * Ci.fcPerp,

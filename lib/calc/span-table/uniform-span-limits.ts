@@ -102,7 +102,12 @@ export function uniformSpanLimits(
         (FbNoCv * glulamVolumeFactor({ spanFt: L, dIn: size.dIn, bIn: size.bIn, speciesGroup: group }));
       take('bending', bisectSpan(ratio), c.name);
     } else {
-      take('bending', bendingSpan(FbNoCv), c.name);
+      // C_L = 1.0 here, so where C_V and C_L are not combined (LVL with C_V ≤ 1.0) the lesser is C_V.
+      take(
+        'bending',
+        bendingSpan(FbNoCv * (section.volumeLesserOfCL ? section.sizeFactor.value : 1)),
+        c.name,
+      );
     }
     take('shear', 2 * ((section.FvBasePsi * c.CD * section.areaIn2) / (1.5 * wc) + dFt), c.name);
     take('bearing', (2 * perInLb * spanCase.bearingIn) / wc, c.name);
