@@ -10,6 +10,7 @@ import {
 import {
   materialSpec,
   referenceValues,
+  thicknessClass,
   type DesignValues,
   type MaterialFamily,
   type MemberSize,
@@ -97,7 +98,9 @@ export function sectionFactors(
   const Ci = incisingFactors(conditions.incised && family === 'sawn');
   const sizeFactor = bendingSizeFactor(materialId, size, designSpanFt);
   const Cfu = conditions.flatUse ? flatUseFactor(materialId, size) : 1;
-  const Cr = repetitiveMemberFactor(family, conditions.repetitive);
+  // C_r is for dimension lumber 2 in to 4 in thick (NDS 2018 §4.3.9), never for timbers 5 in and thicker.
+  const timber = family === 'sawn' && thicknessClass(size) === 'timber';
+  const Cr = repetitiveMemberFactor(family, conditions.repetitive && !timber);
   const common = reference.FbPsi * CM.fb * Ct.fb * Ci.fb * Cr;
   const sawn = family === 'sawn';
   const flat = conditions.flatUse;
