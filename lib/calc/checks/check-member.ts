@@ -184,9 +184,13 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
     byType[t] = { leftLb: leftLb + sw, rightLb: rightLb + sw };
   }
   const governingCheck = checks.find((c) => c.id === evaluation.governing.id) ?? checks[0];
+  const posts = postsFor(prepared, evaluation);
+  if (posts?.some((p) => !p.pass)) {
+    warnings.push('A post under the member fails its check: choose a larger post or brace it.');
+  }
   const result: MemberCheckResult = {
     caution: CAUTION_TEXT,
-    pass: checks.every((c) => c.pass) && mount.depthFits !== false,
+    pass: checks.every((c) => c.pass) && mount.depthFits !== false && (posts?.every((p) => p.pass) ?? true),
     member: {
       kind: input.kind,
       label: input.label,
@@ -232,7 +236,7 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
       governedBy: evaluation.bearing.governedBy,
     },
     mount,
-    posts: postsFor(prepared, evaluation),
+    posts,
     warnings,
     sources: baseSources(prepared, material.source),
   };
