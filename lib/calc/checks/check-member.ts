@@ -210,6 +210,18 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
       plateLabel: support.plateLabel,
       supportWidthIn: support.spec.widthIn,
     }),
+    ...(prepared.snow && {
+      snow: {
+        pfPsf: prepared.snow.pfPsf,
+        psPsf: prepared.snow.psPsf,
+        pmPsf: prepared.snow.pmPsf,
+        designPsf: prepared.snow.designPsf,
+        governing: prepared.snow.governing,
+        factors: prepared.snow.factors,
+        notes: prepared.snow.notes,
+        reference: prepared.snow.reference,
+      },
+    }),
     takedown,
     combinations: prepared.combinations.map((c) => ({
       name: c.combination.name,

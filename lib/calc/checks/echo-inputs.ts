@@ -6,7 +6,8 @@ type Field = keyof MemberCheckInput;
 
 /**
  * The member's inputs as used, each with its flag: a field the user left out is `default`; a field given
- * takes the flag in `input.flags`, else `assumed`.
+ * takes the flag in `input.flags`, else `assumed`. Snow inputs (ground snow and its factors) are echoed as
+ * `snow.<name>` with the flag given for `snow.<name>`, else for `snow`, else `assumed`.
  *
  * @param input member input; spans resolved spans (ft, in); used the values actually used by field
  * @returns echoed inputs with labels and units
@@ -32,6 +33,30 @@ export function echoInputs(
   add('sizeId', 'Size', used.sizeLabel);
   add('gradeUnknown', 'Grade unknown', input.gradeUnknown ?? false);
   add('roofPitchIn12', 'Roof slope (in 12)', input.roofPitchIn12 ?? 0);
+  if (input.snow) {
+    const snow = input.snow;
+    const addSnow = (
+      key: keyof typeof snow,
+      label: string,
+      value: number | string | boolean,
+      unit?: string,
+    ) =>
+      out.push({
+        field: `snow.${key}`,
+        label,
+        value,
+        unit,
+        flag: input.flags?.[`snow.${key}`] ?? input.flags?.snow ?? 'assumed',
+      });
+    addSnow('groundSnowPsf', 'Ground snow p_g', snow.groundSnowPsf, 'psf');
+    addSnow('riskCategory', 'Risk category', snow.riskCategory);
+    addSnow('exposureCe', 'Exposure factor C_e', snow.exposureCe);
+    addSnow('thermalCt', 'Thermal factor C_t', snow.thermalCt);
+    if (snow.importanceIs !== undefined)
+      addSnow('importanceIs', 'Snow importance factor I_s', snow.importanceIs);
+    addSnow('slipperyUnobstructed', 'Unobstructed slippery roof', snow.slipperyUnobstructed);
+    addSnow('roofStepsDown', 'Roof steps down (drift)', snow.roofStepsDown);
+  }
   add('selfWeight', 'Self-weight included', input.selfWeight ?? true);
   add('wetService', 'Wet service', input.wetService ?? false);
   add('temperatureF', 'Service temperature', input.temperatureF ?? 70, '°F');

@@ -9,7 +9,7 @@ import {
 } from '@/lib/calc/analysis/span-state';
 import type { BeamStability, BeamStabilityCase } from '@/lib/calc/factors';
 import { asdCombinations, buildMemberLoads, type TakedownLine } from '@/lib/calc/loads';
-import { roofSnowLoad } from '@/lib/calc/snow';
+import { roofSnowLoad, type RoofSnow } from '@/lib/calc/snow';
 import { LOAD_TYPES, type BeamLoad, type LoadCombination, type LoadType } from '@/lib/calc/types';
 import type { LoadSource } from '@/shared/schemas/calc/loads';
 import type { MemberLoadingInput } from '@/shared/schemas/calc/member';
@@ -63,6 +63,8 @@ export interface PreparedMember {
   warnings: string[];
   sources: string[];
   roofSnowPsf: number;
+  /** The roof snow worked out from the member's snow inputs (p_f, p_s, p_m, factors), null without snow. */
+  snow: RoofSnow | null;
   loadsByType: Record<LoadType, BeamLoad[]>;
   /** Unfactored [left, right] reactions by load type, lb (dead without self-weight). */
   reactionsByType: Record<LoadType, [number, number]>;
@@ -136,8 +138,9 @@ export function prepareMember(input: MemberLoadingInput): PreparedMember {
   const sources: string[] = [`${input.edition} §2.4.1 ASD load combinations`];
   const roofPitchIn12 = input.roofPitchIn12 ?? 0;
   let roofSnowPsf = 0;
+  let snow: RoofSnow | null = null;
   if (input.snow) {
-    const snow = roofSnowLoad({ ...input.snow, edition: input.edition, roofPitchIn12 });
+    snow = roofSnowLoad({ ...input.snow, edition: input.edition, roofPitchIn12 });
     roofSnowPsf = snow.designPsf;
     warnings.push(...snow.warnings);
     sources.push(`${snow.reference} (roof snow)`);
@@ -239,6 +242,7 @@ export function prepareMember(input: MemberLoadingInput): PreparedMember {
     warnings,
     sources,
     roofSnowPsf,
+    snow,
     loadsByType,
     reactionsByType,
     stabilityCase,

@@ -220,6 +220,22 @@ export const memberCheckResultSchema = z.object({
     bearingRightIn: z.number(),
   }),
   inputs: z.array(echoedInputSchema),
+  /**
+   * Roof snow from the member's snow inputs, psf of horizontal projection: flat roof p_f, sloped roof p_s,
+   * low-slope minimum p_m, the design value used for roof sources (and which governs), with each factor.
+   */
+  snow: z
+    .object({
+      pfPsf: z.number(),
+      psPsf: z.number(),
+      pmPsf: z.number(),
+      designPsf: z.number(),
+      governing: z.enum(['sloped', 'minimum']),
+      factors: z.array(factorUseSchema),
+      notes: z.array(z.string()),
+      reference: z.string(),
+    })
+    .optional(),
   takedown: z.array(takedownLineSchema),
   combinations: z.array(z.object({ name: z.string(), CD: z.number(), skipped: z.boolean() })),
   checks: z.array(checkResultSchema),
