@@ -8,7 +8,10 @@ import type { SnowInput } from '@/shared/schemas/calc/loads';
 /** Snow importance factor I_s by risk category (ASCE 7-16 Table 1.5-2: I 0.8, II 1.0, III 1.1, IV 1.2). */
 const IMPORTANCE_BY_RISK: Record<SnowInput['riskCategory'], number> = { I: 0.8, II: 1.0, III: 1.1, IV: 1.2 };
 
-/** Unbalanced snow applies to hip and gable roofs sloped above 1/2 on 12 and up to 7 on 12 (§7.6.1, from memory). */
+/**
+ * Unbalanced snow applies to hip and gable roofs from 1/2 on 12 up to 7 on 12: §7.6.1 waives it only below
+ * 1/2 on 12 (2.38°) and above 7 on 12 (from memory).
+ */
 const UNBALANCED_MIN_PITCH_IN_12 = 0.5;
 const UNBALANCED_MAX_PITCH_IN_12 = 7;
 
@@ -86,7 +89,7 @@ export function roofSnowLoad(input: SnowInput): RoofSnow {
     const ridged = input.roofType === 'gable' || input.roofType === 'hip';
     if (
       ridged &&
-      input.roofPitchIn12 > UNBALANCED_MIN_PITCH_IN_12 &&
+      input.roofPitchIn12 >= UNBALANCED_MIN_PITCH_IN_12 &&
       input.roofPitchIn12 <= UNBALANCED_MAX_PITCH_IN_12
     ) {
       warnings.push(

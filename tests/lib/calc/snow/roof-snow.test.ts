@@ -102,6 +102,10 @@ describe('warnings', () => {
   it('warns of unbalanced snow on a gable between 1/2 and 7 in 12 (ASCE 7-16 §7.6.1, from memory)', () => {
     expect(snow({ groundSnowPsf: 30, roofPitchIn12: 6 }).warnings.join(' ')).toContain('Unbalanced snow');
     expect(snow({ groundSnowPsf: 30, roofPitchIn12: 8 }).warnings).toEqual([]);
+    // §7.6.1 waives unbalanced snow only for slopes less than 1/2 on 12 and more than 7 on 12: both ends count.
+    expect(snow({ groundSnowPsf: 30, roofPitchIn12: 0.5 }).warnings.join(' ')).toContain('Unbalanced snow');
+    expect(snow({ groundSnowPsf: 30, roofPitchIn12: 7 }).warnings.join(' ')).toContain('Unbalanced snow');
+    expect(snow({ groundSnowPsf: 30, roofPitchIn12: 0.25 }).warnings.join(' ')).not.toContain('Unbalanced');
     expect(snow({ groundSnowPsf: 30, roofPitchIn12: 6, roofType: 'shed' }).warnings).toEqual([]);
   });
 
