@@ -148,7 +148,7 @@ function addSource(t: Takedown, source: LoadSource, input: MemberLoadsInput, fie
     t.uniform(label, 'S', source.tributaryFt * snowPsf, `${trib} × ${n(snowPsf, 1)} psf`, extent, flag);
     return;
   }
-  const factor = source.kind === 'floor' && source.continuousOver ? CONTINUOUS_JOIST_FACTOR : 1;
+  const factor = source.continuousOver ? CONTINUOUS_JOIST_FACTOR : 1;
   const suffix = factor === 1 ? '' : ` × ${n(factor, 2)} (joists continuous over the member)`;
   t.uniform(
     label,
@@ -180,7 +180,7 @@ function addSource(t: Takedown, source: LoadSource, input: MemberLoadsInput, fie
  * - area sources: tributary width (ft) × psf; roof loads per horizontal projection, a dead load given along
  *   the slope divided by cos θ; roof snow p_s from the snow module (input.roofSnowPsf unless the source
  *   gives its own);
- * - floors with joists continuous over the member: × 1.25 (two equal spans);
+ * - floor or ceiling joists continuous over the member: × 1.25 (two equal spans);
  * - wall above: plf as given, or height × psf; point loads by type at their position; self-weight as D.
  * Zero loads are left out of `loads` and `lines`.
  *

@@ -56,6 +56,8 @@ export const ceilingSourceSchema = z.object({
   tributaryFt,
   deadPsf: nonNegative('the ceiling dead load'),
   livePsf: nonNegative('the attic live load'),
+  /** Ceiling joists run continuous over the member (not lapped or spliced over it): 1.25 × the half-span load. */
+  continuousOver: z.boolean().default(false),
 });
 
 export const floorSourceSchema = z.object({

@@ -42,6 +42,14 @@ describe('continuous joists', () => {
     expect(result.warnings.some((w) => w.includes('two equal spans'))).toBe(true);
   });
 
+  it('applies to ceiling joists continuous over the member too (AWC Design Aid No. 6, two equal spans)', () => {
+    const result = build([
+      { kind: 'ceiling', tributaryFt: 7, deadPsf: 10, livePsf: 20, continuousOver: true },
+    ]);
+    expectApprox(line(result, 'D').wPlf ?? 0, 7 * 10 * 1.25, { rel: 1e-12 });
+    expectApprox(line(result, 'L').wPlf ?? 0, 7 * 20 * 1.25, { rel: 1e-12 });
+  });
+
   it('uses 1.0 when the joists are lapped or spliced over the member', () => {
     const result = build([{ kind: 'floor', tributaryFt: 6, deadPsf: 10, livePsf: 40 }]);
     expectApprox(line(result, 'L').wPlf ?? 0, 240, { rel: 1e-12 });
