@@ -162,6 +162,11 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
   const mount = mountRequirements(input, section.dIn, size.plies);
   const warnings = [...resolved.warnings, ...prepared.warnings];
   if (material.generic) warnings.push("Generic values: confirm with the manufacturer's published values.");
+  if (input.deflectionUse === 'roof-no-ceiling' && (input.roofPitchIn12 ?? 0) <= 3) {
+    warnings.push(
+      'L/180 for a roof without a ceiling is for rafters sloped over 3 in 12 (IRC Table R301.7); a flatter roof takes L/240: choose the roof preset.',
+    );
+  }
   if (input.unbracedLengthFt === undefined) {
     warnings.push(
       'Top edge taken as braced by the framing along its length (C_L = 1.0); say so if it is not.',

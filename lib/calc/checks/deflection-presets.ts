@@ -63,6 +63,6 @@ export const DEFLECTION_PRESETS: Readonly<Record<DeflectionUse, DeflectionPreset
     liveRatio: 180,
     totalRatio: 120,
     source:
-      'IRC 2021 Table R301.7 (L/180 live, rafters with no finished ceiling attached); IBC 2018 Table 1604.3 (L/120 total, from memory)',
+      'IRC 2021 Table R301.7 (L/180 live, rafters sloped over 3:12 with no finished ceiling attached; flatter roofs take L/240); IBC 2018 Table 1604.3 (L/120 total, from memory)',
   },
 };
