@@ -1,3 +1,3 @@
-export { formatNumber, NOT_A_NUMBER_TEXT } from '@/lib/format/number';
+export { formatNumber, formatNumberTrimmed, NOT_A_NUMBER_TEXT } from '@/lib/format/number';
 export { formatFtIn, formatIn, formatSpanFtIn } from '@/lib/format/ft-in';
 export { formatLb, formatPlf, formatPsf, formatPsi, formatRatio } from '@/lib/format/quantities';

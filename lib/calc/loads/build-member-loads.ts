@@ -1,7 +1,7 @@
 import { CalcInputError, type InputFlag, type LoadType, type TypedBeamLoad } from '@/lib/calc/types';
 import type { LoadSource, MemberLoadsInput } from '@/shared/schemas/calc/loads';
 import { CONTINUOUS_JOIST_FACTOR } from '@/lib/calc/loads/continuous-joist';
-import { expressionNumber as n } from '@/lib/calc/loads/expression';
+import { formatNumberTrimmed as n } from '@/lib/format/number';
 import { roofAngleDeg, slopeToHorizontalFactor } from '@/lib/calc/loads/roof-slope';
 import type { MemberLoads, TakedownLine } from '@/lib/calc/loads/takedown-line';
 
