@@ -4,5 +4,6 @@ export * from './loads';
 export * from './materials';
 export * from './framing';
 export * from './member';
+export * from './shoring';
 export * from './shortlist';
 export * from './span-table';
