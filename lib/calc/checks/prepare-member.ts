@@ -110,6 +110,77 @@ function shift(source: LoadSource, offsetFt: number): LoadSource {
   };
 }
 
+/** What every combination of one member shares; the coefficient arrays are scratch, one entry per load type. */
+interface CombinationContext {
+  L: number;
+  xs: readonly number[];
+  typeStates: readonly SpanState[];
+  scratch: SpanState;
+  deadLoaded: boolean;
+  /** True for each load type (LOAD_TYPES order) that carries no load. */
+  emptyTypes: readonly boolean[];
+  sustainedLive: number;
+  creepKcr: number;
+  variableCoeffs: number[];
+  totalCoeffs: number[];
+}
+
+/**
+ * One combination's state and the size-independent maxima evaluateSize bounds with. Plain loops over
+ * LOAD_TYPES and shared coefficient arrays: this runs for every combination of every member check.
+ */
+function prepareCombination(combination: LoadCombination, context: CombinationContext): PreparedCombination {
+  const { L, xs, typeStates, scratch, creepKcr, variableCoeffs, totalCoeffs } = context;
+  const factors = combination.factors;
+  const coeffs: number[] = [];
+  let deadOnly = true;
+  let anyVariableEmpty = false;
+  for (let i = 0; i < LOAD_TYPES.length; i++) {
+    const t = LOAD_TYPES[i];
+    const factor = factors[t];
+    coeffs.push(factor ?? 0);
+    if (factor === undefined) continue;
+    if (t !== 'D') {
+      deadOnly = false;
+      if (context.emptyTypes[i]) anyVariableEmpty = true;
+    }
+  }
+  const skipped = deadOnly && factors.D !== undefined ? !context.deadLoaded : anyVariableEmpty;
+  const state = combineStates(emptySpanState(L, xs), typeStates, coeffs);
+  if (skipped) {
+    return {
+      combination,
+      skipped,
+      state,
+      eiVariableDeflection: { value: 0, atFt: L / 2 },
+      sustainedLiveFactor: 0,
+      maxMomentLbFt: 0,
+      eiTotalDeflection: 0,
+    };
+  }
+  const sustainedLiveFactor = Math.min(context.sustainedLive, factors.L ?? 0);
+  let anyVariable = false;
+  for (let i = 0; i < LOAD_TYPES.length; i++) {
+    const t = LOAD_TYPES[i];
+    const c = coeffs[i];
+    variableCoeffs[i] = t === 'D' ? 0 : c;
+    if (variableCoeffs[i] !== 0) anyVariable = true;
+    totalCoeffs[i] = c + (creepKcr - 1) * (t === 'D' ? 1 : t === 'L' ? sustainedLiveFactor : 0);
+  }
+  const eiVariableDeflection = anyVariable
+    ? stateMaxEiDeflection(combineStates(scratch, typeStates, variableCoeffs))
+    : { value: 0, atFt: L / 2 };
+  return {
+    combination,
+    skipped,
+    state,
+    eiVariableDeflection,
+    sustainedLiveFactor,
+    maxMomentLbFt: Math.abs(stateMaxMoment(state).value),
+    eiTotalDeflection: Math.abs(stateMaxEiDeflection(combineStates(scratch, typeStates, totalCoeffs)).value),
+  };
+}
+
 /**
  * Prepares a member's loads for checking: design span from the clear span and bearings, roof snow from the
  * job's edition, the takedown (self-weight apart), load groups by type as span states, and the ASD
@@ -188,53 +259,27 @@ export function prepareMember(input: MemberLoadingInput): PreparedMember {
   const sustainedLive = input.sustainedLiveFraction ?? 0;
 
   const scratch = emptySpanState(L, xs);
-  const combinations = asdCombinations(input.edition).map((combination): PreparedCombination => {
-    const types = Object.keys(combination.factors) as LoadType[];
-    const deadLoaded = loadsByType.D.length > 0 || selfWeight;
-    const skipped =
-      types.length === 1 && types[0] === 'D'
-        ? !deadLoaded
-        : types.some((t) => t !== 'D' && loadsByType[t].length === 0);
-    const coeffs = LOAD_TYPES.map((t) => combination.factors[t] ?? 0);
-    const state = combineStates(emptySpanState(L, xs), typeStates, coeffs);
-    if (skipped) {
-      const none = { value: 0, atFt: L / 2 };
-      return {
-        combination,
-        skipped,
-        state,
-        eiVariableDeflection: none,
-        sustainedLiveFactor: 0,
-        maxMomentLbFt: 0,
-        eiTotalDeflection: 0,
-      };
-    }
-    const variableCoeffs = coeffs.map((c, i) => (LOAD_TYPES[i] === 'D' ? 0 : c));
-    const eiVariableDeflection = variableCoeffs.some((c) => c !== 0)
-      ? stateMaxEiDeflection(combineStates(scratch, typeStates, variableCoeffs))
-      : { value: 0, atFt: L / 2 };
-    const sustainedLiveFactor = Math.min(sustainedLive, combination.factors.L ?? 0);
-    const totalCoeffs = coeffs.map((c, i) => {
-      const t = LOAD_TYPES[i];
-      return c + (creepKcr - 1) * (t === 'D' ? 1 : t === 'L' ? sustainedLiveFactor : 0);
-    });
-    return {
-      combination,
-      skipped,
-      state,
-      eiVariableDeflection,
-      sustainedLiveFactor,
-      maxMomentLbFt: Math.abs(stateMaxMoment(state).value),
-      eiTotalDeflection: Math.abs(
-        stateMaxEiDeflection(combineStates(scratch, typeStates, totalCoeffs)).value,
-      ),
-    };
-  });
+  const context: CombinationContext = {
+    L,
+    xs,
+    typeStates,
+    scratch,
+    deadLoaded: loadsByType.D.length > 0 || selfWeight,
+    emptyTypes: LOAD_TYPES.map((t) => loadsByType[t].length === 0),
+    sustainedLive,
+    creepKcr,
+    variableCoeffs: LOAD_TYPES.map(() => 0),
+    totalCoeffs: LOAD_TYPES.map(() => 0),
+  };
+  const combinations: PreparedCombination[] = [];
+  for (const combination of asdCombinations(input.edition)) {
+    combinations.push(prepareCombination(combination, context));
+  }
 
   const reactionsByType = {} as Record<LoadType, [number, number]>;
-  LOAD_TYPES.forEach((t, i) => {
-    reactionsByType[t] = [typeStates[i].reactionsLb[0], typeStates[i].reactionsLb[1]];
-  });
+  for (let i = 0; i < LOAD_TYPES.length; i++) {
+    reactionsByType[LOAD_TYPES[i]] = [typeStates[i].reactionsLb[0], typeStates[i].reactionsLb[1]];
+  }
   return {
     input,
     spans,
