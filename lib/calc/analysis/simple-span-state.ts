@@ -14,10 +14,15 @@ import { splitSpanLoads, type PointPiece, type SpanLoads, type UniformPiece } fr
  */
 export function simpleSpanBreakpoints(spanFt: number, loadSets: readonly (readonly BeamLoad[])[]): number[] {
   const xs = [0, spanFt];
+  // Positions come back clamped to [0, spanFt] (a uniform piece has aFt < bFt): only those inside the span add
+  // a breakpoint, so full-span loads leave nothing to sort.
   for (const loads of loadSets) {
     const { points, uniforms } = splitSpanLoads(spanFt, loads);
-    for (const p of points) xs.push(p.aFt);
-    for (const u of uniforms) xs.push(u.aFt, u.bFt);
+    for (const p of points) if (p.aFt > 0 && p.aFt < spanFt) xs.push(p.aFt);
+    for (const u of uniforms) {
+      if (u.aFt > 0) xs.push(u.aFt);
+      if (u.bFt < spanFt) xs.push(u.bFt);
+    }
   }
   xs.sort((a, b) => a - b);
   return xs.filter((x, i) => i === 0 || x !== xs[i - 1]);
