@@ -8,6 +8,11 @@ import type { SectionFactors } from './section-factors';
 
 const CD_NOTE = 'load duration, NDS 2018 Table 2.3.2';
 
+/** Name of combination i (a module function: a closure in describeChecks would be made on every check). */
+function comboName(combinations: PreparedMember['combinations'], i: number): string {
+  return combinations[i].combination.name;
+}
+
 /**
  * Turns a size's numbers into the result's check table: label, demand, capacity, unit, ratio, pass, the
  * governing combination, every factor used with its value, and the formula. C_D appears in the bending and
@@ -23,7 +28,7 @@ export function describeChecks(
   section: SectionFactors,
   evaluation: SizeEvaluation,
 ): CheckResult[] {
-  const combo = (i: number) => prepared.combinations[i].combination.name;
+  const combos = prepared.combinations;
   const { bending, shear, deflectionLive, deflectionTotal, bearing } = evaluation;
   const ref = section.reference;
   const glulam = section.family === 'glulam';
@@ -69,7 +74,7 @@ export function describeChecks(
       unit: 'psi',
       ratio: bending.ratio,
       pass: bending.ratio <= 1 && stability.withinSlendernessLimit,
-      combination: combo(bending.combinationIndex),
+      combination: comboName(combos, bending.combinationIndex),
       factors: bendingFactors,
       formula: bendingFormula,
       note: stability.withinSlendernessLimit
@@ -84,7 +89,7 @@ export function describeChecks(
       unit: 'psi',
       ratio: shear.ratio,
       pass: shear.ratio <= 1,
-      combination: combo(shear.combinationIndex),
+      combination: comboName(combos, shear.combinationIndex),
       factors: [
         { symbol: 'C_D', value: shear.CD, note: CD_NOTE },
         { symbol: 'C_M', value: section.CM.fv, note: 'wet service' },
@@ -102,7 +107,7 @@ export function describeChecks(
       unit: 'in',
       ratio: deflectionLive.ratio,
       pass: deflectionLive.ratio <= 1,
-      combination: combo(deflectionLive.combinationIndex),
+      combination: comboName(combos, deflectionLive.combinationIndex),
       factors: stiffness,
       formula: `Δ from the combination's live, roof live or snow part; E' = E·C_M·C_t·C_i, E = ${ref.EPsi} psi`,
       note: preset.label,
@@ -117,7 +122,7 @@ export function describeChecks(
       unit: 'in',
       ratio: deflectionTotal.ratio,
       pass: deflectionTotal.ratio <= 1,
-      combination: combo(deflectionTotal.combinationIndex),
+      combination: comboName(combos, deflectionTotal.combinationIndex),
       factors: [...stiffness, { symbol: 'K_cr', value: prepared.creepKcr, note: 'creep, NDS 2018 §3.5.2' }],
       formula: 'Δ_T = K_cr·Δ_LT + Δ_ST; sustained = dead + self-weight + the sustained part of live',
       note: `sustained live fraction ${formatNumber(prepared.input.sustainedLiveFraction ?? 0, 2)}`,
@@ -130,7 +135,7 @@ export function describeChecks(
       unit: 'in',
       ratio: bearing.ratio,
       pass: bearing.ratio <= 1,
-      combination: combo(bearing.combinationIndex),
+      combination: comboName(combos, bearing.combinationIndex),
       factors: [
         { symbol: 'C_M', value: section.CM.fcPerp, note: 'wet service, on F_c⊥' },
         { symbol: 'C_t', value: section.Ct.fcPerp, note: 'temperature, on F_c⊥' },

@@ -3,6 +3,37 @@ import type { EchoedInput, MemberCheckInput } from '@/shared/schemas/calc/member
 import type { MemberSpans } from './prepare-member';
 
 type Field = keyof MemberCheckInput;
+type SnowInputs = NonNullable<MemberCheckInput['snow']>;
+
+/**
+ * Collects echoed inputs for one member. A class rather than closures in echoInputs: its methods are made
+ * once, not on every member check.
+ */
+class EchoList {
+  readonly out: EchoedInput[] = [];
+  private readonly input: MemberCheckInput;
+
+  constructor(input: MemberCheckInput) {
+    this.input = input;
+  }
+
+  add(field: Field, label: string, value: number | string | boolean, unit?: string): void {
+    const input = this.input;
+    const flag: InputFlag = input[field] === undefined ? 'default' : (input.flags?.[field] ?? 'assumed');
+    this.out.push({ field, label, value, unit, flag });
+  }
+
+  addSnow(key: keyof SnowInputs, label: string, value: number | string | boolean, unit?: string): void {
+    const flags = this.input.flags;
+    this.out.push({
+      field: `snow.${key}`,
+      label,
+      value,
+      unit,
+      flag: flags?.[`snow.${key}`] ?? flags?.snow ?? 'assumed',
+    });
+  }
+}
 
 /**
  * The member's inputs as used, each with its flag: a field the user left out is `default`; a field given
@@ -19,64 +50,47 @@ export function echoInputs(
   spans: MemberSpans,
   used: { materialLabel: string; sizeLabel: string; plateLabel: string | null; supportWidthIn: number },
 ): EchoedInput[] {
-  const flagOf = (field: Field): InputFlag =>
-    input[field] === undefined ? 'default' : (input.flags?.[field] ?? 'assumed');
-  const out: EchoedInput[] = [];
-  const add = (field: Field, label: string, value: number | string | boolean, unit?: string) =>
-    out.push({ field, label, value, unit, flag: flagOf(field) });
-  add('kind', 'Member', input.kind);
-  add('edition', 'Load standard', input.edition);
-  add('clearSpanFt', 'Clear span', spans.clearSpanFt, 'ft');
-  add('bearingLeftIn', 'Bearing length, left', spans.bearingLeftIn, 'in');
-  add('bearingRightIn', 'Bearing length, right', spans.bearingRightIn, 'in');
-  add('materialId', 'Material', used.materialLabel);
-  add('sizeId', 'Size', used.sizeLabel);
-  add('gradeUnknown', 'Grade unknown', input.gradeUnknown ?? false);
-  add('roofPitchIn12', 'Roof slope (in 12)', input.roofPitchIn12 ?? 0);
+  const echo = new EchoList(input);
+  echo.add('kind', 'Member', input.kind);
+  echo.add('edition', 'Load standard', input.edition);
+  echo.add('clearSpanFt', 'Clear span', spans.clearSpanFt, 'ft');
+  echo.add('bearingLeftIn', 'Bearing length, left', spans.bearingLeftIn, 'in');
+  echo.add('bearingRightIn', 'Bearing length, right', spans.bearingRightIn, 'in');
+  echo.add('materialId', 'Material', used.materialLabel);
+  echo.add('sizeId', 'Size', used.sizeLabel);
+  echo.add('gradeUnknown', 'Grade unknown', input.gradeUnknown ?? false);
+  echo.add('roofPitchIn12', 'Roof slope (in 12)', input.roofPitchIn12 ?? 0);
   if (input.snow) {
     const snow = input.snow;
-    const addSnow = (
-      key: keyof typeof snow,
-      label: string,
-      value: number | string | boolean,
-      unit?: string,
-    ) =>
-      out.push({
-        field: `snow.${key}`,
-        label,
-        value,
-        unit,
-        flag: input.flags?.[`snow.${key}`] ?? input.flags?.snow ?? 'assumed',
-      });
-    addSnow('groundSnowPsf', 'Ground snow p_g', snow.groundSnowPsf, 'psf');
-    addSnow('riskCategory', 'Risk category', snow.riskCategory);
-    addSnow('exposureCe', 'Exposure factor C_e', snow.exposureCe);
-    addSnow('thermalCt', 'Thermal factor C_t', snow.thermalCt);
+    echo.addSnow('groundSnowPsf', 'Ground snow p_g', snow.groundSnowPsf, 'psf');
+    echo.addSnow('riskCategory', 'Risk category', snow.riskCategory);
+    echo.addSnow('exposureCe', 'Exposure factor C_e', snow.exposureCe);
+    echo.addSnow('thermalCt', 'Thermal factor C_t', snow.thermalCt);
     if (snow.importanceIs !== undefined)
-      addSnow('importanceIs', 'Snow importance factor I_s', snow.importanceIs);
-    addSnow('slipperyUnobstructed', 'Unobstructed slippery roof', snow.slipperyUnobstructed);
-    addSnow('roofStepsDown', 'Roof steps down (drift)', snow.roofStepsDown);
+      echo.addSnow('importanceIs', 'Snow importance factor I_s', snow.importanceIs);
+    echo.addSnow('slipperyUnobstructed', 'Unobstructed slippery roof', snow.slipperyUnobstructed);
+    echo.addSnow('roofStepsDown', 'Roof steps down (drift)', snow.roofStepsDown);
   }
-  add('selfWeight', 'Self-weight included', input.selfWeight ?? true);
-  add('wetService', 'Wet service', input.wetService ?? false);
-  add('temperatureF', 'Service temperature', input.temperatureF ?? 70, '°F');
-  add(
+  echo.add('selfWeight', 'Self-weight included', input.selfWeight ?? true);
+  echo.add('wetService', 'Wet service', input.wetService ?? false);
+  echo.add('temperatureF', 'Service temperature', input.temperatureF ?? 70, '°F');
+  echo.add(
     'unbracedLengthFt',
     'Unbraced length of the top edge',
     input.unbracedLengthFt ?? 'braced by framing',
     input.unbracedLengthFt === undefined ? undefined : 'ft',
   );
-  add('repetitive', 'Repetitive member (C_r)', input.repetitive ?? false);
-  add('flatUse', 'Flat use', input.flatUse ?? false);
-  add('incised', 'Incised', input.incised ?? false);
-  add('shearAtD', 'Shear at d from the supports', input.shearAtD ?? true);
-  add('deflectionUse', 'Deflection limits', input.deflectionUse ?? 'floor');
+  echo.add('repetitive', 'Repetitive member (C_r)', input.repetitive ?? false);
+  echo.add('flatUse', 'Flat use', input.flatUse ?? false);
+  echo.add('incised', 'Incised', input.incised ?? false);
+  echo.add('shearAtD', 'Shear at d from the supports', input.shearAtD ?? true);
+  echo.add('deflectionUse', 'Deflection limits', input.deflectionUse ?? 'floor');
   if (input.deflectionCapIn !== undefined)
-    add('deflectionCapIn', 'Deflection cap', input.deflectionCapIn, 'in');
-  add('sustainedLiveFraction', 'Sustained part of live load', input.sustainedLiveFraction ?? 0);
-  add('supportKind', 'Support', input.supportKind ?? 'jacks');
-  add('supportWidthIn', 'Support width', used.supportWidthIn, 'in');
-  if (used.plateLabel) add('plateMaterialId', 'Plate under the jacks', used.plateLabel);
-  add('mount', 'Mounting', input.mount ?? 'dropped');
-  return out;
+    echo.add('deflectionCapIn', 'Deflection cap', input.deflectionCapIn, 'in');
+  echo.add('sustainedLiveFraction', 'Sustained part of live load', input.sustainedLiveFraction ?? 0);
+  echo.add('supportKind', 'Support', input.supportKind ?? 'jacks');
+  echo.add('supportWidthIn', 'Support width', used.supportWidthIn, 'in');
+  if (used.plateLabel) echo.add('plateMaterialId', 'Plate under the jacks', used.plateLabel);
+  echo.add('mount', 'Mounting', input.mount ?? 'dropped');
+  return echo.out;
 }
