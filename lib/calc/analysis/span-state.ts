@@ -279,6 +279,9 @@ function slopeZero(s: SpanState, i: number, tLo: number, sLo: number, tHi: numbe
     else hi = t;
     const m = s.momentLbFt[i] + s.vAfterLb[i] * t - (s.wPlf[i] * t * t) / 2;
     const next = m === 0 ? NaN : t - slope / m;
+    // A Newton step within the tolerance has converged, even when it lands on a bracket end (t was just made
+    // one): taking the bisection instead there would restart the search far from the root.
+    if (Math.abs(next - t) <= tol) return next;
     const nextT = next > lo && next < hi ? next : 0.5 * (lo + hi);
     if (Math.abs(nextT - t) <= tol) return nextT;
     t = nextT;
