@@ -1,6 +1,6 @@
 import { sampleDiagram, spanModelFromState, combineStates, emptySpanState } from '@/lib/calc/analysis';
 import { checkColumn, PRESUMPTIVE_SOIL_BEARING_PSF, sizeFootingPad } from '@/lib/calc/columns';
-import { getMaterial, getSize } from '@/lib/calc/materials';
+import { getMaterial, getSize, sizeIdentity } from '@/lib/calc/materials';
 import { CAUTION_TEXT } from '@/lib/calc/prescriptive/caution';
 import { LOAD_TYPES, type LoadType } from '@/lib/calc/types';
 import type {
@@ -199,13 +199,7 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
     member: {
       kind: input.kind,
       label: input.label,
-      materialId: material.id,
-      materialLabel: material.label,
-      sizeId: size.id,
-      sizeLabel: size.label,
-      plies: size.plies,
-      bIn: size.bIn,
-      dIn: size.dIn,
+      ...sizeIdentity(material, size),
       selfWeightPlf: evaluation.selfWeightPlf,
     },
     spans: prepared.spans,

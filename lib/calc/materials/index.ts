@@ -7,5 +7,6 @@ export { getMaterial, listMaterials, materialSpec, type MaterialSpec } from './c
 export { getSize, listSizes } from './sizes';
 export { referenceValues } from './reference-values';
 export { weakestGrade } from './weakest-grade';
+export { sizeIdentity, type SizeIdentity } from './size-identity';
 export { nominalWidthForDepth, thicknessClass, type ThicknessClass } from './size-geometry';
 export { inchFraction } from './inch-fractions';

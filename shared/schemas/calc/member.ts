@@ -197,19 +197,24 @@ const diagramSampleSchema = z.object({
   deflectionIn: z.number(),
 });
 
+/** Which size of which material a result is about (lib/calc sizeIdentity); b and d in in. */
+export const sizeIdentitySchema = z.object({
+  materialId: z.string(),
+  materialLabel: z.string(),
+  sizeId: z.string(),
+  sizeLabel: z.string(),
+  plies: z.number(),
+  bIn: z.number(),
+  dIn: z.number(),
+});
+
 export const memberCheckResultSchema = z.object({
   caution: z.string(),
   pass: z.boolean(),
   member: z.object({
     kind: z.enum(memberKinds),
     label: z.string().optional(),
-    materialId: z.string(),
-    materialLabel: z.string(),
-    sizeId: z.string(),
-    sizeLabel: z.string(),
-    plies: z.number(),
-    bIn: z.number(),
-    dIn: z.number(),
+    ...sizeIdentitySchema.shape,
     selfWeightPlf: z.number(),
   }),
   spans: z.object({

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { memberCheckInputSchema } from '@/shared/schemas/calc/member';
+import { memberCheckInputSchema, sizeIdentitySchema } from '@/shared/schemas/calc/member';
 
 /**
  * Input and result of a shortlist (DESIGN.md §5 "Shortlist"): every size of the chosen materials checked for
@@ -33,13 +33,7 @@ export type ShortlistInput = z.infer<typeof shortlistInputSchema>;
 export type ShortlistInputBody = z.input<typeof shortlistInputSchema>;
 
 export const shortlistEntrySchema = z.object({
-  materialId: z.string(),
-  materialLabel: z.string(),
-  sizeId: z.string(),
-  sizeLabel: z.string(),
-  plies: z.number(),
-  bIn: z.number(),
-  dIn: z.number(),
+  ...sizeIdentitySchema.shape,
   weightPlf: z.number(),
   /** One ply (or the whole member when it is one piece), length to buy, lb. */
   pieceWeightLb: z.number(),
