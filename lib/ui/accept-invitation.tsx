@@ -2,13 +2,16 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { ApiError } from '@/lib/api/client';
 import { useMe } from '@/lib/hooks/use-me';
+import { useFormSubmit } from '@/lib/hooks/use-form-submit';
 import { useSessionActions } from '@/lib/hooks/use-session-actions';
 import { useSubmit } from '@/lib/hooks/use-submit';
 import { spacing } from '@/lib/theme';
-import { fieldErrors } from '@/shared/errors';
-import { acceptInvitationSchema, type InvitationPreview } from '@/shared/schemas/orgs';
+import {
+  acceptInvitationSchema,
+  type AcceptInvitationInput,
+  type InvitationPreview,
+} from '@/shared/schemas/orgs';
 import { Button } from './button';
-import { mergeFieldErrors } from './form-errors';
 import { LinkButton } from './link-button';
 import { LoadingView } from './loading-view';
 import { FormProblem } from './form-problem';
@@ -22,12 +25,11 @@ type Props = { token: string; preview: InvitationPreview };
 export function AcceptInvitation({ token, preview }: Props) {
   const { data: me, error: meError } = useMe();
   const actions = useSessionActions();
-  const accept = useSubmit(actions.acceptInvitation);
+  const accept = useFormSubmit((input: AcceptInvitationInput) => actions.acceptInvitation(token, input));
   const leave = useSubmit(actions.signOut);
   const [name, setName] = useState('');
   const [password, setPassword] = useState('');
-  const [clientErrors, setClientErrors] = useState<Record<string, string[]>>({});
-  const errors = mergeFieldErrors(clientErrors, accept.error);
+  const { errors } = accept;
   const here = `/invite/${token}`;
   const signedOut = meError instanceof ApiError && meError.status === 401;
 
@@ -42,7 +44,7 @@ export function AcceptInvitation({ token, preview }: Props) {
           label={`Join ${preview.orgName}`}
           testID="invite-accept"
           busy={accept.busy}
-          onPress={() => void accept.run(token, {})}
+          onPress={() => void accept.submit(acceptInvitationSchema, {})}
           block
         />
       </View>
@@ -74,11 +76,7 @@ export function AcceptInvitation({ token, preview }: Props) {
     );
   }
 
-  const submit = () => {
-    const parsed = acceptInvitationSchema.required().safeParse({ name, password });
-    setClientErrors(parsed.success ? {} : fieldErrors(parsed.error));
-    if (parsed.success) void accept.run(token, parsed.data);
-  };
+  const submit = () => void accept.submit(acceptInvitationSchema.required(), { name, password });
 
   return (
     <View style={styles.form}>

@@ -1,8 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { useSubmit } from '@/lib/hooks/use-submit';
+import { useFormSubmit } from '@/lib/hooks/use-form-submit';
 import { spacing } from '@/lib/theme';
-import { fieldErrors } from '@/shared/errors';
 import {
   createInvitationSchema,
   type CreateInvitationInput,
@@ -10,7 +9,6 @@ import {
 } from '@/shared/schemas/orgs';
 import { Button } from './button';
 import { ChoiceGroup, type Choice } from './choice-group';
-import { mergeFieldErrors } from './form-errors';
 import { FormProblem } from './form-problem';
 import { Notice } from './notice';
 import { TextField } from './text-field';
@@ -39,18 +37,13 @@ export function InviteForm({
 }) {
   const [email, setEmail] = useState('');
   const [role, setRole] = useState<InvitableRole>('contractor');
-  const [clientErrors, setClientErrors] = useState<Record<string, string[]>>({});
   const [sentTo, setSentTo] = useState<string | null>(null);
-  const { run, busy, error } = useSubmit(onInvite);
-  const errors = mergeFieldErrors(clientErrors, error);
+  const { submit: submitForm, busy, error, errors } = useFormSubmit(onInvite);
 
   const submit = async () => {
     setSentTo(null);
-    const parsed = createInvitationSchema.safeParse({ email, role });
-    setClientErrors(parsed.success ? {} : fieldErrors(parsed.error));
-    if (!parsed.success) return;
-    const result = await run(parsed.data);
-    if (result.ok) {
+    const result = await submitForm(createInvitationSchema, { email, role });
+    if (result?.ok) {
       setSentTo(result.value.email);
       setEmail('');
     }

@@ -2,12 +2,10 @@ import { useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { useSessionActions } from '@/lib/hooks/use-session-actions';
-import { useSubmit } from '@/lib/hooks/use-submit';
+import { useFormSubmit } from '@/lib/hooks/use-form-submit';
 import { spacing } from '@/lib/theme';
-import { fieldErrors } from '@/shared/errors';
 import { signInSchema } from '@/shared/schemas/auth';
 import { Button } from './button';
-import { mergeFieldErrors } from './form-errors';
 import { FormProblem } from './form-problem';
 import { safeNextPath } from './safe-next-path';
 import { Text } from './text';
@@ -17,19 +15,13 @@ import { TextLink } from './text-link';
 /** E-mail and password. On success the session gate moves the person on. */
 export function SignInForm() {
   const { signIn } = useSessionActions();
-  const { run, busy, error } = useSubmit(signIn);
+  const { submit: submitForm, busy, error, errors } = useFormSubmit(signIn);
   const { next } = useLocalSearchParams<{ next?: string }>();
   const [email, setEmail] = useState('');
   const [password, setPassword] = useState('');
-  const [clientErrors, setClientErrors] = useState<Record<string, string[]>>({});
-  const errors = mergeFieldErrors(clientErrors, error);
   const nextPath = safeNextPath(next);
 
-  const submit = () => {
-    const parsed = signInSchema.safeParse({ email, password });
-    setClientErrors(parsed.success ? {} : fieldErrors(parsed.error));
-    if (parsed.success) void run(parsed.data);
-  };
+  const submit = () => void submitForm(signInSchema, { email, password });
 
   return (
     <View style={styles.form}>

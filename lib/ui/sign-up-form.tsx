@@ -1,13 +1,11 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { useSessionActions } from '@/lib/hooks/use-session-actions';
-import { useSubmit } from '@/lib/hooks/use-submit';
+import { useFormSubmit } from '@/lib/hooks/use-form-submit';
 import { spacing } from '@/lib/theme';
-import { fieldErrors } from '@/shared/errors';
 import { signUpSchema, type OrgKind } from '@/shared/schemas/auth';
 import { Button } from './button';
 import { ChoiceGroup, type Choice } from './choice-group';
-import { mergeFieldErrors } from './form-errors';
 import { FormProblem } from './form-problem';
 import { Text } from './text';
 import { TextField } from './text-field';
@@ -29,20 +27,14 @@ const firmKinds: Choice<OrgKind>[] = [
 /** Creates a person and their firm; the session gate moves them on once signed in. */
 export function SignUpForm() {
   const { signUp } = useSessionActions();
-  const { run, busy, error } = useSubmit(signUp);
+  const { submit: submitForm, busy, error, errors } = useFormSubmit(signUp);
   const [name, setName] = useState('');
   const [email, setEmail] = useState('');
   const [password, setPassword] = useState('');
   const [firmName, setFirmName] = useState('');
   const [firmKind, setFirmKind] = useState<OrgKind>('contracting');
-  const [clientErrors, setClientErrors] = useState<Record<string, string[]>>({});
-  const errors = mergeFieldErrors(clientErrors, error);
 
-  const submit = () => {
-    const parsed = signUpSchema.safeParse({ name, email, password, firmName, firmKind });
-    setClientErrors(parsed.success ? {} : fieldErrors(parsed.error));
-    if (parsed.success) void run(parsed.data);
-  };
+  const submit = () => void submitForm(signUpSchema, { name, email, password, firmName, firmKind });
 
   return (
     <View style={styles.form}>
