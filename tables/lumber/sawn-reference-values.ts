@@ -24,11 +24,8 @@ export interface SawnSpeciesRow {
   table: '4A' | '4B';
 }
 
-export interface SawnReferenceRow {
-  species: SawnSpeciesId;
-  grade: SawnGradeId;
-  /** Table 4B: the nominal width (in) the row applies to; Table 4A: null (all widths, with C_F). */
-  nominalWidthIn: 4 | 6 | 8 | 10 | 12 | null;
+/** The seven reference design values of a row, psi. */
+export interface ReferenceDesignValuesPsi {
   FbPsi: number;
   FtPsi: number;
   FvPsi: number;
@@ -36,6 +33,13 @@ export interface SawnReferenceRow {
   FcPsi: number;
   EPsi: number;
   EminPsi: number;
+}
+
+export interface SawnReferenceRow extends ReferenceDesignValuesPsi {
+  species: SawnSpeciesId;
+  grade: SawnGradeId;
+  /** Table 4B: the nominal width (in) the row applies to; Table 4A: null (all widths, with C_F). */
+  nominalWidthIn: 4 | 6 | 8 | 10 | 12 | null;
   provenance: TableProvenance;
 }
 

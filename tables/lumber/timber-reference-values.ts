@@ -10,22 +10,15 @@
  * Provenance: every row from memory — confirm against the printed Table 4D before relying on it. Only
  * Douglas Fir-Larch and Hem-Fir are tabulated here; other species' timbers are not offered.
  */
-import type { SawnSpeciesId, TableProvenance } from './sawn-reference-values';
+import type { ReferenceDesignValuesPsi, SawnSpeciesId, TableProvenance } from './sawn-reference-values';
 
 export type TimberUse = 'beams-and-stringers' | 'posts-and-timbers';
 export type TimberGradeId = 'select-structural' | 'no1' | 'no2';
 
-export interface TimberReferenceRow {
+export interface TimberReferenceRow extends ReferenceDesignValuesPsi {
   species: SawnSpeciesId;
   grade: TimberGradeId;
   use: TimberUse;
-  FbPsi: number;
-  FtPsi: number;
-  FvPsi: number;
-  FcPerpPsi: number;
-  FcPsi: number;
-  EPsi: number;
-  EminPsi: number;
   provenance: TableProvenance;
 }
 
