@@ -1,0 +1,86 @@
+import { z } from 'zod';
+import {
+  checkIdSchema,
+  memberCheckInputSchema,
+  memberCheckResultSchema,
+  memberKinds,
+  prescriptiveResultSchema,
+} from '@/shared/schemas/calc/member';
+
+/**
+ * A member saved on a job (DESIGN.md §3 "Member"): its check input (validated by the engine's own schema, with
+ * every input's measured / assumed / default flag inside it), the wall it belongs to, and the result the
+ * server computed when it was saved. The client's own live result is never stored.
+ */
+
+const label = z
+  .string()
+  .trim()
+  .min(1, { message: 'Give the member a label' })
+  .max(80, { message: 'At most 80 characters' });
+const wall = z.string().trim().max(80, { message: 'At most 80 characters' });
+
+/** `POST /api/jobs/:jobId/members`. The kind and label inside `input` follow the member's own. */
+export const memberCreateSchema = z.object({
+  label,
+  wall: wall.default(''),
+  input: memberCheckInputSchema,
+});
+export type MemberCreate = z.infer<typeof memberCreateSchema>;
+export type MemberCreateBody = z.input<typeof memberCreateSchema>;
+
+/** `PATCH /api/members/:memberId`: only the fields sent change; a new input is recomputed. */
+export const memberPatchSchema = z
+  .object({ label: label.optional(), wall: wall.optional(), input: memberCheckInputSchema.optional() })
+  .refine((patch) => Object.values(patch).some((value) => value !== undefined), {
+    message: 'Change at least one field',
+  });
+export type MemberPatch = z.infer<typeof memberPatchSchema>;
+export type MemberPatchBody = z.input<typeof memberPatchSchema>;
+
+/** The member's state in words: fails its check; passes it but sits outside what code tables cover; passes. */
+export const memberStates = ['passes', 'fails', 'engineer-needed'] as const;
+export const memberStateSchema = z.enum(memberStates);
+export type MemberState = z.infer<typeof memberStateSchema>;
+
+/** What the job page lists without loading every result. */
+export const memberSummarySchema = z.object({
+  state: memberStateSchema,
+  pass: z.boolean(),
+  governingCheck: checkIdSchema,
+  governingRatio: z.number(),
+  warningsCount: z.number().int(),
+  /** Reasons an engineer is needed (the prescriptive path's), empty when the state is not engineer-needed. */
+  engineerReasons: z.array(z.string()),
+});
+export type MemberSummary = z.infer<typeof memberSummarySchema>;
+
+export const memberSchema = z.object({
+  id: z.string(),
+  jobId: z.string(),
+  kind: z.enum(memberKinds),
+  label: z.string(),
+  wall: z.string(),
+  /** The chosen material and size (copied from the input). */
+  materialId: z.string(),
+  sizeId: z.string(),
+  input: memberCheckInputSchema,
+  summary: memberSummarySchema,
+  /** The server's result at the last save, with diagram samples. */
+  result: memberCheckResultSchema,
+  /** Headers only: the prescriptive-path verdict for the saved input. */
+  prescriptive: prescriptiveResultSchema.nullable(),
+  /** lib/calc ENGINE_VERSION that computed `result`. */
+  engineVersion: z.string(),
+  createdBy: z.string(),
+  updatedBy: z.string(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type Member = z.infer<typeof memberSchema>;
+
+/** A row of the job's member list: everything but the full result and input. */
+export const memberListItemSchema = memberSchema.omit({ input: true, result: true, prescriptive: true });
+export type MemberListItem = z.infer<typeof memberListItemSchema>;
+
+export const memberListSchema = z.object({ members: z.array(memberListItemSchema) });
