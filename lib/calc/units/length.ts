@@ -27,6 +27,8 @@ const IN = String.raw`(?:"|in\.?|inch|inches)`;
 const FEET_INCHES = new RegExp(String.raw`^(${MIXED})\s*${FT}(?:\s*-?\s*(${MIXED})\s*${IN}?)?$`);
 const DASH_FRACTION = new RegExp(String.raw`^(${DECIMAL}\s*-\s*\d+\s*/\s*\d+)\s*(${IN})?$`);
 const DASH_FEET_INCHES = new RegExp(String.raw`^(\d+)\s*-\s*(${MIXED})\s*${IN}?$`);
+/** Feet, a space, then inches as a tape reads ("13 6 3/8", "13 6"): only where a bare number means feet. */
+const SPACED_FEET_INCHES = new RegExp(String.raw`^(\d+)\s+(\d+(?:\.\d*)?(?:(?:\s+|\s*-\s*)\d+\s*/\s*\d+)?)$`);
 const INCHES = new RegExp(String.raw`^(${MIXED})\s*${IN}$`);
 const METRIC = new RegExp(
   String.raw`^(${DECIMAL})\s*(mm|cm|m|millimet(?:er|re)s?|centimet(?:er|re)s?|met(?:er|re)s?)$`,
@@ -38,7 +40,8 @@ const METRIC_UNITS: Record<string, string> = { mm: 'mm', cm: 'cm', m: 'm' };
 /**
  * Reads a length typed by a person and returns it in inches. Accepted: 13' 6", 13'-6 1/2", 13-6 (feet-inches),
  * 13 ft 6 in, 162 in, 162", 6 1/2", 6-1/2", 3/4", 4.1 m, 410 mm, 41 cm, and a bare number ("13.5", "6 1/2")
- * in the field's default unit. Metric goes through mathjs units (1 in = 25.4 mm exactly). Typographic
+ * in the field's default unit. In a field whose bare numbers are feet, a tape reading written with spaces
+ * ("13 6 3/8", "13 6") is feet then inches, and 13-6-3/8 is 13 ft 6-3/8 in (never 13-6). Metric goes through mathjs units (1 in = 25.4 mm exactly). Typographic
  * quotes and primes are accepted.
  *
  * @param text what the person typed
@@ -79,6 +82,8 @@ export function parseLength(text: string, field: string, options: ParseLengthOpt
       METRIC_UNITS[match[2]] ??
       (match[2].startsWith('milli') ? 'mm' : match[2].startsWith('centi') ? 'cm' : 'm');
     inches = unit(value(match[1]), metricUnit).toNumber('inch');
+  } else if (options.defaultUnit === 'ft' && (match = SPACED_FEET_INCHES.exec(entry))) {
+    inches = value(match[1]) * 12 + inchesPart(match[2], value, fail);
   } else if ((match = BARE.exec(entry))) {
     inches = value(match[1]) * (options.defaultUnit === 'ft' ? 12 : 1);
   } else {

@@ -57,6 +57,21 @@ describe('parseLength', () => {
     expectApprox(parseLength('162', 'x'), 162, { abs: 1e-9 });
   });
 
+  // A tape reading as written three ways (common practice): 13 ft 6-3/8 in = 162.375 in, never 13 ft 6 in.
+  it.each([`13' 6-3/8"`, '13-6-3/8', '13 6 3/8', '13 6-3/8'])(
+    'reads the tape reading %s as 162-3/8 in',
+    (text) => {
+      expectApprox(inches(text, 'ft'), 162.375, { abs: 1e-9 });
+    },
+  );
+
+  it('reads "13 6" as feet and inches only where bare numbers are feet', () => {
+    expectApprox(inches('13 6', 'ft'), 162, { abs: 1e-9 });
+    expectApprox(inches('6 1/2', 'ft'), 78, { abs: 1e-9 });
+    expect(() => inches('13 6', 'in')).toThrow(CalcInputError);
+    expect(() => inches('13 13', 'ft')).toThrow(/under 12/);
+  });
+
   it('names the field and suggests a form when the text cannot be read', () => {
     const error = errorOf(() => parseLength(`13'6x`, 'clearSpanIn', { label: 'Clear span' }));
     expect(error.field).toBe('clearSpanIn');
