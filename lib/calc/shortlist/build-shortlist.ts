@@ -61,6 +61,7 @@ function sorter(sortBy: ShortlistResult['sortBy']): (a: ShortlistEntry, b: Short
     a.weightPlf - b.weightPlf || a.dIn - b.dIn || b.utilization - a.utilization;
   if (sortBy === 'lightest')
     return (a, b) => a.weightPlf - b.weightPlf || a.dIn - b.dIn || b.utilization - a.utilization;
+  if (sortBy === 'fewest-plies') return (a, b) => a.plies - b.plies || a.dIn - b.dIn || tie(a, b);
   if (sortBy === 'cheapest') {
     return (a, b) => (a.cost ?? Infinity) - (b.cost ?? Infinity) || tie(a, b);
   }
@@ -70,8 +71,8 @@ function sorter(sortBy: ShortlistResult['sortBy']): (a: ShortlistEntry, b: Short
 /**
  * Checks every size of the chosen materials (plies 1–4 where the material offers them) for one member's
  * loads and keeps what fits: depth (joists for flush, headroom for dropped, or a given maximum), width in
- * the wall, heaviest and longest piece carried in. Passing sizes are sorted shallowest, lightest or cheapest
- * first (price per ft × length to buy) with their utilization; sizes failing by at most 15 % are listed as
+ * the wall, heaviest and longest piece carried in. Passing sizes are sorted shallowest, lightest, fewest plies
+ * (then shallowest) or cheapest first (price per ft × length to buy) with their utilization; sizes failing by at most 15 % are listed as
  * near misses with what fails. The loads are analysed once; each size is a superposition (evaluateSize).
  *
  * @param input parsed shortlistInputSchema (ft, in, psf, plf, lb; prices per ft)

@@ -7,7 +7,7 @@ import { memberCheckInputSchema, sizeIdentitySchema } from '@/shared/schemas/cal
  * weights in lb and plf, lengths in ft, prices in the price book's currency.
  */
 
-export const shortlistSorts = ['shallowest', 'lightest', 'cheapest'] as const;
+export const shortlistSorts = ['shallowest', 'lightest', 'fewest-plies', 'cheapest'] as const;
 
 export const shortlistInputSchema = memberCheckInputSchema
   .omit({ materialId: true, sizeId: true, plies: true, gradeUnknown: true, measuredPly: true, posts: true })

@@ -88,6 +88,15 @@ describe('buildShortlist', () => {
     expectApprox(cheapest.spans.lengthToBuyFt, 13, { rel: 1e-12 }); // 12 ft clear + 6 in + 6 in bearing
   });
 
+  it('sorts fewest plies first, then shallowest', () => {
+    const fewest = run({ sortBy: 'fewest-plies', limit: 500 });
+    for (let i = 1; i < fewest.passing.length; i++) {
+      const [prev, next] = [fewest.passing[i - 1], fewest.passing[i]];
+      expect(next.plies).toBeGreaterThanOrEqual(prev.plies);
+      if (next.plies === prev.plies) expect(next.dIn).toBeGreaterThanOrEqual(prev.dIn);
+    }
+  });
+
   it('says when sizes fail on bearing alone', () => {
     const short = run({ bearingLeftIn: 1.5, bearingRightIn: 1.5 });
     expect(short.warnings.some((w) => w.includes('fail on bearing alone'))).toBe(true);
