@@ -1,0 +1,103 @@
+import { StyleSheet, View } from 'react-native';
+import { spacing } from '@/lib/theme';
+import { Button } from '@/lib/ui/button';
+import { Card } from '@/lib/ui/card';
+import { ChoiceGroup } from '@/lib/ui/choice-group';
+import { FieldMessages } from '@/lib/ui/field-messages';
+import { Text } from '@/lib/ui/text';
+import type { MemberDraftState } from '@/lib/hooks/use-member-draft';
+import { loadStandardEditions, type Job, type LoadStandard } from '@/shared/schemas/jobs';
+import type { FieldErrors } from './member-input';
+import { MeasureField } from './measure-field';
+import { SourceCard } from './source-card';
+import { sourceKindLabels, type SourceKind } from './source-draft';
+
+const addable: SourceKind[] = ['roof', 'ceiling', 'floor', 'wall-above', 'point'];
+
+type EditionChoice = 'job' | LoadStandard;
+
+/** The job's load context (shown, overridable here) and the member's load sources. */
+export function LoadsCard({ form, errors, job }: { form: MemberDraftState; errors: FieldErrors; job: Job }) {
+  const { draft, set, setFlag } = form;
+  const editionChoices = [
+    { value: 'job' as EditionChoice, label: `From the job (${job.loadStandard})` },
+    ...loadStandardEditions.map((e) => ({ value: e as EditionChoice, label: e })),
+  ];
+  return (
+    <Card title="Loads">
+      <Text variant="caption" tone="muted">
+        From the job: {job.loadStandard}, ground snow {job.groundSnowPsf} psf
+        {job.groundSnowSource ? ` (${job.groundSnowSource})` : ''}, roof {job.roofType} at {job.roofPitchIn12}{' '}
+        in 12.
+      </Text>
+      <ChoiceGroup
+        label="Load standard for this member"
+        choices={editionChoices}
+        value={draft.edition ?? 'job'}
+        onChange={(v) => set('edition')(v === 'job' ? null : v)}
+        testID="member-edition"
+      />
+      <View style={styles.grid}>
+        <View style={styles.cell}>
+          <MeasureField
+            label="Ground snow"
+            unit="psf"
+            value={draft.groundSnow}
+            onChangeText={set('groundSnow')}
+            errors={errors.groundSnow}
+            flag={draft.flags.groundSnow ?? 'default'}
+            onFlag={(f) => setFlag('groundSnow', f)}
+            testID="ground-snow"
+          />
+        </View>
+        <View style={styles.cell}>
+          <MeasureField
+            label="Roof slope"
+            unit="in 12"
+            value={draft.roofPitch}
+            onChangeText={set('roofPitch')}
+            errors={errors.roofPitch}
+            flag={draft.flags.roofPitch ?? 'default'}
+            onFlag={(f) => setFlag('roofPitch', f)}
+            testID="roof-pitch"
+          />
+        </View>
+      </View>
+      <Text variant="label">Load sources</Text>
+      {draft.sources.length === 0 ? (
+        <Text tone="muted">No loads yet. Add what lands on this member.</Text>
+      ) : null}
+      {draft.sources.map((source, index) => (
+        <SourceCard
+          key={source.key}
+          source={source}
+          index={index}
+          count={draft.sources.length}
+          errors={errors}
+          onChange={(patch) => form.setSource(index, patch)}
+          onMove={(step) => form.moveSource(index, step)}
+          onRemove={() => form.removeSource(index)}
+        />
+      ))}
+      <FieldMessages messages={errors.sources} />
+      <View style={styles.add}>
+        {addable.map((kind) => (
+          <Button
+            key={kind}
+            label={`Add ${sourceKindLabels[kind].toLowerCase()}`}
+            icon="plus"
+            variant="secondary"
+            onPress={() => form.addSource(kind)}
+            testID={`add-${kind}`}
+          />
+        ))}
+      </View>
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  grid: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
+  cell: { flexGrow: 1, flexBasis: 200 },
+  add: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
+});

@@ -1,0 +1,285 @@
+import { useDeferredValue, useMemo, useRef, useState, type ReactNode } from 'react';
+import { ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native';
+import { useMemberDraft } from '@/lib/hooks/use-member-draft';
+import { colors, layout, spacing } from '@/lib/theme';
+import { Button } from '@/lib/ui/button';
+import { Notice } from '@/lib/ui/notice';
+import { VerdictBanner } from '@/lib/ui/result/verdict-banner';
+import { Text } from '@/lib/ui/text';
+import { TextLink } from '@/lib/ui/text-link';
+import type { Job } from '@/shared/schemas/jobs';
+import type { Member, MemberCreateBody } from '@/shared/schemas/members';
+import { BasicsCard } from './basics-card';
+import { ConditionsCard } from './conditions-card';
+import { draftFromInput } from './draft-from-input';
+import { FramingCard } from './framing-card';
+import { liveCheck } from './live-check';
+import { LoadsCard } from './loads-card';
+import { MaterialCard } from './material-card';
+import { emptyMemberDraft, type MemberDraft, type MemberKind } from './member-draft';
+import { draftPathOf, readMemberDraft, type FieldErrors } from './member-input';
+import { ResultPane } from './result-pane';
+import { ShortlistPanel } from './shortlist-panel';
+import { SpanCard } from './span-card';
+
+/** Two panes (inputs | result) from this content width up, px. */
+const TWO_PANE_MIN = 1000;
+
+export type SaveOutcome = { ok: true; member: Member } | { ok: false; fields: FieldErrors; message: string };
+
+type MemberEditorProps = {
+  job: Job;
+  member?: Member;
+  kind: MemberKind;
+  /** Device storage key of the draft (carries the user, job and member). */
+  storageKey: string;
+  onSave: (body: MemberCreateBody) => Promise<SaveOutcome>;
+  /** Renders the four diagrams for a result. */
+  renderDiagrams?: (result: NonNullable<Member['result']>) => ReactNode;
+};
+
+/** Messages that only say a required field is still empty: held back until the person tries to save. */
+const isEmptyFieldMessage = (message: string) =>
+  message.startsWith('Enter the') || message.startsWith('Add at least');
+
+function visibleErrors(errors: FieldErrors, all: boolean): FieldErrors {
+  if (all) return errors;
+  const out: FieldErrors = {};
+  for (const [path, messages] of Object.entries(errors)) {
+    const shown = messages.filter((m) => !isEmptyFieldMessage(m));
+    if (shown.length) out[path] = shown;
+  }
+  return out;
+}
+
+/**
+ * The member editor: inputs, and the check recomputed on the device as the person types (same schema and
+ * engine as the server). Saving sends the input; the server recomputes and its result is what is stored.
+ */
+export function MemberEditor({ job, member, kind, storageKey, onSave, renderDiagrams }: MemberEditorProps) {
+  const initial = useMemo<MemberDraft>(
+    () =>
+      member
+        ? { ...draftFromInput(member.input, job), label: member.label, wall: member.wall }
+        : emptyMemberDraft(kind, job),
+    [member, job, kind],
+  );
+  const form = useMemberDraft(initial, storageKey);
+  const deferred = useDeferredValue(form.draft);
+  const live = useMemo(() => liveCheck(deferred, job), [deferred, job]);
+  const [attempted, setAttempted] = useState(false);
+  const [serverErrors, setServerErrors] = useState<FieldErrors>({});
+  const [status, setStatus] = useState<{ tone: 'success' | 'error'; text: string } | null>(null);
+  const [busy, setBusy] = useState(false);
+  const savedJson = useRef(member ? JSON.stringify(initial) : '');
+  const scroll = useRef<ScrollView>(null);
+  const resultY = useRef(0);
+  const { width } = useWindowDimensions();
+  const contentWidth = width >= layout.wideBreakpoint ? width - layout.sideNavWidth : width;
+  const twoPane = contentWidth >= TWO_PANE_MIN;
+
+  const dirty = JSON.stringify(form.draft) !== savedJson.current;
+  const showSaved = member && !dirty;
+  const result = showSaved ? member.result : live.ok ? live.result : null;
+  const prescriptive = showSaved ? member.prescriptive : live.ok ? live.prescriptive : null;
+  const errors = { ...visibleErrors(live.ok ? {} : live.errors, attempted), ...serverErrors };
+  const differs =
+    showSaved && live.ok && JSON.stringify(live.result) !== JSON.stringify(member.result)
+      ? `This device computes a different result from the one saved (engine ${member.engineVersion} on the server). The server's saved result is shown.`
+      : null;
+
+  const save = async (draft: MemberDraft = form.draft) => {
+    setAttempted(true);
+    setStatus(null);
+    const reading = readMemberDraft(draft, job);
+    if (Object.keys(reading.errors).length > 0 || !liveCheck(draft, job).ok) {
+      setStatus({ tone: 'error', text: 'Nothing was saved: fix the fields marked below.' });
+      return;
+    }
+    setBusy(true);
+    const outcome = await onSave({ label: draft.label, wall: draft.wall, input: reading.input });
+    setBusy(false);
+    if (outcome.ok) {
+      setServerErrors({});
+      savedJson.current = JSON.stringify(draft);
+      form.forget();
+      setStatus({ tone: 'success', text: 'Saved. The result below is the server’s.' });
+    } else {
+      const mapped: FieldErrors = {};
+      for (const [path, messages] of Object.entries(outcome.fields)) {
+        mapped[draftPathOf(path.replace(/^input\./, ''))] = messages;
+      }
+      setServerErrors(mapped);
+      setStatus({ tone: 'error', text: `Nothing was saved: ${outcome.message}` });
+    }
+  };
+
+  const inputs = (
+    <View style={styles.column}>
+      {form.restored ? (
+        <Notice tone="info" title="Unsaved changes on this device" testID="draft-restored">
+          <Text>What you typed before is back. Save it, or start again from the saved member.</Text>
+          <Button
+            label="Discard changes"
+            variant="secondary"
+            onPress={() => form.forget(initial)}
+            testID="draft-discard"
+          />
+        </Notice>
+      ) : null}
+      <BasicsCard form={form} errors={errors} />
+      <SpanCard form={form} errors={errors} />
+      <LoadsCard form={form} errors={errors} job={job} />
+      <MaterialCard form={form} errors={errors} />
+      <ConditionsCard form={form} errors={errors} />
+    </View>
+  );
+  const statusNotice = (
+    <>
+      {status ? (
+        <Notice tone={status.tone} testID="save-status">
+          {status.text}
+        </Notice>
+      ) : null}
+      {differs ? <Notice tone="info">{differs}</Notice> : null}
+    </>
+  );
+  const results = (
+    <View
+      style={styles.column}
+      onLayout={(e) => {
+        resultY.current = e.nativeEvent.layout.y;
+      }}
+    >
+      <ResultPane
+        result={result}
+        prescriptive={prescriptive}
+        errors={live.ok ? {} : live.errors}
+        notice={statusNotice}
+        diagrams={result && renderDiagrams ? renderDiagrams(result) : null}
+      >
+        {live.ok ? (
+          <ShortlistPanel
+            input={live.input}
+            joistDepthIn={live.input.joistDepthIn}
+            chosen={{ materialId: form.draft.materialId, sizeId: form.draft.sizeId }}
+            onChoose={(entry) => {
+              const next = { ...form.draft, materialId: entry.materialId, sizeId: entry.sizeId };
+              form.set('materialId')(entry.materialId);
+              form.set('sizeId')(entry.sizeId);
+              if (member) void save(next);
+            }}
+          />
+        ) : null}
+        {result && form.draft.kind === 'header' ? (
+          <FramingCard result={result} yearBuilt={job.yearBuilt} />
+        ) : null}
+      </ResultPane>
+    </View>
+  );
+  const saveButton = (
+    <Button
+      label={member ? 'Save changes' : 'Save member'}
+      icon="check"
+      busy={busy}
+      onPress={() => void save()}
+      testID="member-save"
+    />
+  );
+  const header = (
+    <View style={styles.header}>
+      <TextLink
+        href={{ pathname: '/jobs/[jobId]', params: { jobId: job.id } }}
+        label={`Back to ${job.name}`}
+      />
+      <View style={styles.headerRow}>
+        <Text variant="display" style={styles.title}>
+          {form.draft.label || 'Member'}
+        </Text>
+        {twoPane ? saveButton : null}
+      </View>
+    </View>
+  );
+
+  if (twoPane) {
+    return (
+      <View style={styles.root}>
+        <View style={styles.pad}>{header}</View>
+        <View style={styles.panes}>
+          <ScrollView
+            style={styles.pane}
+            contentContainerStyle={styles.paneContent}
+            keyboardShouldPersistTaps="handled"
+          >
+            {inputs}
+          </ScrollView>
+          <ScrollView style={[styles.pane, styles.resultPane]} contentContainerStyle={styles.paneContent}>
+            {results}
+          </ScrollView>
+        </View>
+      </View>
+    );
+  }
+  return (
+    <View style={styles.root}>
+      <ScrollView
+        ref={scroll}
+        style={styles.pane}
+        contentContainerStyle={styles.paneContent}
+        keyboardShouldPersistTaps="handled"
+      >
+        {header}
+        {inputs}
+        {results}
+      </ScrollView>
+      <View style={styles.bar} testID="pinned-verdict">
+        <View style={styles.barVerdict}>
+          {result ? (
+            <VerdictBanner result={result} compact />
+          ) : (
+            <Text variant="caption" tone="muted">
+              No result yet
+            </Text>
+          )}
+        </View>
+        <View style={styles.barActions}>
+          <Button
+            label="Result"
+            variant="secondary"
+            onPress={() => scroll.current?.scrollTo({ y: resultY.current, animated: true })}
+            testID="jump-to-result"
+          />
+          {saveButton}
+        </View>
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  root: { flex: 1, backgroundColor: colors.paper },
+  pad: { paddingHorizontal: spacing.lg, paddingTop: spacing.lg },
+  header: { gap: spacing.sm },
+  headerRow: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    justifyContent: 'space-between',
+    gap: spacing.md,
+    flexWrap: 'wrap',
+  },
+  title: { flexShrink: 1 },
+  panes: { flex: 1, flexDirection: 'row' },
+  pane: { flex: 1 },
+  resultPane: { borderLeftWidth: 1, borderLeftColor: colors.line },
+  paneContent: { padding: spacing.lg, paddingBottom: spacing.xxxl, gap: spacing.lg },
+  column: { gap: spacing.lg },
+  bar: {
+    borderTopWidth: 1,
+    borderTopColor: colors.lineStrong,
+    backgroundColor: colors.surface,
+    padding: spacing.sm,
+    gap: spacing.sm,
+  },
+  barVerdict: { alignSelf: 'stretch' },
+  barActions: { flexDirection: 'row', gap: spacing.sm, justifyContent: 'flex-end' },
+});

@@ -1,0 +1,65 @@
+import { StyleSheet, View } from 'react-native';
+import { formatLb, formatPsf } from '@/lib/format';
+import { colors, spacing } from '@/lib/theme';
+import { Card } from '@/lib/ui/card';
+import { Icon } from '@/lib/ui/icon';
+import { Text } from '@/lib/ui/text';
+import type { MemberCheckResult } from '@/shared/schemas/calc/member';
+import { checkValueText, checkVerdictText } from './check-value';
+import { RatioBar } from './ratio-bar';
+
+/** Every check: demand, capacity, the ratio as a number and a bar, passes or fails in words, the combination. */
+export function CheckTable({ result }: { result: MemberCheckResult }) {
+  return (
+    <Card title="Checks" testID="check-table">
+      {result.checks.map((check) => (
+        <View
+          key={check.id}
+          style={styles.row}
+          testID={`check-${check.id}`}
+          accessible
+          aria-label={`${check.label}: demand ${checkValueText(check.demand, check.unit)}, capacity ${checkValueText(check.capacity, check.unit)}, ${checkVerdictText(check)}`}
+        >
+          <View style={styles.head}>
+            <Icon name={check.pass ? 'check' : 'error'} color={check.pass ? colors.success : colors.danger} />
+            <Text variant="bodyStrong" style={styles.label}>
+              {check.label}
+            </Text>
+            <Text variant="label" tone={check.pass ? 'ink' : 'danger'}>
+              {checkVerdictText(check)}
+            </Text>
+          </View>
+          <RatioBar ratio={check.ratio} />
+          <Text variant="caption" tone="muted">
+            Demand {checkValueText(check.demand, check.unit)} · capacity{' '}
+            {checkValueText(check.capacity, check.unit)} · {check.combination}
+          </Text>
+        </View>
+      ))}
+      {result.posts?.map((post) => (
+        <View key={post.end} style={styles.row} testID={`check-post-${post.end}`}>
+          <View style={styles.head}>
+            <Icon name={post.pass ? 'check' : 'error'} color={post.pass ? colors.success : colors.danger} />
+            <Text variant="bodyStrong" style={styles.label}>
+              Post, {post.end} end
+            </Text>
+            <Text variant="label" tone={post.pass ? 'ink' : 'danger'}>
+              {checkVerdictText(post)}
+            </Text>
+          </View>
+          <RatioBar ratio={post.ratio} />
+          <Text variant="caption" tone="muted">
+            {formatLb(post.loadLb)} · footing pad {checkValueText(post.footingSideIn, 'in')} square at{' '}
+            {formatPsf(post.soilBearingPsf)} soil · {post.combination}
+          </Text>
+        </View>
+      ))}
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  row: { gap: spacing.xs, paddingVertical: spacing.xs, borderBottomWidth: 1, borderBottomColor: colors.line },
+  head: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm, flexWrap: 'wrap' },
+  label: { flex: 1, minWidth: 140 },
+});

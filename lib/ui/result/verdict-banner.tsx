@@ -1,0 +1,57 @@
+import { StyleSheet, View } from 'react-native';
+import { formatNumber } from '@/lib/format';
+import { colors, radii, spacing } from '@/lib/theme';
+import { Icon } from '@/lib/ui/icon';
+import { Text } from '@/lib/ui/text';
+import type { MemberCheckResult } from '@/shared/schemas/calc/member';
+
+/** The overall verdict in words with the governing check and its ratio. */
+export function verdictText(result: MemberCheckResult): { title: string; detail: string } {
+  const governing = result.checks.find((c) => c.id === result.governing.check);
+  const detail = `${governing?.label ?? result.governing.check} governs at ${formatNumber(result.governing.ratio, 2)} (${result.governing.combination})`;
+  return {
+    title: result.pass ? 'Passes the preliminary check' : 'Fails the preliminary check',
+    detail,
+  };
+}
+
+/** The verdict as a banner: icon, words, the member and the governing check. */
+export function VerdictBanner({ result, compact = false }: { result: MemberCheckResult; compact?: boolean }) {
+  const { title, detail } = verdictText(result);
+  const fg = result.pass ? colors.success : colors.danger;
+  return (
+    <View
+      role="status"
+      testID={compact ? 'verdict-bar' : 'verdict'}
+      style={[
+        styles.box,
+        compact && styles.compact,
+        { borderColor: fg, backgroundColor: result.pass ? colors.successSoft : colors.dangerSoft },
+      ]}
+    >
+      <Icon name={result.pass ? 'check' : 'error'} color={fg} />
+      <View style={styles.text}>
+        <Text variant="bodyStrong" style={{ color: fg }}>
+          {title}
+        </Text>
+        <Text variant="caption" numberOfLines={compact ? 1 : undefined}>
+          {compact ? detail : `${result.member.sizeLabel} ${result.member.materialLabel} · ${detail}`}
+        </Text>
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  box: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: spacing.md,
+    padding: spacing.lg,
+    borderRadius: radii.md,
+    borderWidth: 2,
+    alignSelf: 'stretch',
+  },
+  compact: { padding: spacing.sm, paddingHorizontal: spacing.md },
+  text: { flex: 1, gap: spacing.xxs },
+});
