@@ -7,6 +7,7 @@ import { Button } from '@/lib/ui/button';
 import { ErrorView } from '@/lib/ui/error-view';
 import { jobToDraft } from '@/lib/ui/job-draft';
 import { JobForm } from '@/lib/ui/job-form';
+import { JobMembersPanel } from '@/lib/ui/job-members-panel';
 import { JobSummary } from '@/lib/ui/job-summary';
 import { LoadingView } from '@/lib/ui/loading-view';
 import { Screen } from '@/lib/ui/screen';
@@ -58,6 +59,7 @@ export default function JobPage() {
       }
     >
       <TextLink href="/jobs" label="All jobs" />
+      <JobMembersPanel job={job} />
       <JobSummary job={job} />
       <ArchiveJobControl jobName={job.name} onArchive={() => archive(job.id)} />
     </Screen>

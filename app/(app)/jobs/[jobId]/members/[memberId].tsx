@@ -1,0 +1,40 @@
+import { useLocalSearchParams } from 'expo-router';
+import { useJob } from '@/lib/hooks/use-job';
+import { useMe } from '@/lib/hooks/use-me';
+import { useMember } from '@/lib/hooks/use-member';
+import { useMemberSave } from '@/lib/hooks/use-member-save';
+import { MemberDiagrams } from '@/lib/ui/diagrams/member-diagrams';
+import { ErrorView } from '@/lib/ui/error-view';
+import { LoadingView } from '@/lib/ui/loading-view';
+import { MemberEditor } from '@/lib/ui/member/member-editor';
+
+export default function MemberPage() {
+  const { jobId, memberId } = useLocalSearchParams<{ jobId: string; memberId: string }>();
+  const job = useJob(jobId);
+  const member = useMember(memberId);
+  const { data: me } = useMe();
+  const save = useMemberSave(jobId, memberId);
+  const error = job.error ?? member.error;
+  if (error)
+    return (
+      <ErrorView
+        error={error}
+        onRetry={() => {
+          void job.mutate();
+          void member.mutate();
+        }}
+      />
+    );
+  if (!job.data || !member.data || !me) return <LoadingView />;
+  return (
+    <MemberEditor
+      key={member.data.id}
+      job={job.data}
+      member={member.data}
+      kind={member.data.kind}
+      storageKey={`${me.user.id}.${job.data.id}.${member.data.id}`}
+      onSave={save}
+      renderDiagrams={(result) => <MemberDiagrams result={result} />}
+    />
+  );
+}

@@ -1,0 +1,77 @@
+import { useCallback, useEffect, useRef, useState } from 'react';
+import { draftStorage } from '@/lib/api/draft-storage';
+import { flagAfterEdit, flaggedFields, type FlaggedField, type MemberDraft } from '@/lib/ui/member/member-draft';
+import { moveSource, newSource, type InputFlag, type SourceDraft, type SourceKind } from '@/lib/ui/member/source-draft';
+
+const isFlagged = (key: string): key is FlaggedField => key in flaggedFields;
+
+function isDraft(value: unknown): value is MemberDraft {
+  return typeof value === 'object' && value !== null && 'sources' in value && 'clearSpan' in value;
+}
+
+/**
+ * The member form's state, kept on the device under `storageKey` as it is typed so nothing is lost before
+ * it is saved (a reload or a dropped signal). `restored` says the draft came from the device.
+ */
+export function useMemberDraft(initial: MemberDraft, storageKey: string) {
+  const [state, setState] = useState(() => {
+    const stored = draftStorage.read(storageKey);
+    return isDraft(stored) ? { draft: stored, restored: true } : { draft: initial, restored: false };
+  });
+  const { draft } = state;
+  const touched = useRef(false);
+
+  useEffect(() => {
+    if (touched.current) draftStorage.write(storageKey, draft);
+  }, [draft, storageKey]);
+
+  const update = useCallback((change: (d: MemberDraft) => MemberDraft) => {
+    touched.current = true;
+    setState((s) => ({ ...s, draft: change(s.draft) }));
+  }, []);
+
+  const set = useCallback(
+    <K extends keyof MemberDraft>(key: K) =>
+      (value: MemberDraft[K]) =>
+        update((d) => ({
+          ...d,
+          [key]: value,
+          flags: isFlagged(key) ? { ...d.flags, [key]: flagAfterEdit(key, d.flags[key]) } : d.flags,
+        })),
+    [update],
+  );
+
+  return {
+    draft,
+    restored: state.restored,
+    set,
+    setFlag: (field: FlaggedField, flag: InputFlag) =>
+      update((d) => ({ ...d, flags: { ...d.flags, [field]: flag } })),
+    setSource: (index: number, patch: Partial<SourceDraft>) =>
+      update((d) => ({
+        ...d,
+        sources: d.sources.map((s, i) =>
+          i === index
+            ? { ...s, ...patch, flag: patch.flag ?? (s.flag === 'default' ? 'assumed' : s.flag) }
+            : s,
+        ),
+      })),
+    addSource: (kind: SourceKind) => update((d) => ({ ...d, sources: [...d.sources, newSource(kind)] })),
+    addSources: (sources: SourceDraft[]) => update((d) => ({ ...d, sources: [...d.sources, ...sources] })),
+    removeSource: (index: number) =>
+      update((d) => ({ ...d, sources: d.sources.filter((_, i) => i !== index) })),
+    moveSource: (index: number, step: -1 | 1) =>
+      update((d) => ({ ...d, sources: moveSource(d.sources, index, step) })),
+    /** Forget the device copy (after a save, or when the person discards it). */
+    forget: useCallback(
+      (replacement?: MemberDraft) => {
+        draftStorage.remove(storageKey);
+        touched.current = false;
+        setState((s) => ({ draft: replacement ?? s.draft, restored: false }));
+      },
+      [storageKey],
+    ),
+  };
+}
+
+export type MemberDraftState = ReturnType<typeof useMemberDraft>;

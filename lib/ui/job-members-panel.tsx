@@ -1,0 +1,91 @@
+import { Link } from 'expo-router';
+import { Pressable, StyleSheet, View } from 'react-native';
+import { formatNumber } from '@/lib/format';
+import { useJobMembers } from '@/lib/hooks/use-job-members';
+import { colors, layout, radii, spacing } from '@/lib/theme';
+import type { Job } from '@/shared/schemas/jobs';
+import type { MemberListItem } from '@/shared/schemas/members';
+import { Card } from './card';
+import { ErrorView } from './error-view';
+import { Icon } from './icon';
+import { LinkButton } from './link-button';
+import { memberStateLook } from './member-state';
+import { Text } from './text';
+
+function MemberRow({ member }: { member: MemberListItem }) {
+  const look = memberStateLook[member.summary.state];
+  return (
+    <Link href={{ pathname: '/jobs/[jobId]/members/[memberId]', params: { jobId: member.jobId, memberId: member.id } }} asChild>
+      <Pressable aria-label={`${member.label}: ${look.word}`} testID="member-row" style={styles.link}>
+        {({ pressed }) => (
+          <View style={[styles.row, pressed && styles.pressed]}>
+            <Icon name={look.icon} color={look.tone === 'danger' ? colors.danger : colors.ink} />
+            <View style={styles.text}>
+              <Text variant="bodyStrong">{member.label}</Text>
+              <Text tone={look.tone}>{look.word}</Text>
+              <Text variant="caption" tone="muted">
+                {member.kind === 'header' ? 'Header' : 'Beam'}
+                {member.wall ? ` · ${member.wall}` : ''} · {member.sizeId} · {member.summary.governingCheck} at{' '}
+                {formatNumber(member.summary.governingRatio, 2)}
+                {member.summary.warningsCount ? ` · ${member.summary.warningsCount} warnings` : ''}
+              </Text>
+            </View>
+            <Icon name="chevronRight" color={colors.inkMuted} />
+          </View>
+        )}
+      </Pressable>
+    </Link>
+  );
+}
+
+/** The job's members with their state, the loads they inherit from the job, and "Add a header" / "Add a beam". */
+export function JobMembersPanel({ job }: { job: Job }) {
+  const { data: members, error, mutate } = useJobMembers(job.id);
+  return (
+    <Card title="Members" testID="job-members">
+      <Text variant="caption" tone="muted">
+        Members take these from the job: {job.loadStandard}, ground snow {job.groundSnowPsf} psf
+        {job.groundSnowSource ? ` (${job.groundSnowSource})` : ' (source not entered)'}, roof {job.roofType} at{' '}
+        {job.roofPitchIn12} in 12.
+      </Text>
+      {error ? <ErrorView error={error} onRetry={() => mutate()} /> : null}
+      {members && members.length === 0 ? (
+        <Text tone="muted">No members yet. Add the header or beam for an opening.</Text>
+      ) : null}
+      {members?.map((m) => <MemberRow key={m.id} member={m} />)}
+      <View style={styles.actions}>
+        <LinkButton
+          label="Add a header"
+          icon="plus"
+          href={{ pathname: '/jobs/[jobId]/members/new', params: { jobId: job.id, kind: 'header' } }}
+          testID="add-header"
+        />
+        <LinkButton
+          label="Add a beam"
+          icon="plus"
+          variant="secondary"
+          href={{ pathname: '/jobs/[jobId]/members/new', params: { jobId: job.id, kind: 'beam' } }}
+          testID="add-beam"
+        />
+      </View>
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  link: { borderRadius: radii.md },
+  row: {
+    minHeight: layout.touchTarget,
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: spacing.md,
+    padding: spacing.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: radii.md,
+    backgroundColor: colors.paper,
+  },
+  pressed: { backgroundColor: colors.surfaceSunken },
+  text: { flex: 1, gap: spacing.xxs },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
+});
