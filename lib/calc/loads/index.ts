@@ -5,3 +5,14 @@ export { roofAngleDeg, slopeToHorizontalFactor } from '@/lib/calc/loads/roof-slo
 /** Output types of the load takedown (see takedown-line.ts). */
 export type { MemberLoads, TakedownLine } from '@/lib/calc/loads/takedown-line';
 export { LOAD_DEFAULTS, type LoadDefault } from '@/lib/calc/loads/defaults';
+export {
+  ageDefaults,
+  ATTIC_EQUIPMENT,
+  PLASTER_CEILING_PSF,
+  ROOF_COVERINGS,
+  whatsAboveSources,
+  type AboveSources,
+  type AtticEquipment,
+  type RoofCovering,
+  type WhatsAbove,
+} from '@/lib/calc/loads/whats-above';
