@@ -15,7 +15,13 @@ import { Text } from './text';
 function MemberRow({ member }: { member: MemberListItem }) {
   const look = memberStateLook[member.summary.state];
   return (
-    <Link href={{ pathname: '/jobs/[jobId]/members/[memberId]', params: { jobId: member.jobId, memberId: member.id } }} asChild>
+    <Link
+      href={{
+        pathname: '/jobs/[jobId]/members/[memberId]',
+        params: { jobId: member.jobId, memberId: member.id },
+      }}
+      asChild
+    >
       <Pressable aria-label={`${member.label}: ${look.word}`} testID="member-row" style={styles.link}>
         {({ pressed }) => (
           <View style={[styles.row, pressed && styles.pressed]}>
@@ -25,8 +31,8 @@ function MemberRow({ member }: { member: MemberListItem }) {
               <Text tone={look.tone}>{look.word}</Text>
               <Text variant="caption" tone="muted">
                 {member.kind === 'header' ? 'Header' : 'Beam'}
-                {member.wall ? ` · ${member.wall}` : ''} · {member.sizeId} · {member.summary.governingCheck} at{' '}
-                {formatNumber(member.summary.governingRatio, 2)}
+                {member.wall ? ` · ${member.wall}` : ''} · {member.sizeId} · {member.summary.governingCheck}{' '}
+                at {formatNumber(member.summary.governingRatio, 2)}
                 {member.summary.warningsCount ? ` · ${member.summary.warningsCount} warnings` : ''}
               </Text>
             </View>
@@ -45,14 +51,16 @@ export function JobMembersPanel({ job }: { job: Job }) {
     <Card title="Members" testID="job-members">
       <Text variant="caption" tone="muted">
         Members take these from the job: {job.loadStandard}, ground snow {job.groundSnowPsf} psf
-        {job.groundSnowSource ? ` (${job.groundSnowSource})` : ' (source not entered)'}, roof {job.roofType} at{' '}
-        {job.roofPitchIn12} in 12.
+        {job.groundSnowSource ? ` (${job.groundSnowSource})` : ' (source not entered)'}, roof {job.roofType}{' '}
+        at {job.roofPitchIn12} in 12.
       </Text>
       {error ? <ErrorView error={error} onRetry={() => mutate()} /> : null}
       {members && members.length === 0 ? (
         <Text tone="muted">No members yet. Add the header or beam for an opening.</Text>
       ) : null}
-      {members?.map((m) => <MemberRow key={m.id} member={m} />)}
+      {members?.map((m) => (
+        <MemberRow key={m.id} member={m} />
+      ))}
       <View style={styles.actions}>
         <LinkButton
           label="Add a header"

@@ -9,7 +9,8 @@ const ft = (value: number | undefined) => (value === undefined ? '' : formatFtIn
 const inch = (value: number | undefined) => (value === undefined ? '' : formatFtIn(value));
 const num = (value: number | undefined) => (value === undefined ? '' : String(value));
 
-function sourceDraft(source: LoadSource): SourceDraft {
+/** A parsed load source as a draft to edit. */
+export function sourceDraft(source: LoadSource): SourceDraft {
   const base: SourceDraft = {
     ...newSource(source.kind),
     key: newSourceKey(),

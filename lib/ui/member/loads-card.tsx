@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '@/lib/theme';
 import { Button } from '@/lib/ui/button';
@@ -11,6 +12,7 @@ import type { FieldErrors } from './member-input';
 import { MeasureField } from './measure-field';
 import { SourceCard } from './source-card';
 import { sourceKindLabels, type SourceKind } from './source-draft';
+import { WhatsAboveCard } from './whats-above-card';
 
 const addable: SourceKind[] = ['roof', 'ceiling', 'floor', 'wall-above', 'point'];
 
@@ -19,6 +21,7 @@ type EditionChoice = 'job' | LoadStandard;
 /** The job's load context (shown, overridable here) and the member's load sources. */
 export function LoadsCard({ form, errors, job }: { form: MemberDraftState; errors: FieldErrors; job: Job }) {
   const { draft, set, setFlag } = form;
+  const [above, setAbove] = useState(false);
   const editionChoices = [
     { value: 'job' as EditionChoice, label: `From the job (${job.loadStandard})` },
     ...loadStandardEditions.map((e) => ({ value: e as EditionChoice, label: e })),
@@ -64,6 +67,16 @@ export function LoadsCard({ form, errors, job }: { form: MemberDraftState; error
         </View>
       </View>
       <Text variant="label">Load sources</Text>
+      {above ? (
+        <WhatsAboveCard job={job} onAdd={form.addSources} onClose={() => setAbove(false)} />
+      ) : (
+        <Button
+          label="Build loads from what's above"
+          variant="secondary"
+          onPress={() => setAbove(true)}
+          testID="open-whats-above"
+        />
+      )}
       {draft.sources.length === 0 ? (
         <Text tone="muted">No loads yet. Add what lands on this member.</Text>
       ) : null}
