@@ -16,6 +16,7 @@ import type {
   MemberCreate,
   MemberListItem,
   MemberPatch,
+  MemberState,
   MemberSummary,
 } from '@/shared/schemas/members';
 import {
@@ -33,6 +34,12 @@ function asFieldError(error: unknown): unknown {
   return new AppError('bad_request', error.message, { [`input.${error.field}`]: [error.message] });
 }
 
+/** A failing check comes first: "needs an engineer" is only said of a member that passes. */
+function memberState(pass: boolean, engineerNeeded: boolean): MemberState {
+  if (!pass) return 'fails';
+  return engineerNeeded ? 'engineer-needed' : 'passes';
+}
+
 /**
  * Runs the engine on what is being saved: the check with its diagram samples, and for a header the
  * prescriptive-path verdict on the job's building width and ground snow. A beam always needs an engineer;
@@ -45,11 +52,7 @@ function evaluate(job: Job, label: string, wall: string, given: MemberCheckInput
     const facts = { member: input, buildingWidthFt: job.buildingWidthFt, groundSnowPsf: job.groundSnowPsf };
     const prescriptive = input.kind === 'header' ? prescriptiveVerdict(facts) : null;
     const engineerNeeded = prescriptive ? prescriptive.verdict === 'engineer-needed' : true;
-    const state: MemberSummary['state'] = !result.pass
-      ? 'fails'
-      : engineerNeeded
-        ? 'engineer-needed'
-        : 'passes';
+    const state = memberState(result.pass, engineerNeeded);
     const summary: MemberSummary = {
       state,
       pass: result.pass,
