@@ -1,5 +1,5 @@
 import { index, integer, real, sqliteTable, text } from 'drizzle-orm/sqlite-core';
-import { foundationTypes, loadStandardEditions, roofTypes } from '@/shared/schemas/jobs';
+import { adoptedCodes, foundationTypes, loadStandardEditions, roofTypes } from '@/shared/schemas/jobs';
 import { organizations } from './organizations';
 import { users } from './users';
 
@@ -18,6 +18,7 @@ export const jobs = sqliteTable(
     roofType: text('roof_type', { enum: roofTypes }).notNull(),
     roofPitchIn12: real('roof_pitch_in12').notNull(),
     buildingWidthFt: real('building_width_ft'),
+    adoptedCode: text('adopted_code', { enum: adoptedCodes }),
     loadStandard: text('load_standard', { enum: loadStandardEditions }).notNull(),
     groundSnowPsf: real('ground_snow_psf').notNull(),
     groundSnowSource: text('ground_snow_source').notNull(),

@@ -4,7 +4,7 @@
  * loads in psf, plf and lb, stresses in psi.
  *
  * @example
- * import { checkMember, buildShortlist, buildSpanTable, prescriptiveVerdict, CAUTION_TEXT } from '@/lib/calc';
+ * import { checkMember, buildShortlist, buildSpanTable, prescriptiveVerdict, CAUTION_TEXT, ENGINE_VERSION } from '@/lib/calc';
  *
  * Reference: NDS 2018 and NDS Supplement 2018; ASCE 7-16 / 7-22; IRC 2021; AWC Design Aid No. 6.
  */
@@ -22,3 +22,4 @@ export * from './nonbearing';
 export * from './shortlist';
 export * from './span-table';
 export * from './prescriptive';
+export * from './version';

@@ -1,6 +1,7 @@
 import { fieldErrors } from '@/shared/errors';
 import {
   jobInputSchema,
+  type AdoptedCode,
   type foundationTypes,
   type Job,
   type LoadStandard,
@@ -22,6 +23,7 @@ export type JobDraft = {
   roofType: RoofType;
   roofPitchIn12: string;
   buildingWidthFt: string;
+  adoptedCode: AdoptedCode | null;
   loadStandard: LoadStandard;
   groundSnowPsf: string;
   groundSnowSource: string;
@@ -50,6 +52,7 @@ export function emptyJobDraft(): JobDraft {
     roofType: 'gable',
     roofPitchIn12: '6',
     buildingWidthFt: '',
+    adoptedCode: null,
     loadStandard: 'ASCE 7-22',
     groundSnowPsf: '0',
     groundSnowSource: '',
@@ -68,6 +71,7 @@ export function jobToDraft(job: Job): JobDraft {
     roofType: job.roofType,
     roofPitchIn12: text(job.roofPitchIn12),
     buildingWidthFt: text(job.buildingWidthFt),
+    adoptedCode: job.adoptedCode,
     loadStandard: job.loadStandard,
     groundSnowPsf: text(job.groundSnowPsf),
     groundSnowSource: job.groundSnowSource,

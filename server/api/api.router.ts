@@ -15,6 +15,8 @@ import { createInvitationsService } from './invitations/invitations.service';
 import { jobsRouter } from './jobs/jobs.router';
 import { createJobsService } from './jobs/jobs.service';
 import { meRouter } from './me/me.router';
+import { jobMembersRouter, membersRouter } from './members/members.router';
+import { createMembersService } from './members/members.service';
 import { createMeService } from './me/me.service';
 import { orgsRouter } from './orgs/orgs.router';
 import { createOrgsService } from './orgs/orgs.service';
@@ -41,6 +43,9 @@ export function apiRouter(options: ApiOptions): Router {
   router.use('/me', meRouter({ me }));
   router.use('/orgs', orgsRouter({ db, orgs: createOrgsService(options) }));
   router.use('/invitations', invitationsRouter({ invitations: createInvitationsService(db), me, sessions }));
+  const members = { db, members: createMembersService(db) };
+  router.use('/jobs/:jobId/members', jobMembersRouter(members));
+  router.use('/members', membersRouter(members));
   router.use('/jobs', jobsRouter({ db, jobs: createJobsService(db) }));
   router.use('/calc', calcRouter({ calc: createCalcService() }));
   if (options.devMail) router.use('/dev/mail', devMailRouter({ db }));

@@ -4,6 +4,29 @@ export const loadStandardEditions = ['ASCE 7-16', 'ASCE 7-22'] as const;
 export const loadStandardSchema = z.enum(loadStandardEditions);
 export type LoadStandard = z.infer<typeof loadStandardSchema>;
 
+/** IRC editions a town may have adopted; the load standard follows from it (see asceEditionForCode). */
+export const adoptedCodes = ['IRC 2015', 'IRC 2018', 'IRC 2021', 'IRC 2024'] as const;
+export const adoptedCodeSchema = z.enum(adoptedCodes);
+export type AdoptedCode = z.infer<typeof adoptedCodeSchema>;
+
+/**
+ * The ASCE 7 edition the engine uses for a job in a town that adopted `code`: the edition the IRC edition
+ * references where the engine supports it, else the engine's nearest supported edition.
+ *
+ * From memory; confirm: IRC 2024 references ASCE 7-22 and IRC 2021 references ASCE 7-16. IRC 2018 and
+ * IRC 2015 reference older editions (ASCE 7-10, from memory), which the engine does not carry, so they map to ASCE 7-16,
+ * the nearest edition it supports. The mapping must be confirmed against the adopted code's referenced
+ * standards (IRC chapter 44) and the building department's amendments; the user can override the edition.
+ *
+ * @param code the adopted IRC edition
+ * @returns the load standard edition to check the job's members with
+ * @example asceEditionForCode('IRC 2024'); // 'ASCE 7-22'
+ * Reference: IRC 2015, 2018, 2021 and 2024, chapter 44 "Referenced Standards" (from memory; confirm).
+ */
+export function asceEditionForCode(code: AdoptedCode): LoadStandard {
+  return code === 'IRC 2024' ? 'ASCE 7-22' : 'ASCE 7-16';
+}
+
 export const roofTypes = ['gable', 'hip', 'shed', 'flat', 'gambrel', 'other'] as const;
 export const foundationTypes = ['slab', 'crawlspace', 'basement', 'pier', 'unknown'] as const;
 
@@ -38,6 +61,8 @@ export const jobInputSchema = z.object({
     .max(80, { message: 'At most 80 ft' })
     .nullable()
     .default(null),
+  /** The IRC edition the town has adopted; null when not known. */
+  adoptedCode: adoptedCodeSchema.nullable().default(null),
   loadStandard: loadStandardSchema.default('ASCE 7-22'),
   groundSnowPsf: z
     .number()
@@ -78,6 +103,7 @@ export const jobPatchSchema = z
     roofType: jobField.roofType.unwrap().optional(),
     roofPitchIn12: jobField.roofPitchIn12.unwrap().optional(),
     buildingWidthFt: jobField.buildingWidthFt.unwrap().optional(),
+    adoptedCode: jobField.adoptedCode.unwrap().optional(),
     loadStandard: jobField.loadStandard.unwrap().optional(),
     groundSnowPsf: jobField.groundSnowPsf.unwrap().optional(),
     groundSnowSource: jobField.groundSnowSource.unwrap().optional(),

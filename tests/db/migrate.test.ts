@@ -20,6 +20,7 @@ describe('migrations', () => {
       'invitations',
       'jobs',
       'mail_outbox',
+      'members',
       'memberships',
       'organizations',
       'sessions',
@@ -33,5 +34,60 @@ describe('migrations', () => {
     expect(orphan).toThrow(
       expect.objectContaining({ cause: expect.objectContaining({ code: 'SQLITE_CONSTRAINT_FOREIGNKEY' }) }),
     );
+  });
+
+  it("0001 adds the members table (its rows go with their job) and the job's adopted code", () => {
+    database = openDatabase(':memory:');
+    migrateDatabase(database.db);
+    const { db } = database;
+    const columns = (table: string) =>
+      db.all<{ name: string }>(sql`select name from pragma_table_info(${table})`).map((c) => c.name);
+    expect(columns('jobs')).toContain('adopted_code');
+    expect(columns('members')).toEqual([
+      'id',
+      'job_id',
+      'org_id',
+      'kind',
+      'label',
+      'wall',
+      'input',
+      'material_id',
+      'size_id',
+      'summary',
+      'result',
+      'prescriptive',
+      'engine_version',
+      'created_by',
+      'updated_by',
+      'created_at',
+      'updated_at',
+    ]);
+    expect(db.all(sql`select name from pragma_index_list('members')`)).toContainEqual({
+      name: 'members_job_created',
+    });
+    db.run(
+      sql`insert into organizations (id, name, kind, created_at) values ('o', 'Firm', 'contracting', 'now')`,
+    );
+    db.run(
+      sql`insert into users (id, email, name, password_hash, created_at) values ('u', 'u@x.test', 'U', 'h', 'now')`,
+    );
+    db.run(
+      sql`insert into jobs (id, org_id, name, address, stories, roof_type, roof_pitch_in12, load_standard,
+        ground_snow_psf, ground_snow_source, foundation, notes, created_by, created_at, updated_at)
+        values ('j', 'o', 'Job', '', 1, 'gable', 6, 'ASCE 7-22', 0, '', 'unknown', '', 'u', 'now', 'now')`,
+    );
+    const insertMember = (jobId: string) =>
+      db.run(
+        sql`insert into members (id, job_id, org_id, kind, label, wall, input, material_id, size_id, summary,
+          result, engine_version, created_by, updated_by, created_at, updated_at)
+          values ('m', ${jobId}, 'o', 'header', 'H', '', '{}', 'x', 'y', '{}', '{}', 'v', 'u', 'u', 'now', 'now')`,
+      );
+    expect(() => insertMember('no-job')).toThrow(
+      expect.objectContaining({ cause: expect.objectContaining({ code: 'SQLITE_CONSTRAINT_FOREIGNKEY' }) }),
+    );
+    insertMember('j');
+    expect(db.get<{ n: number }>(sql`select count(*) as n from members`)).toEqual({ n: 1 });
+    db.run(sql`delete from jobs where id = 'j'`);
+    expect(db.get<{ n: number }>(sql`select count(*) as n from members`)).toEqual({ n: 0 });
   });
 });

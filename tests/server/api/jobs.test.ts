@@ -21,6 +21,7 @@ const ranch: JobInput = {
   roofType: 'gable',
   roofPitchIn12: 4,
   buildingWidthFt: 28,
+  adoptedCode: 'IRC 2021',
   loadStandard: 'ASCE 7-16',
   groundSnowPsf: 25,
   groundSnowSource: 'test value',
@@ -47,9 +48,20 @@ describe('jobs', () => {
       yearBuilt: null,
       stories: 1,
       roofType: 'gable',
+      adoptedCode: null,
       loadStandard: 'ASCE 7-22',
       foundation: 'unknown',
     });
+  });
+
+  it('keeps the adopted code through a patch of other fields and refuses an edition it does not list', async () => {
+    const created = (await owner.post('/api/jobs').send(ranch).expect(201)).body;
+    const renamed = await owner.patch(`/api/jobs/${created.id}`).send({ name: 'Renamed' }).expect(200);
+    expect(renamed.body.adoptedCode).toBe('IRC 2021');
+    const bad = await owner.patch(`/api/jobs/${created.id}`).send({ adoptedCode: 'IRC 2012' }).expect(400);
+    expect(Object.keys(bad.body.error.fields)).toEqual(['adoptedCode']);
+    const cleared = await owner.patch(`/api/jobs/${created.id}`).send({ adoptedCode: null }).expect(200);
+    expect(cleared.body.adoptedCode).toBeNull();
   });
 
   it('lists newest first and keeps archived jobs apart (?archived=1)', async () => {
