@@ -20,6 +20,7 @@ const job: Job = {
   roofType: 'gable',
   roofPitchIn12: 6,
   buildingWidthFt: 28,
+  adoptedCode: 'IRC 2021',
   loadStandard: 'ASCE 7-22',
   groundSnowPsf: 30,
   groundSnowSource: 'test',
