@@ -13,7 +13,10 @@ async function signInAsContractor(page: Page): Promise<void> {
 }
 
 async function openJob(page: Page, name: string): Promise<void> {
-  await page.getByRole('link', { name: new RegExp(name) }).first().click();
+  await page
+    .getByRole('link', { name: new RegExp(name) })
+    .first()
+    .click();
   await page.getByTestId('job-members').waitFor();
 }
 
@@ -34,6 +37,8 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         await openJob(page, 'Split-level');
         await page.getByTestId('add-beam').click();
         await page.getByTestId('clear-span').fill('13-6-3/8');
+        await page.getByTestId('bearing-left').fill('6');
+        await page.getByTestId('bearing-right').fill('6');
         await addSource(page, 'roof', { tributary: '8' });
         await addSource(page, 'ceiling', { tributary: '6' });
         await addSource(page, 'floor', { tributary: '12' });
@@ -77,7 +82,10 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         await addSource(page, 'roof', { tributary: '12' });
         await addSource(page, 'ceiling', { tributary: '6' });
         await page.getByTestId('prescriptive-verdict').waitFor();
-        await page.getByTestId('framing-list').getByText(/Jack studs/).waitFor();
+        await page
+          .getByTestId('framing-list')
+          .getByText(/Jack studs/)
+          .waitFor();
         await snap(page, `${name}-member-header`);
       } finally {
         await close();
@@ -92,12 +100,18 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         const membersBefore = await page.getByTestId('member-row').count();
         await page.getByTestId('add-beam').click();
         await page.getByTestId('clear-span').fill('twelve');
-        await page.getByText(/Clear span: can't read/).waitFor();
+        await page
+          .getByText(/Clear span: can't read/)
+          .first()
+          .waitFor();
         await page.getByTestId('member-save').click();
         await page.getByText('Add at least one load source', { exact: false }).first().waitFor();
         await page.getByTestId('clear-span').fill('12');
         await addSource(page, 'floor', { tributary: '-3' });
-        await page.getByText(/can't be negative/).first().waitFor();
+        await page
+          .getByText(/can't be negative/)
+          .first()
+          .waitFor();
         await page.getByTestId('member-save').click();
         await page.getByTestId('save-status').getByText('Nothing was saved').waitFor();
         await snap(page, `${name}-member-bad-input`);

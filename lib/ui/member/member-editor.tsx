@@ -1,5 +1,5 @@
 import { useDeferredValue, useMemo, useRef, useState, type ReactNode } from 'react';
-import { ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native';
+import { Pressable, ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { useMemberDraft } from '@/lib/hooks/use-member-draft';
 import { colors, layout, spacing } from '@/lib/theme';
 import { Button } from '@/lib/ui/button';
@@ -36,7 +36,11 @@ type MemberEditorProps = {
   onSave: (body: MemberCreateBody) => Promise<SaveOutcome>;
   /** Renders the four diagrams for a result. */
   renderDiagrams?: (result: NonNullable<Member['result']>) => ReactNode;
+  /** The member was created just before this page opened: say it was saved. */
+  justSaved?: boolean;
 };
+
+const savedStatus = { tone: 'success', text: 'Saved. The result shown is the server’s.' } as const;
 
 /** Messages that only say a required field is still empty: held back until the person tries to save. */
 const isEmptyFieldMessage = (message: string) =>
@@ -56,7 +60,15 @@ function visibleErrors(errors: FieldErrors, all: boolean): FieldErrors {
  * The member editor: inputs, and the check recomputed on the device as the person types (same schema and
  * engine as the server). Saving sends the input; the server recomputes and its result is what is stored.
  */
-export function MemberEditor({ job, member, kind, storageKey, onSave, renderDiagrams }: MemberEditorProps) {
+export function MemberEditor({
+  job,
+  member,
+  kind,
+  storageKey,
+  onSave,
+  renderDiagrams,
+  justSaved,
+}: MemberEditorProps) {
   const initial = useMemo<MemberDraft>(
     () =>
       member
@@ -69,7 +81,9 @@ export function MemberEditor({ job, member, kind, storageKey, onSave, renderDiag
   const live = useMemo(() => liveCheck(deferred, job), [deferred, job]);
   const [attempted, setAttempted] = useState(false);
   const [serverErrors, setServerErrors] = useState<FieldErrors>({});
-  const [status, setStatus] = useState<{ tone: 'success' | 'error'; text: string } | null>(null);
+  const [status, setStatus] = useState<{ tone: 'success' | 'error'; text: string } | null>(
+    justSaved ? savedStatus : null,
+  );
   const [busy, setBusy] = useState(false);
   const savedJson = useRef(member ? JSON.stringify(initial) : '');
   const scroll = useRef<ScrollView>(null);
@@ -103,7 +117,7 @@ export function MemberEditor({ job, member, kind, storageKey, onSave, renderDiag
       setServerErrors({});
       savedJson.current = JSON.stringify(draft);
       form.forget();
-      setStatus({ tone: 'success', text: 'Saved. The result below is the server’s.' });
+      setStatus(savedStatus);
     } else {
       const mapped: FieldErrors = {};
       for (const [path, messages] of Object.entries(outcome.fields)) {
@@ -233,24 +247,23 @@ export function MemberEditor({ job, member, kind, storageKey, onSave, renderDiag
         {results}
       </ScrollView>
       <View style={styles.bar} testID="pinned-verdict">
-        <View style={styles.barVerdict}>
+        <Pressable
+          role="button"
+          accessibilityRole="button"
+          aria-label="Go to the result"
+          style={styles.barVerdict}
+          onPress={() => scroll.current?.scrollTo({ y: resultY.current, animated: true })}
+          testID="jump-to-result"
+        >
           {result ? (
             <VerdictBanner result={result} compact />
           ) : (
             <Text variant="caption" tone="muted">
-              No result yet
+              No result yet: enter the span and the loads.
             </Text>
           )}
-        </View>
-        <View style={styles.barActions}>
-          <Button
-            label="Result"
-            variant="secondary"
-            onPress={() => scroll.current?.scrollTo({ y: resultY.current, animated: true })}
-            testID="jump-to-result"
-          />
-          {saveButton}
-        </View>
+        </Pressable>
+        {saveButton}
       </View>
     </View>
   );
@@ -279,7 +292,8 @@ const styles = StyleSheet.create({
     backgroundColor: colors.surface,
     padding: spacing.sm,
     gap: spacing.sm,
+    flexDirection: 'row',
+    alignItems: 'center',
   },
-  barVerdict: { alignSelf: 'stretch' },
-  barActions: { flexDirection: 'row', gap: spacing.sm, justifyContent: 'flex-end' },
+  barVerdict: { flex: 1, minWidth: 0, justifyContent: 'center' },
 });

@@ -2,7 +2,8 @@ import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '@/lib/theme';
 import { Button } from '@/lib/ui/button';
 import { CheckRow } from '@/lib/ui/check-row';
-import { ChoiceGroup, type Choice } from '@/lib/ui/choice-group';
+import type { Choice } from '@/lib/ui/choice-group';
+import { PickerField } from '@/lib/ui/picker-field';
 import { Text } from '@/lib/ui/text';
 import { TextField } from '@/lib/ui/text-field';
 import type { FieldErrors } from './member-input';
@@ -63,7 +64,7 @@ export function SourceCard({ source, index, count, errors, onChange, onMove, onR
       />
       {source.kind === 'point' ? (
         <>
-          <ChoiceGroup
+          <PickerField
             label="What it comes from"
             choices={pointChoices}
             value={source.pointKind}

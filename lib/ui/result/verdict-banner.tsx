@@ -6,18 +6,20 @@ import { Text } from '@/lib/ui/text';
 import type { MemberCheckResult } from '@/shared/schemas/calc/member';
 
 /** The overall verdict in words with the governing check and its ratio. */
-export function verdictText(result: MemberCheckResult): { title: string; detail: string } {
+export function verdictText(result: MemberCheckResult): { title: string; detail: string; short: string } {
   const governing = result.checks.find((c) => c.id === result.governing.check);
-  const detail = `${governing?.label ?? result.governing.check} governs at ${formatNumber(result.governing.ratio, 2)} (${result.governing.combination})`;
+  const label = governing?.label ?? result.governing.check;
+  const ratio = formatNumber(result.governing.ratio, 2);
   return {
     title: result.pass ? 'Passes the preliminary check' : 'Fails the preliminary check',
-    detail,
+    detail: `${label} governs at ${ratio} (${result.governing.combination})`,
+    short: `${label.split(' (')[0]} ${ratio}`,
   };
 }
 
 /** The verdict as a banner: icon, words, the member and the governing check. */
 export function VerdictBanner({ result, compact = false }: { result: MemberCheckResult; compact?: boolean }) {
-  const { title, detail } = verdictText(result);
+  const { title, detail, short } = verdictText(result);
   const fg = result.pass ? colors.success : colors.danger;
   return (
     <View
@@ -31,11 +33,11 @@ export function VerdictBanner({ result, compact = false }: { result: MemberCheck
     >
       <Icon name={result.pass ? 'check' : 'error'} color={fg} />
       <View style={styles.text}>
-        <Text variant="bodyStrong" style={{ color: fg }}>
-          {title}
+        <Text variant="bodyStrong" style={{ color: fg }} numberOfLines={compact ? 1 : undefined}>
+          {compact ? (result.pass ? 'Passes' : 'Fails') : title}
         </Text>
         <Text variant="caption" numberOfLines={compact ? 1 : undefined}>
-          {compact ? detail : `${result.member.sizeLabel} ${result.member.materialLabel} · ${detail}`}
+          {compact ? short : `${result.member.sizeLabel} ${result.member.materialLabel} · ${detail}`}
         </Text>
       </View>
     </View>

@@ -9,7 +9,11 @@ import { LoadingView } from '@/lib/ui/loading-view';
 import { MemberEditor } from '@/lib/ui/member/member-editor';
 
 export default function MemberPage() {
-  const { jobId, memberId } = useLocalSearchParams<{ jobId: string; memberId: string }>();
+  const { jobId, memberId, saved } = useLocalSearchParams<{
+    jobId: string;
+    memberId: string;
+    saved?: string;
+  }>();
   const job = useJob(jobId);
   const member = useMember(memberId);
   const { data: me } = useMe();
@@ -34,7 +38,8 @@ export default function MemberPage() {
       kind={member.data.kind}
       storageKey={`${me.user.id}.${job.data.id}.${member.data.id}`}
       onSave={save}
-      renderDiagrams={(result) => <MemberDiagrams result={result} />}
+      justSaved={saved === '1'}
+      renderDiagrams={(result) => <MemberDiagrams result={result} testID="member-diagrams" />}
     />
   );
 }

@@ -22,7 +22,7 @@ export default function NewMemberPage() {
       kind={memberKind}
       storageKey={`${me.user.id}.${job.id}.new-${memberKind}`}
       onSave={save}
-      renderDiagrams={(result) => <MemberDiagrams result={result} />}
+      renderDiagrams={(result) => <MemberDiagrams result={result} testID="member-diagrams" />}
     />
   );
 }
