@@ -50,7 +50,13 @@ export function CurveDiagram({ result, width, kind, testID }: CurveDiagramProps 
           y2={layout.baselineY}
           stroke={diagramLook.zeroLine}
         />
-        <Path d={layout.linePath} fill="none" stroke={look.stroke} strokeWidth={2} strokeLinejoin="round" />
+        <Path
+          d={layout.linePath}
+          fill={diagramLook.none}
+          stroke={look.stroke}
+          strokeWidth={2}
+          strokeLinejoin="round"
+        />
         {layout.labels.map((label) => (
           <DiagramLabel key={label.id} label={label} />
         ))}

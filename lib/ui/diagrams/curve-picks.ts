@@ -31,8 +31,8 @@ export function curveValue(sample: DiagramSample, kind: CurveKind): number {
  * Picks the values worth a label on one curve: the largest positive and the most negative sample (each
  * only where it is not essentially zero), and the values at both supports. An extreme at a support is the
  * support's label, with the extreme's priority (a value reached both at a support and inside the span is
- * labelled at the support). Values within 1e-9 of the curve's largest magnitude of zero
- * are returned as exactly 0.
+ * labelled at the support). Values closer to zero than 1e-9 × the curve's largest magnitude are
+ * returned as exactly 0.
  *
  * @param samples the engine's samples, design frame (ft, lb, lb·ft, in), sorted by xFt
  * @param kind which curve

@@ -15,6 +15,7 @@ export const diagramLook = {
   chipFill: colors.surface,
   chipStroke: colors.line,
   text: colors.ink,
+  none: colors.none,
   fontRegular: fonts.regular,
   fontStrong: fonts.semibold,
 } as const;

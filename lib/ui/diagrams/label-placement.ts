@@ -75,10 +75,15 @@ export function placeLabels(
   const placed: PlacedLabel[] = [];
   const dropped: string[] = [];
   const ordered = [...requests].sort((a, b) => a.priority - b.priority);
+  const taken: Box[] = [...obstacles];
   for (const request of ordered) {
-    const spot = findSpot(request, bounds, [...obstacles, ...placed]);
-    if (spot) placed.push(spot);
-    else dropped.push(request.id);
+    const spot = findSpot(request, bounds, taken);
+    if (spot) {
+      taken.push(spot);
+      placed.push(spot);
+    } else {
+      dropped.push(request.id);
+    }
   }
   return { placed, dropped };
 }

@@ -37,7 +37,7 @@ function Band({ band }: { band: LoadBand }) {
           d={`M${x} ${band.y}V${bottom}M${x - 2.5} ${bottom - 3}L${x} ${bottom}L${x + 2.5} ${bottom - 3}`}
           stroke={diagramLook.loadStroke}
           strokeWidth={1.25}
-          fill="none"
+          fill={diagramLook.none}
         />
       ))}
     </G>

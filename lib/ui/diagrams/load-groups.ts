@@ -11,8 +11,9 @@ export interface LoadPart {
 }
 
 /**
- * One source's load as drawn: the takedown's lines of that source (one per load type) summed, unfactored.
- * Positions are in the design frame (ft from the centre of the left bearing), as in the takedown.
+ * One source's load as drawn: the takedown's lines of that source, one part per load type, unfactored;
+ * the total is their plain sum (shown only where the parts add up, see addsUp). Positions are in the design
+ * frame (ft from the centre of the left bearing), as in the takedown.
  */
 export type DrawnLoad =
   | {

@@ -63,9 +63,13 @@ function candidates(
   widthPx: number,
 ): number[] {
   const out: number[] = [];
+  const seen = new Set<number>();
   const add = (x: number) => {
     const c = Math.min(Math.max(x, 0), Math.max(0, widthPx - width));
-    if (!out.some((o) => Math.abs(o - c) < 0.5)) out.push(c);
+    const key = Math.round(c * 2);
+    if (seen.has(key)) return;
+    seen.add(key);
+    out.push(c);
   };
   preferred.forEach(add);
   for (let x = from; x <= to; x += SCAN_STEP) add(x);
@@ -86,12 +90,10 @@ function pack<T extends Packable>(
   return items.map((item) => {
     for (let variant = 0; variant < item.labelWidths.length; variant++) {
       const width = item.labelWidths[variant];
-      const xs = xsFor(item, width);
-      for (let row = 0; row <= rows.length; row++) {
+      const xs = xsFor(item, width).filter((x) => clear(item, x, width));
+      for (let row = 0; row <= rows.length && xs.length > 0; row++) {
         const taken = rows[row] ?? [];
-        const labelX = xs.find(
-          (x) => clear(item, x, width) && !taken.some((t) => overlaps(t, occupied(item, x, width))),
-        );
+        const labelX = xs.find((x) => !taken.some((t) => overlaps(t, occupied(item, x, width))));
         if (labelX !== undefined) {
           (rows[row] ??= []).push(occupied(item, labelX, width));
           return { row, labelX, variant, crossesArrow: false };

@@ -18,7 +18,7 @@ export type MemberDiagramsProps = {
 function Section({ title, note, children }: { title: string; note: string; children: ReactNode }) {
   return (
     <View style={styles.section}>
-      <Text variant="label">{title}</Text>
+      <Text variant="heading">{title}</Text>
       <Text variant="caption" tone="muted">
         {note}
       </Text>
