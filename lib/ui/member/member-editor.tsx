@@ -1,6 +1,7 @@
-import { useDeferredValue, useMemo, useRef, useState, type ReactNode } from 'react';
+import { useDeferredValue, useMemo, useRef, useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { useMemberDraft } from '@/lib/hooks/use-member-draft';
+import { MemberDiagrams } from '@/lib/ui/diagrams/member-diagrams';
 import { colors, layout, spacing } from '@/lib/theme';
 import { Button } from '@/lib/ui/button';
 import { Notice } from '@/lib/ui/notice';
@@ -34,8 +35,6 @@ type MemberEditorProps = {
   /** Device storage key of the draft (carries the user, job and member). */
   storageKey: string;
   onSave: (body: MemberCreateBody) => Promise<SaveOutcome>;
-  /** Renders the four diagrams for a result. */
-  renderDiagrams?: (result: NonNullable<Member['result']>) => ReactNode;
   /** The member was created just before this page opened: say it was saved. */
   justSaved?: boolean;
 };
@@ -66,7 +65,6 @@ export function MemberEditor({
   kind,
   storageKey,
   onSave,
-  renderDiagrams,
   justSaved,
 }: MemberEditorProps) {
   const initial = useMemo<MemberDraft>(
@@ -170,7 +168,7 @@ export function MemberEditor({
         prescriptive={prescriptive}
         errors={live.ok ? {} : live.errors}
         notice={statusNotice}
-        diagrams={result && renderDiagrams ? renderDiagrams(result) : null}
+        diagrams={result ? <MemberDiagrams result={result} testID="member-diagrams" /> : null}
       >
         {live.ok ? (
           <ShortlistPanel

@@ -3,10 +3,9 @@ import { useJob } from '@/lib/hooks/use-job';
 import { useMe } from '@/lib/hooks/use-me';
 import { useMember } from '@/lib/hooks/use-member';
 import { useMemberSave } from '@/lib/hooks/use-member-save';
-import { MemberDiagrams } from '@/lib/ui/diagrams/member-diagrams';
 import { ErrorView } from '@/lib/ui/error-view';
 import { LoadingView } from '@/lib/ui/loading-view';
-import { MemberEditor } from '@/lib/ui/member/member-editor';
+import { LazyMemberEditor, WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
 
 export default function MemberPage() {
   const { jobId, memberId, saved } = useLocalSearchParams<{
@@ -31,15 +30,16 @@ export default function MemberPage() {
     );
   if (!job.data || !member.data || !me) return <LoadingView />;
   return (
-    <MemberEditor
-      key={member.data.id}
-      job={job.data}
-      member={member.data}
-      kind={member.data.kind}
-      storageKey={`${me.user.id}.${job.data.id}.${member.data.id}`}
-      onSave={save}
-      justSaved={saved === '1'}
-      renderDiagrams={(result) => <MemberDiagrams result={result} testID="member-diagrams" />}
-    />
+    <WorkspaceSuspense>
+      <LazyMemberEditor
+        key={member.data.id}
+        job={job.data}
+        member={member.data}
+        kind={member.data.kind}
+        storageKey={`${me.user.id}.${job.data.id}.${member.data.id}`}
+        onSave={save}
+        justSaved={saved === '1'}
+      />
+    </WorkspaceSuspense>
   );
 }

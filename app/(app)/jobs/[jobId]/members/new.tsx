@@ -2,10 +2,9 @@ import { useLocalSearchParams } from 'expo-router';
 import { useJob } from '@/lib/hooks/use-job';
 import { useMe } from '@/lib/hooks/use-me';
 import { useMemberSave } from '@/lib/hooks/use-member-save';
-import { MemberDiagrams } from '@/lib/ui/diagrams/member-diagrams';
 import { ErrorView } from '@/lib/ui/error-view';
 import { LoadingView } from '@/lib/ui/loading-view';
-import { MemberEditor } from '@/lib/ui/member/member-editor';
+import { LazyMemberEditor, WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
 
 export default function NewMemberPage() {
   const { jobId, kind } = useLocalSearchParams<{ jobId: string; kind?: string }>();
@@ -16,13 +15,14 @@ export default function NewMemberPage() {
   if (error) return <ErrorView error={error} onRetry={() => mutate()} />;
   if (!job || !me) return <LoadingView />;
   return (
-    <MemberEditor
-      key={`new-${memberKind}`}
-      job={job}
-      kind={memberKind}
-      storageKey={`${me.user.id}.${job.id}.new-${memberKind}`}
-      onSave={save}
-      renderDiagrams={(result) => <MemberDiagrams result={result} testID="member-diagrams" />}
-    />
+    <WorkspaceSuspense>
+      <LazyMemberEditor
+        key={`new-${memberKind}`}
+        job={job}
+        kind={memberKind}
+        storageKey={`${me.user.id}.${job.id}.new-${memberKind}`}
+        onSave={save}
+      />
+    </WorkspaceSuspense>
   );
 }

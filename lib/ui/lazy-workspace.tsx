@@ -1,0 +1,12 @@
+import { lazy, Suspense, type ReactNode } from 'react';
+import { LoadingView } from './loading-view';
+
+const loadWorkspace = () => import('@/lib/ui/workspace');
+
+/** The member editor, loaded with the engine when a member screen first opens. */
+export const LazyMemberEditor = lazy(() => loadWorkspace().then((m) => ({ default: m.MemberEditor })));
+
+/** Shows the loading view while the engine's chunk arrives. */
+export function WorkspaceSuspense({ children }: { children: ReactNode }) {
+  return <Suspense fallback={<LoadingView />}>{children}</Suspense>;
+}
