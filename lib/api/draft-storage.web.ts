@@ -14,6 +14,7 @@ export const draftStorage = {
       return null;
     }
   },
-  write: (key: string, value: unknown): void => window.localStorage.setItem(prefix + key, JSON.stringify(value)),
+  write: (key: string, value: unknown): void =>
+    window.localStorage.setItem(prefix + key, JSON.stringify(value)),
   remove: (key: string): void => window.localStorage.removeItem(prefix + key),
 };

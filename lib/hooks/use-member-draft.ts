@@ -1,7 +1,18 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { draftStorage } from '@/lib/api/draft-storage';
-import { flagAfterEdit, flaggedFields, type FlaggedField, type MemberDraft } from '@/lib/ui/member/member-draft';
-import { moveSource, newSource, type InputFlag, type SourceDraft, type SourceKind } from '@/lib/ui/member/source-draft';
+import {
+  flagAfterEdit,
+  flaggedFields,
+  type FlaggedField,
+  type MemberDraft,
+} from '@/lib/ui/member/member-draft';
+import {
+  moveSource,
+  newSource,
+  type InputFlag,
+  type SourceDraft,
+  type SourceKind,
+} from '@/lib/ui/member/source-draft';
 
 const isFlagged = (key: string): key is FlaggedField => key in flaggedFields;
 

@@ -26,7 +26,10 @@ export function useMemberSave(jobId: string, memberId?: string) {
           mutate(keys.jobMembers(orgId, jobId)),
         ]);
         if (!memberId)
-          router.replace({ pathname: '/jobs/[jobId]/members/[memberId]', params: { jobId, memberId: member.id, saved: '1' } });
+          router.replace({
+            pathname: '/jobs/[jobId]/members/[memberId]',
+            params: { jobId, memberId: member.id, saved: '1' },
+          });
         return { ok: true, member };
       } catch (error) {
         if (!(error instanceof ApiError)) throw error;

@@ -59,14 +59,7 @@ function visibleErrors(errors: FieldErrors, all: boolean): FieldErrors {
  * The member editor: inputs, and the check recomputed on the device as the person types (same schema and
  * engine as the server). Saving sends the input; the server recomputes and its result is what is stored.
  */
-export function MemberEditor({
-  job,
-  member,
-  kind,
-  storageKey,
-  onSave,
-  justSaved,
-}: MemberEditorProps) {
+export function MemberEditor({ job, member, kind, storageKey, onSave, justSaved }: MemberEditorProps) {
   const initial = useMemo<MemberDraft>(
     () =>
       member
