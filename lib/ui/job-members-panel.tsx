@@ -10,6 +10,7 @@ import { ErrorView } from './error-view';
 import { Icon } from './icon';
 import { LinkButton } from './link-button';
 import { memberStateLook } from './member-state';
+import { checkNames } from './result/check-names';
 import { Text } from './text';
 
 function MemberRow({ member }: { member: MemberListItem }) {
@@ -31,8 +32,9 @@ function MemberRow({ member }: { member: MemberListItem }) {
               <Text tone={look.tone}>{look.word}</Text>
               <Text variant="caption" tone="muted">
                 {member.kind === 'header' ? 'Header' : 'Beam'}
-                {member.wall ? ` · ${member.wall}` : ''} · {member.sizeId} · {member.summary.governingCheck}{' '}
-                at {formatNumber(member.summary.governingRatio, 2)}
+                {member.wall ? ` · ${member.wall}` : ''} · {member.summary.sizeLabel}{' '}
+                {member.summary.materialLabel} · {member.summary.governingCheck} at{' '}
+                {formatNumber(member.summary.governingRatio, 2)}
                 {member.summary.warningsCount ? ` · ${member.summary.warningsCount} warnings` : ''}
               </Text>
             </View>

@@ -50,6 +50,9 @@ export const memberSummarySchema = z.object({
   governingCheck: checkIdSchema,
   governingRatio: z.number(),
   warningsCount: z.number().int(),
+  /** The chosen size and material as the engine names them ("2-ply 2x10", "Douglas Fir-Larch No.2"). */
+  sizeLabel: z.string(),
+  materialLabel: z.string(),
   /** Reasons an engineer is needed (the prescriptive path's), empty when the state is not engineer-needed. */
   engineerReasons: z.array(z.string()),
 });

@@ -7,6 +7,7 @@ import { Card } from '@/lib/ui/card';
 import { CheckRow } from '@/lib/ui/check-row';
 import { ChoiceGroup } from '@/lib/ui/choice-group';
 import { FieldMessages } from '@/lib/ui/field-messages';
+import { checkName } from '@/lib/ui/result/check-names';
 import { RatioBar } from '@/lib/ui/result/ratio-bar';
 import { Text } from '@/lib/ui/text';
 import { TextField } from '@/lib/ui/text-field';

@@ -59,6 +59,8 @@ function evaluate(job: Job, label: string, wall: string, given: MemberCheckInput
       governingCheck: result.governing.check,
       governingRatio: result.governing.ratio,
       warningsCount: result.warnings.length,
+      sizeLabel: result.member.sizeLabel,
+      materialLabel: result.member.materialLabel,
       engineerReasons: state !== 'engineer-needed' ? [] : (prescriptive?.reasons ?? envelopeReasons(facts)),
     };
     return {

@@ -52,6 +52,8 @@ const saved: Member = JSON.parse(
       governingCheck: result.governing.check,
       governingRatio: result.governing.ratio,
       warningsCount: result.warnings.length,
+      sizeLabel: result.member.sizeLabel,
+      materialLabel: result.member.materialLabel,
       engineerReasons: [],
     },
     result,

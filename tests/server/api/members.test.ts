@@ -183,6 +183,8 @@ describe('members: the server recomputes on every save', () => {
       governingCheck: created.result.governing.check,
       governingRatio: created.result.governing.ratio,
       warningsCount: created.result.warnings.length,
+      sizeLabel: created.result.member.sizeLabel,
+      materialLabel: created.result.member.materialLabel,
       engineerReasons: [],
     });
   });
