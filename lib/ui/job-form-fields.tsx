@@ -1,8 +1,15 @@
-import { loadStandardEditions, type LoadStandard } from '@/shared/schemas/jobs';
+import {
+  adoptedCodes,
+  asceEditionForCode,
+  loadStandardEditions,
+  type AdoptedCode,
+  type LoadStandard,
+} from '@/shared/schemas/jobs';
 import { Card } from './card';
 import { ChoiceGroup, type Choice } from './choice-group';
 import type { FoundationType, JobDraft, RoofType } from './job-draft';
 import { foundationLabels, roofTypeLabels } from './job-labels';
+import { Text } from './text';
 import { TextField } from './text-field';
 
 const choicesOf = <T extends string>(labels: Record<T, string>): Choice<T>[] =>
@@ -10,6 +17,11 @@ const choicesOf = <T extends string>(labels: Record<T, string>): Choice<T>[] =>
 const roofChoices = choicesOf<RoofType>(roofTypeLabels);
 const foundationChoices = choicesOf<FoundationType>(foundationLabels);
 const standardChoices: Choice<LoadStandard>[] = loadStandardEditions.map((e) => ({ value: e, label: e }));
+type CodeChoice = AdoptedCode | 'unknown';
+const codeChoices: Choice<CodeChoice>[] = [
+  ...adoptedCodes.map((code) => ({ value: code as CodeChoice, label: code })),
+  { value: 'unknown', label: 'Not known' },
+];
 
 /** A text keyboard with digits, space and "/" at hand, so "6 1/2" can be typed. */
 const fractionKeyboard = { keyboardType: 'numbers-and-punctuation' } as const;
@@ -99,6 +111,21 @@ export function JobFormFields({ draft, set, errors }: JobFormFieldsProps) {
         />
       </Card>
       <Card title="Snow and load standard">
+        <ChoiceGroup
+          label="Code the town has adopted"
+          testID="job-adopted-code"
+          choices={codeChoices}
+          value={draft.adoptedCode ?? 'unknown'}
+          onChange={(code) => {
+            set('adoptedCode')(code === 'unknown' ? null : code);
+            if (code !== 'unknown') set('loadStandard')(asceEditionForCode(code));
+          }}
+        />
+        <Text variant="caption" tone="muted">
+          Choosing the code sets the load standard below: IRC 2024 uses ASCE 7-22; IRC 2021 uses ASCE 7-16;
+          older editions use older ASCE 7 editions, and Tributary uses ASCE 7-16 for them (from memory;
+          confirm with the building department). Change the standard if you know better.
+        </Text>
         <ChoiceGroup
           label="Load standard edition"
           testID="job-load-standard"
