@@ -208,6 +208,9 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
       sizeLabel: size.label,
       plateLabel: support.plateLabel,
       supportWidthIn: support.spec.widthIn,
+      snowThermal: prepared.snow
+        ? { condition: prepared.snow.thermalCondition, ct: prepared.snow.thermalCt }
+        : undefined,
     }),
     ...(prepared.snow && {
       snow: {
@@ -216,6 +219,10 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
         pmPsf: prepared.snow.pmPsf,
         designPsf: prepared.snow.designPsf,
         governing: prepared.snow.governing,
+        thermalCondition: prepared.snow.thermalCondition,
+        thermalCt: prepared.snow.thermalCt,
+        thermalCtGiven: prepared.snow.thermalCtGiven,
+        slipperyCurveUsed: prepared.snow.slipperyCurveUsed,
         factors: prepared.snow.factors,
         notes: prepared.snow.notes,
         reference: prepared.snow.reference,

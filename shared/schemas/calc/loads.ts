@@ -137,6 +137,25 @@ export type MemberLoadsInput = z.infer<typeof memberLoadsInputSchema>;
 export const riskCategorySchema = z.enum(['I', 'II', 'III', 'IV']);
 
 /**
+ * The roof's thermal condition (ASCE 7 Table 7.3-2), from which the engine takes the thermal factor C_t and
+ * the slope-factor curve of the job's edition:
+ * - 'heated-unvented': a heated building whose roof is not ventilated (cathedral ceiling, insulation at the
+ *   roof deck);
+ * - 'vented-attic-insulated-ceiling': a ventilated attic over a heated space with more than R-25 in the
+ *   ceiling between them (the usual house);
+ * - 'vented-attic-little-insulation': a ventilated attic over a heated space with R-25 or less in the ceiling;
+ * - 'unheated': an unheated structure (detached garage, shed, open porch roof).
+ */
+export const roofThermalConditions = [
+  'heated-unvented',
+  'vented-attic-insulated-ceiling',
+  'vented-attic-little-insulation',
+  'unheated',
+] as const;
+export const roofThermalConditionSchema = z.enum(roofThermalConditions);
+export type RoofThermalCondition = z.infer<typeof roofThermalConditionSchema>;
+
+/**
  * Snow inputs for one roof (ASCE 7 chapter 7). Ground snow in psf as the job's edition defines it
  * (ASCE 7-16: 50-year map value; ASCE 7-22: strength-level, risk-targeted). Factors default to the values
  * stated in the snow module; importanceIs (ASCE 7-16 only) defaults from the risk category.
@@ -148,9 +167,20 @@ export const snowInputSchema = z.object({
   roofType: z.enum(roofTypes).default('gable'),
   riskCategory: riskCategorySchema.default('II'),
   exposureCe: z.number().finite().min(0.7).max(1.3).default(1.0),
-  thermalCt: z.number().finite().min(0.85).max(1.3).default(1.0),
+  /** The roof's thermal condition; omitted = 'vented-attic-insulated-ceiling' (the usual house). */
+  thermalCondition: roofThermalConditionSchema.optional(),
+  /** C_t given outright, overriding the value the thermal condition gives (the condition still says vented or not). */
+  thermalCt: z.number().finite().min(0.85).max(1.3).optional(),
   importanceIs: z.number().finite().min(0.8).max(1.2).optional(),
-  /** Unobstructed slippery surface (metal, glass, smooth membrane) that lets snow slide off the eaves. */
+  /**
+   * Thermal resistance of the roof's insulation, R in ft²·h·°F/Btu: a warm roof (C_t ≤ 1.0) takes the
+   * slippery-surface curve only with enough of it (ASCE 7-16 §7.4.1). Omitted = not known.
+   */
+  roofInsulationR: z.number().finite().min(0).max(100).optional(),
+  /**
+   * Unobstructed slippery surface (metal, glass, smooth membrane) that lets snow slide off the eaves. Its
+   * lower curve is used on a cold roof, and on a warm roof only when roofInsulationR meets §7.4.1.
+   */
   slipperyUnobstructed: z.boolean().default(false),
   /** The roof steps down to a lower roof next to this member (drift). */
   roofStepsDown: z.boolean().default(false),

@@ -27,6 +27,7 @@ export const sawnReferenceRowSchema = z
     EPsi: psi.min(800_000).max(2_500_000),
     EminPsi: psi.min(250_000).max(1_000_000),
     provenance,
+    note: z.string().min(1).optional(),
   })
   .refine((row) => row.EminPsi < row.EPsi, { message: 'E_min must be below E' });
 

@@ -4,6 +4,7 @@ import {
   inputFlagSchema,
   loadSourceSchema,
   loadTypeSchema,
+  roofThermalConditionSchema,
   snowInputSchema,
 } from '@/shared/schemas/calc/loads';
 
@@ -27,6 +28,7 @@ export const memberKinds = ['header', 'beam'] as const;
 export const deflectionUses = [
   'floor',
   'floor-tile',
+  'floor-stone',
   'plaster-ceiling',
   'gypsum-ceiling',
   'roof',
@@ -236,6 +238,12 @@ export const memberCheckResultSchema = z.object({
       pmPsf: z.number(),
       designPsf: z.number(),
       governing: z.enum(['sloped', 'minimum']),
+      /** The roof's thermal condition used (given or the default), the C_t used and whether it was given. */
+      thermalCondition: roofThermalConditionSchema.optional(),
+      thermalCt: z.number().optional(),
+      thermalCtGiven: z.boolean().optional(),
+      /** True when the slippery-surface C_s curve was used (a cold roof, or a warm roof insulated enough). */
+      slipperyCurveUsed: z.boolean().optional(),
       factors: z.array(factorUseSchema),
       notes: z.array(z.string()),
       reference: z.string(),
