@@ -199,6 +199,36 @@ const diagramSampleSchema = z.object({
   deflectionIn: z.number(),
 });
 
+/** The supports of a member, left to right: two ends, and a centre post under a two-span continuous beam. */
+export const supportNames = ['left', 'centre', 'right'] as const;
+export const supportNameSchema = z.enum(supportNames);
+export type SupportName = z.infer<typeof supportNameSchema>;
+
+/** A deflection (in, downward positive) and where its largest value is (ft along the design span). */
+const deflectionAtSchema = z.object({ in: z.number(), atFt: z.number() });
+
+/**
+ * What one load combination asks of the member (self-weight included): support reactions of that
+ * combination (lb, upward positive), the largest moment (lb·ft, sagging positive) and shear (lb) with their
+ * positions, the design shear the shear check uses (at d from the supports when asked) and the support it is
+ * next to, and the variable-load, plain elastic total and creep-adjusted total deflections with the position
+ * of each largest value. Positions are ft along the design span from the left support's centre.
+ */
+export const combinationDemandsSchema = z.object({
+  combination: z.string(),
+  CD: z.number(),
+  reactions: z
+    .array(z.object({ support: supportNameSchema, atFt: z.number(), lb: z.number() }))
+    .max(supportNames.length),
+  maxMoment: z.object({ lbFt: z.number(), atFt: z.number() }),
+  maxShear: z.object({ lb: z.number(), atFt: z.number() }),
+  designShear: z.object({ lb: z.number(), support: supportNameSchema, atD: z.boolean() }),
+  deflectionLive: deflectionAtSchema,
+  deflectionTotalElastic: deflectionAtSchema,
+  deflectionTotal: deflectionAtSchema,
+});
+export type CombinationDemands = z.infer<typeof combinationDemandsSchema>;
+
 /** Which size of which material a result is about (lib/calc sizeIdentity); b and d in in. */
 export const sizeIdentitySchema = z.object({
   materialId: z.string(),
@@ -260,12 +290,32 @@ export const memberCheckResultSchema = z.object({
     combination: z.string(),
     /** Reaction at each end by load type (unfactored), lb. */
     byType: z.record(loadTypeSchema, z.object({ leftLb: z.number(), rightLb: z.number() })),
+    /**
+     * Per support: the largest reaction of any combination and that combination, and the least (a negative
+     * least is uplift: the member must be held down there) with its combination, lb.
+     */
+    bySupport: z
+      .array(
+        z.object({
+          support: supportNameSchema,
+          atFt: z.number(),
+          largestLb: z.number(),
+          largestCombination: z.string(),
+          leastLb: z.number(),
+          leastCombination: z.string(),
+        }),
+      )
+      .max(supportNames.length)
+      .optional(),
   }),
   bearing: z.object({
     requiredLengthIn: z.number(),
     providedLengthIn: z.number(),
     jackStuds: z.number().int(),
     jackStudsNote: z.string(),
+    /** Jack studs the bearing length needs, and how many more the common-practice minimum adds. */
+    jackStudsForBearing: z.number().int().optional(),
+    jackStudsAddedByPractice: z.number().int().optional(),
     governedBy: z.enum(['member', 'plate']),
   }),
   mount: z.object({
@@ -292,6 +342,13 @@ export const memberCheckResultSchema = z.object({
   warnings: z.array(z.string()),
   sources: z.array(z.string()),
   diagram: z.object({ combination: z.string(), samples: z.array(diagramSampleSchema) }).optional(),
+  /** Demands of the governing combination (that of the governing check) and of every combination checked. */
+  demands: z
+    .object({
+      governing: combinationDemandsSchema,
+      byCombination: z.array(combinationDemandsSchema),
+    })
+    .optional(),
 });
 export type MemberCheckResult = z.infer<typeof memberCheckResultSchema>;
 
