@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { CALC_BOUNDS } from '@/shared/schemas/calc/bounds';
 import { loadStandardSchema } from '@/shared/schemas/jobs';
 import {
   inputFlagSchema,
@@ -45,6 +46,17 @@ const positive = (label: string) =>
     .finite()
     .positive({ message: `${label} must be above 0` });
 
+/** A length with a least value: below it the checks divide by next to nothing (ratios run to Infinity). */
+const atLeast = (label: string, min: number, unit: string) =>
+  z
+    .number({ message: `Enter ${label}` })
+    .finite()
+    .min(min, { message: `${label} must be at least ${min} ${unit}` });
+
+/** A list of at most `max` items, with the message naming the limit. */
+const listOf = <T extends z.ZodType>(item: T, max: number, what: string) =>
+  z.array(item).max(max, { message: `At most ${max} ${what}` });
+
 /** Snow inputs of the roof above the member; edition and pitch come from the member input. */
 export const memberSnowSchema = snowInputSchema.omit({ edition: true, roofPitchIn12: true });
 
@@ -67,13 +79,13 @@ export const memberCheckInputSchema = z.object({
   edition: loadStandardSchema,
   clearSpanFt: positive('the clear span').max(40, { message: 'Clear span at most 40 ft' }),
   /** Bearing length at each end, in; default 3 (two jack studs, common practice). */
-  bearingLeftIn: positive('the left bearing length').max(24).optional(),
-  bearingRightIn: positive('the right bearing length').max(24).optional(),
+  bearingLeftIn: atLeast('the left bearing length', 0.5, 'in').max(24).optional(),
+  bearingRightIn: atLeast('the right bearing length', 0.5, 'in').max(24).optional(),
   /** Roof slope, rise in 12; default 0. */
   roofPitchIn12: z.number().finite().min(0).max(24).optional(),
   /** Snow on the roof above; omitted = no snow on this member's roof sources. */
   snow: memberSnowSchema.optional(),
-  sources: z.array(loadSourceSchema).max(40, { message: 'At most 40 load sources' }),
+  sources: listOf(loadSourceSchema, CALC_BOUNDS.sources, 'load sources'),
   /** Add the member's own weight as dead load; default true. */
   selfWeight: z.boolean().optional(),
   materialId: z.string().min(1, { message: 'Choose a material' }),
@@ -85,7 +97,10 @@ export const memberCheckInputSchema = z.object({
   gradeUnknown: z.boolean().optional(),
   /** Old lumber by measured size: one ply's width and the depth, in (replaces the catalogue dimensions). */
   measuredPly: z
-    .object({ bIn: positive('the measured width').max(12), dIn: positive('the measured depth').max(24) })
+    .object({
+      bIn: atLeast('the measured width', 0.5, 'in').max(12),
+      dIn: atLeast('the measured depth', 1, 'in').max(24),
+    })
     .optional(),
   /** Wet service (moisture content above 19 % in service); default false. */
   wetService: z.boolean().optional(),
@@ -104,13 +119,13 @@ export const memberCheckInputSchema = z.object({
   /** Deflection limits by use; default 'floor' (L/360 live, L/240 total). */
   deflectionUse: deflectionUseSchema.optional(),
   /** Absolute cap on total deflection, in (e.g. 0.375 for a flush beam); default none. */
-  deflectionCapIn: positive('the deflection cap').max(4).optional(),
+  deflectionCapIn: atLeast('the deflection cap', 0.05, 'in').max(4).optional(),
   /** Part of the occupancy live load that is sustained (for creep), 0–1; default 0. */
   sustainedLiveFraction: z.number().finite().min(0).max(1).optional(),
   /** What the member bears on: jack studs on a wall plate, or a post; default 'jacks'. */
   supportKind: z.enum(supportKinds).optional(),
   /** Width of the support across the member (wall stud depth or post face), in; default 3.5 (2x4 wall). */
-  supportWidthIn: positive('the support width').max(12).optional(),
+  supportWidthIn: atLeast('the support width', 1.5, 'in').max(12).optional(),
   /** Material of the plate under the jack studs (its F_c⊥ usually governs); default Spruce-Pine-Fir No.1/No.2. */
   plateMaterialId: z.string().min(1).optional(),
   /** Dropped below the joists or flush with them; default 'dropped'. */
@@ -118,7 +133,7 @@ export const memberCheckInputSchema = z.object({
   /** Joist depth, in: the most a flush member may be. */
   joistDepthIn: positive('the joist depth').max(24).optional(),
   /** Joist spacing, in; default 16. */
-  joistSpacingIn: positive('the joist spacing').max(48).optional(),
+  joistSpacingIn: atLeast('the joist spacing', 4, 'in').max(48).optional(),
   /** Joists frame in from both sides (flush); default true. */
   joistsBothSides: z.boolean().optional(),
   /** Height from the floor to the underside of the joists, in (dropped: headroom = this − member depth). */
@@ -127,7 +142,12 @@ export const memberCheckInputSchema = z.object({
   minHeadroomIn: positive('the headroom').max(200).optional(),
   posts: memberPostsSchema.optional(),
   /** How each input was obtained, by field name ("clearSpanFt": "measured"). */
-  flags: z.record(z.string(), inputFlagSchema).optional(),
+  flags: z
+    .record(z.string().max(80), inputFlagSchema)
+    .refine((flags) => Object.keys(flags).length <= CALC_BOUNDS.flags, {
+      message: `At most ${CALC_BOUNDS.flags} flags`,
+    })
+    .optional(),
 });
 export type MemberCheckInput = z.infer<typeof memberCheckInputSchema>;
 /** The loading, support and use of a member without its material and size (shared with the shortlist). */
@@ -165,7 +185,7 @@ export const checkResultSchema = z.object({
   pass: z.boolean(),
   /** The load combination that governs this check. */
   combination: z.string(),
-  factors: z.array(factorUseSchema),
+  factors: listOf(factorUseSchema, CALC_BOUNDS.factors, 'factors'),
   formula: z.string(),
   note: z.string().optional(),
 });
@@ -256,7 +276,7 @@ export const memberCheckResultSchema = z.object({
     bearingLeftIn: z.number(),
     bearingRightIn: z.number(),
   }),
-  inputs: z.array(echoedInputSchema),
+  inputs: listOf(echoedInputSchema, CALC_BOUNDS.echoedInputs, 'echoed inputs'),
   /**
    * Roof snow from the member's snow inputs, psf of horizontal projection: flat roof p_f, sloped roof p_s,
    * low-slope minimum p_m, the design value used for roof sources (and which governs), with each factor.
@@ -274,14 +294,18 @@ export const memberCheckResultSchema = z.object({
       thermalCtGiven: z.boolean().optional(),
       /** True when the slippery-surface C_s curve was used (a cold roof, or a warm roof insulated enough). */
       slipperyCurveUsed: z.boolean().optional(),
-      factors: z.array(factorUseSchema),
-      notes: z.array(z.string()),
+      factors: listOf(factorUseSchema, CALC_BOUNDS.factors, 'factors'),
+      notes: listOf(z.string(), CALC_BOUNDS.messages, 'notes'),
       reference: z.string(),
     })
     .optional(),
-  takedown: z.array(takedownLineSchema),
-  combinations: z.array(z.object({ name: z.string(), CD: z.number(), skipped: z.boolean() })),
-  checks: z.array(checkResultSchema),
+  takedown: listOf(takedownLineSchema, CALC_BOUNDS.takedownLines, 'takedown lines'),
+  combinations: listOf(
+    z.object({ name: z.string(), CD: z.number(), skipped: z.boolean() }),
+    CALC_BOUNDS.combinations,
+    'combinations',
+  ),
+  checks: listOf(checkResultSchema, CALC_BOUNDS.checks, 'checks'),
   governing: z.object({ check: checkIdSchema, combination: z.string(), ratio: z.number() }),
   reactions: z.object({
     /** Largest reaction of any combination at each end, lb. */
@@ -323,7 +347,7 @@ export const memberCheckResultSchema = z.object({
     depthFits: z.boolean().nullable(),
     hangers: z.number().int().nullable(),
     headroomIn: z.number().nullable(),
-    requirements: z.array(z.string()),
+    requirements: listOf(z.string(), CALC_BOUNDS.messages, 'requirements'),
   }),
   posts: z
     .array(
@@ -339,14 +363,19 @@ export const memberCheckResultSchema = z.object({
       }),
     )
     .optional(),
-  warnings: z.array(z.string()),
-  sources: z.array(z.string()),
-  diagram: z.object({ combination: z.string(), samples: z.array(diagramSampleSchema) }).optional(),
+  warnings: listOf(z.string(), CALC_BOUNDS.messages, 'warnings'),
+  sources: listOf(z.string(), CALC_BOUNDS.messages, 'sources'),
+  diagram: z
+    .object({
+      combination: z.string(),
+      samples: listOf(diagramSampleSchema, CALC_BOUNDS.diagramSamples, 'samples'),
+    })
+    .optional(),
   /** Demands of the governing combination (that of the governing check) and of every combination checked. */
   demands: z
     .object({
       governing: combinationDemandsSchema,
-      byCombination: z.array(combinationDemandsSchema),
+      byCombination: listOf(combinationDemandsSchema, CALC_BOUNDS.combinations, 'combinations'),
     })
     .optional(),
 });
@@ -367,7 +396,7 @@ export const prescriptiveResultSchema = z.object({
   verdict: z.enum(['likely-covered', 'engineer-needed']),
   message: z.string(),
   /** Every reason the case sits outside what header tables cover (empty when likely covered). */
-  reasons: z.array(z.string()),
+  reasons: listOf(z.string(), CALC_BOUNDS.messages, 'reasons'),
   /** Tributary's own smallest sawn 2x header for the same loads (when likely covered). */
   computed: z
     .object({
@@ -378,6 +407,6 @@ export const prescriptiveResultSchema = z.object({
       governingCheck: z.string(),
     })
     .nullable(),
-  notes: z.array(z.string()),
+  notes: listOf(z.string(), CALC_BOUNDS.messages, 'notes'),
 });
 export type PrescriptiveResult = z.infer<typeof prescriptiveResultSchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { CALC_BOUNDS } from '@/shared/schemas/calc/bounds';
 import { loadStandardSchema } from '@/shared/schemas/jobs';
 import { checkIdSchema, deflectionUseSchema, supportKinds } from '@/shared/schemas/calc/member';
 
@@ -26,9 +27,17 @@ export const spanTableInputSchema = z.object({
   tributaryWidthsFt: z
     .array(z.number().finite().positive().max(60))
     .min(1, { message: 'Give at least one tributary width' })
-    .max(12, { message: 'At most 12 tributary widths' }),
-  materialIds: z.array(z.string().min(1)).min(1, { message: 'Choose at least one material' }).max(40),
-  plies: z.array(z.number().int().min(1).max(4)).min(1).optional(),
+    .max(CALC_BOUNDS.tributaryWidths, { message: `At most ${CALC_BOUNDS.tributaryWidths} tributary widths` }),
+  /** Materials to tabulate; a material named twice is tabulated once. */
+  materialIds: z
+    .array(z.string().min(1).max(80))
+    .min(1, { message: 'Choose at least one material' })
+    .max(CALC_BOUNDS.materialIds, { message: `At most ${CALC_BOUNDS.materialIds} materials` }),
+  plies: z
+    .array(z.number().int().min(1).max(4))
+    .min(1)
+    .max(CALC_BOUNDS.plies, { message: `At most ${CALC_BOUNDS.plies} ply counts` })
+    .optional(),
   selfWeight: z.boolean().optional(),
   repetitive: z.boolean().optional(),
   wetService: z.boolean().optional(),
@@ -36,7 +45,12 @@ export const spanTableInputSchema = z.object({
   incised: z.boolean().optional(),
   shearAtD: z.boolean().optional(),
   deflectionUse: deflectionUseSchema.optional(),
-  deflectionCapIn: z.number().finite().positive().max(4).optional(),
+  deflectionCapIn: z
+    .number()
+    .finite()
+    .min(0.05, { message: 'The deflection cap must be at least 0.05 in' })
+    .max(4)
+    .optional(),
   sustainedLiveFraction: z.number().finite().min(0).max(1).optional(),
   /** Bearing length at each end, in; default 3. */
   bearingIn: z.number().finite().positive().max(24).optional(),
@@ -62,15 +76,15 @@ export const spanTableRowSchema = z.object({
   materialLabel: z.string(),
   sizeId: z.string(),
   sizeLabel: z.string(),
-  cells: z.array(spanTableCellSchema),
+  cells: z.array(spanTableCellSchema).max(CALC_BOUNDS.tributaryWidths),
 });
 
 export const spanTableResultSchema = z.object({
   caution: z.string(),
-  tributaryWidthsFt: z.array(z.number()),
-  rows: z.array(spanTableRowSchema),
-  notes: z.array(z.string()),
-  warnings: z.array(z.string()),
-  sources: z.array(z.string()),
+  tributaryWidthsFt: z.array(z.number()).max(CALC_BOUNDS.tributaryWidths),
+  rows: z.array(spanTableRowSchema).max(CALC_BOUNDS.catalogueSizes),
+  notes: z.array(z.string()).max(CALC_BOUNDS.messages),
+  warnings: z.array(z.string()).max(CALC_BOUNDS.catalogueSizes),
+  sources: z.array(z.string()).max(CALC_BOUNDS.messages),
 });
 export type SpanTableResult = z.infer<typeof spanTableResultSchema>;
