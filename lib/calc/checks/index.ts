@@ -26,6 +26,7 @@ export {
 } from './section-factors';
 export { describeChecks } from './describe-checks';
 export { resolveMember, type ResolvedMember } from './resolve-member';
+export { unknownGradeMaterial } from './unknown-grade';
 export { DEFLECTION_PRESETS, type DeflectionPreset } from './deflection-presets';
 export { creepFactor } from './creep';
 export { endShearsAtD } from './end-shears';
