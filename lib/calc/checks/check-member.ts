@@ -190,7 +190,7 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
   const evaluation = evaluateSize(prepared, section, size.selfWeightPlf, support.spec);
   const checks = describeChecks(prepared, section, evaluation);
   const jacks = jackStuds(evaluation.bearing.requiredLengthIn, input.clearSpanFt);
-  const mount = mountRequirements(input, section.dIn, size.plies);
+  const mount = mountRequirements(input, section.dIn, size.plies, evaluation.bearing.requiredLengthIn);
   const warnings = [...resolved.warnings, ...prepared.warnings];
   if (material.generic) warnings.push("Generic values: confirm with the manufacturer's published values.");
   if (input.deflectionUse === 'roof-no-ceiling' && (input.roofPitchIn12 ?? 0) <= 3) {

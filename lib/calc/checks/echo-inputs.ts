@@ -106,5 +106,7 @@ export function echoInputs(
   echo.add('supportWidthIn', 'Support width', used.supportWidthIn, 'in');
   if (used.plateLabel) echo.add('plateMaterialId', 'Plate under the jacks', used.plateLabel);
   echo.add('mount', 'Mounting', input.mount ?? 'dropped');
+  if (input.mount === 'raised' && input.atticClearanceIn !== undefined)
+    echo.add('atticClearanceIn', 'Attic clearance above the ceiling line', input.atticClearanceIn, 'in');
   return echo.out;
 }

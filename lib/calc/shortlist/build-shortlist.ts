@@ -28,6 +28,8 @@ function fitLimits(input: ShortlistInput): FitLimits {
   let maxDepthIn = input.maxDepthIn ?? null;
   if (maxDepthIn === null && input.mount === 'flush' && input.joistDepthIn !== undefined)
     maxDepthIn = input.joistDepthIn;
+  if (maxDepthIn === null && input.mount === 'raised' && input.atticClearanceIn !== undefined)
+    maxDepthIn = input.atticClearanceIn;
   if (
     maxDepthIn === null &&
     (input.mount ?? 'dropped') === 'dropped' &&
@@ -70,7 +72,8 @@ function sorter(sortBy: ShortlistResult['sortBy']): (a: ShortlistEntry, b: Short
 
 /**
  * Checks every size of the chosen materials (plies 1–4 where the material offers them) for one member's
- * loads and keeps what fits: depth (joists for flush, headroom for dropped, or a given maximum), width in
+ * loads and keeps what fits: depth (joists for flush, attic clearance for raised, headroom for dropped, or a
+ * given maximum), width in
  * the wall, heaviest and longest piece carried in. Passing sizes are sorted shallowest, lightest or cheapest
  * first (price per ft × length to buy) with their utilization; sizes failing by at most 15 % are listed as
  * near misses with what fails. The loads are analysed once; each size is a superposition (evaluateSize).

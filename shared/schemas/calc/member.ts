@@ -37,7 +37,12 @@ export const deflectionUses = [
 ] as const;
 export const deflectionUseSchema = z.enum(deflectionUses);
 export type DeflectionUse = z.infer<typeof deflectionUseSchema>;
-export const mountKinds = ['dropped', 'flush'] as const;
+/**
+ * How the member sits: dropped below the joists, flush with them (joists hung in hangers), or raised into the
+ * attic above the ceiling with the ceiling joists hung from it by hangers or straps (a common fix in
+ * single-storey houses).
+ */
+export const mountKinds = ['dropped', 'flush', 'raised'] as const;
 export const supportKinds = ['jacks', 'post'] as const;
 
 const positive = (label: string) =>
@@ -128,10 +133,15 @@ export const memberCheckInputSchema = z.object({
   supportWidthIn: atLeast('the support width', 1.5, 'in').max(12).optional(),
   /** Material of the plate under the jack studs (its F_c⊥ usually governs); default Spruce-Pine-Fir No.1/No.2. */
   plateMaterialId: z.string().min(1).optional(),
-  /** Dropped below the joists or flush with them; default 'dropped'. */
+  /** Dropped below the joists, flush with them, or raised into the attic; default 'dropped'. */
   mount: z.enum(mountKinds).optional(),
-  /** Joist depth, in: the most a flush member may be. */
+  /** Joist depth, in: the most a flush member may be; for a raised member, the ceiling joists' depth. */
   joistDepthIn: positive('the joist depth').max(24).optional(),
+  /**
+   * Raised: clear height in the attic where the member goes, from the ceiling line (underside of the ceiling
+   * joists) up to the underside of the roof framing, in. The most a raised member may be.
+   */
+  atticClearanceIn: positive('the attic clearance').max(240).optional(),
   /** Joist spacing, in; default 16. */
   joistSpacingIn: atLeast('the joist spacing', 4, 'in').max(48).optional(),
   /** Joists frame in from both sides (flush); default true. */
@@ -345,8 +355,15 @@ export const memberCheckResultSchema = z.object({
   mount: z.object({
     kind: z.enum(mountKinds),
     depthFits: z.boolean().nullable(),
+    /** Flush: hangers, one per joist framing in; raised: a hanger or strap per ceiling joist hung from it. */
     hangers: z.number().int().nullable(),
     headroomIn: z.number().nullable(),
+    /** Raised: how far the member rises above the ceiling line (its bottom on the ceiling line), in. */
+    depthAboveCeilingIn: z.number().nullable().optional(),
+    /** Raised: how far it rises above the tops of the ceiling joists, in (null without their depth). */
+    depthAboveJoistsIn: z.number().nullable().optional(),
+    /** Raised: bearing length each end needs on its post or jack studs, in (from the bearing check). */
+    endBearingRequiredIn: z.number().optional(),
     requirements: listOf(z.string(), CALC_BOUNDS.messages, 'requirements'),
   }),
   posts: z

@@ -24,7 +24,10 @@ export const shortlistInputSchema = memberCheckInputSchema
       .min(1)
       .max(CALC_BOUNDS.plies, { message: `At most ${CALC_BOUNDS.plies} ply counts` })
       .optional(),
-    /** Deepest member that fits, in; default the joist depth (flush) or the headroom limit (dropped). */
+    /**
+     * Deepest member that fits, in; default the joist depth (flush), the attic clearance (raised) or the
+     * headroom limit (dropped).
+     */
     maxDepthIn: z.number().finite().positive().max(48).optional(),
     /** Widest member that fits the wall, in (a 2x4 wall 3.5, a 2x6 wall 5.5). */
     maxWidthIn: z.number().finite().positive().max(24).optional(),
