@@ -18,7 +18,7 @@ const LOOKUP_SPAN_FT = 21;
 
 /**
  * A span table for the user's own loads: for each size of the chosen materials and each tributary width,
- * the largest design span it carries under D (+ self-weight), L, Lr and S per foot of tributary width, by
+ * the largest span it carries (printed as the clear span unless the design span is asked for) under D (+ self-weight), L, Lr and S per foot of tributary width, by
  * the same rules as the member check (ASD combinations of the edition, C_D per combination, bending with
  * C_L = 1.0 for a braced top edge, shear at d, live and total deflection with creep, bearing on the member
  * and the plate), each limit solved in closed form (glulam bending by bisection to 1/16 in). Never a code
@@ -50,6 +50,11 @@ export function buildSpanTable(input: SpanTableInput): SpanTableResult {
     throw new CalcInputError('deadPsf', 'Give a load above 0 psf, or include the self-weight');
   }
   const bearingIn = input.bearingIn ?? DEFAULT_BEARING_IN;
+  const spanBasis = input.spanBasis ?? 'clear';
+  const spanHeading =
+    spanBasis === 'clear'
+      ? `Clear spans: between the faces of the supports (the design span less ${bearingIn} in of bearing, half at each end)`
+      : 'Design spans: support centre to support centre';
   const warnings: string[] = [];
   const rows: SpanTableResult['rows'] = [];
   const plies = [...new Set(input.plies ?? [1, 2, 3, 4])];
@@ -97,10 +102,13 @@ export function buildSpanTable(input: SpanTableInput): SpanTableResult {
           support,
         };
         const limits = uniformSpanLimits(materialId, size, section, spanCase);
+        const clearSpanFt = Math.max(0, limits.spanFt - bearingIn / IN_PER_FT);
         return {
           tributaryFt,
           spanFt: limits.spanFt,
-          spanText: formatSpanFtIn(limits.spanFt * IN_PER_FT),
+          spanText: formatSpanFtIn((spanBasis === 'clear' ? clearSpanFt : limits.spanFt) * IN_PER_FT),
+          clearSpanFt,
+          designSpanFt: limits.spanFt,
           governedBy: limits.governedBy,
           combination: limits.combination,
         };
@@ -110,10 +118,14 @@ export function buildSpanTable(input: SpanTableInput): SpanTableResult {
   }
   return {
     caution: CAUTION_TEXT,
+    spanBasis,
+    spanHeading,
     tributaryWidthsFt: input.tributaryWidthsFt,
     rows,
     notes: [
-      'Spans are design spans, support centre to support centre; the clear span is the design span less half the bearing at each end.',
+      spanBasis === 'clear'
+        ? 'Spans printed are clear spans, between the faces of the supports (what is measured on site); the design span, support centre to support centre, is the clear span plus half the bearing at each end.'
+        : 'Spans printed are design spans, support centre to support centre; the clear span is the design span less half the bearing at each end.',
       'Printed spans are rounded down to the inch.',
       `Top edge braced along its length (C_L = 1.0); bearing ${bearingIn} in at each end; deflection ${preset.label}: L/${preset.liveRatio} variable, L/${preset.totalRatio} total with creep.`,
       'Uniform loads only: point loads and partial loads need a member check.',

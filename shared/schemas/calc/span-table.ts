@@ -5,9 +5,16 @@ import { checkIdSchema, deflectionUseSchema, supportKinds } from '@/shared/schem
 
 /**
  * Input and result of a span table (DESIGN.md §5 "Span table"): for the user's area loads (psf) at each
- * tributary width (ft), the largest design span (ft) each size carries, solved from the checks, printed in
- * ft-in. Spans are design spans (support centre to support centre).
+ * tributary width (ft), the largest span (ft) each size carries, solved from the checks, printed in ft-in.
+ * The printed span is the clear span by default (between the faces of the supports: the design span less
+ * the bearing, half at each end — what is measured on site), or the design span (support centre to support
+ * centre) on request; the result says which. Every cell carries both.
  */
+
+/** Which span a span table prints: the clear span (default) or the design span. */
+export const spanBases = ['clear', 'design'] as const;
+export const spanBasisSchema = z.enum(spanBases);
+export type SpanBasis = z.infer<typeof spanBasisSchema>;
 
 const psf = (label: string) =>
   z
@@ -54,6 +61,8 @@ export const spanTableInputSchema = z.object({
   sustainedLiveFraction: z.number().finite().min(0).max(1).optional(),
   /** Bearing length at each end, in; default 3. */
   bearingIn: z.number().finite().positive().max(24).optional(),
+  /** Print clear spans (default) or design spans. */
+  spanBasis: spanBasisSchema.optional(),
   supportKind: z.enum(supportKinds).optional(),
   supportWidthIn: z.number().finite().positive().max(12).optional(),
   plateMaterialId: z.string().min(1).optional(),
@@ -63,10 +72,13 @@ export type SpanTableInputBody = z.input<typeof spanTableInputSchema>;
 
 export const spanTableCellSchema = z.object({
   tributaryFt: z.number(),
-  /** Largest design span, ft. */
+  /** Largest design span, ft (support centre to support centre). */
   spanFt: z.number(),
-  /** The span as printed: ft-in, rounded down to the inch. */
+  /** The span as printed, on the table's spanBasis: ft-in, rounded down to the inch. */
   spanText: z.string(),
+  /** The largest span as a clear span (design span less the bearing) and as a design span, ft. */
+  clearSpanFt: z.number().optional(),
+  designSpanFt: z.number().optional(),
   governedBy: checkIdSchema,
   combination: z.string(),
 });
@@ -81,6 +93,9 @@ export const spanTableRowSchema = z.object({
 
 export const spanTableResultSchema = z.object({
   caution: z.string(),
+  /** Which span spanText prints, and the heading that says so. */
+  spanBasis: spanBasisSchema.optional(),
+  spanHeading: z.string().optional(),
   tributaryWidthsFt: z.array(z.number()).max(CALC_BOUNDS.tributaryWidths),
   rows: z.array(spanTableRowSchema).max(CALC_BOUNDS.catalogueSizes),
   notes: z.array(z.string()).max(CALC_BOUNDS.messages),

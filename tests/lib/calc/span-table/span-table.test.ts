@@ -114,3 +114,38 @@ describe('bounded work (CALC_BOUNDS.spanTableWork)', () => {
     );
   });
 });
+
+describe('printed spans: clear by default, design on request', () => {
+  const body = {
+    edition: 'ASCE 7-16' as const,
+    deadPsf: 10,
+    livePsf: 40,
+    tributaryWidthsFt: [16 / 12],
+    materialIds: ['sawn-spruce-pine-fir-no1-no2'],
+    plies: [1],
+    repetitive: true,
+    selfWeight: false,
+    bearingIn: 4.5,
+  };
+
+  it('prints the clear span (design span less the bearing) and says so at the head', () => {
+    const table = buildSpanTable(spanTableInputSchema.parse(body));
+    expect(table.spanBasis).toBe('clear');
+    expect(table.spanHeading).toContain('Clear spans');
+    const cell = table.rows.find((r) => r.sizeId === '2x10')?.cells[0];
+    // clear span = design span − two halves of the 4.5 in bearing (DESIGN.md §5 span names).
+    expectApprox(cell?.clearSpanFt ?? NaN, (cell?.designSpanFt ?? NaN) - 4.5 / 12, { rel: 1e-12 });
+    expectApprox(cell?.designSpanFt ?? NaN, cell?.spanFt ?? NaN, { rel: 0 });
+    const clearIn = Math.floor((cell?.clearSpanFt ?? NaN) * 12 + 1e-9);
+    expect(cell?.spanText).toBe(`${Math.floor(clearIn / 12)}-${clearIn % 12}`);
+  });
+
+  it('prints the design span when asked and says so', () => {
+    const table = buildSpanTable(spanTableInputSchema.parse({ ...body, spanBasis: 'design' }));
+    expect(table.spanBasis).toBe('design');
+    expect(table.spanHeading).toContain('Design spans');
+    const cell = table.rows.find((r) => r.sizeId === '2x10')?.cells[0];
+    const designIn = Math.floor((cell?.designSpanFt ?? NaN) * 12 + 1e-9);
+    expect(cell?.spanText).toBe(`${Math.floor(designIn / 12)}-${designIn % 12}`);
+  });
+});
