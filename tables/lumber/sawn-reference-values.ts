@@ -8,7 +8,7 @@
  *
  * Provenance is recorded per row: 'references' = the value set is listed in the project's REFERENCES.md
  * (seen in reproductions of the Supplement); 'from memory' = recalled from the printed table, confirm against
- * the book before relying on it.
+ * the book before relying on it. A row's `note` says which of its values come from where when they differ.
  *
  * Nominal 4x members (4x4 to 4x16) are dimension lumber and use these rows with the 4-in-thick size factors.
  */
@@ -41,6 +41,8 @@ export interface SawnReferenceRow extends ReferenceDesignValuesPsi {
   /** Table 4B: the nominal width (in) the row applies to; Table 4A: null (all widths, with C_F). */
   nominalWidthIn: 4 | 6 | 8 | 10 | 12 | null;
   provenance: TableProvenance;
+  /** Which values of the row come from where, when the row mixes sources or awaits confirmation. */
+  note?: string;
 }
 
 export const sawnSpecies = [
@@ -58,6 +60,12 @@ export const sawnGradeLabels = {
   no3: 'No.3',
   stud: 'Stud',
 } as const satisfies Record<SawnGradeId, string>;
+
+const SPIB_2013 =
+  "SPIB's values of 1 June 2013, from a transcription of the Southern Pine Use Guide (REFERENCES.md): confirm in the printed 2018 Supplement";
+const SOUTHERN_PINE_2013_SELECT = `F_b, F_t, F_c: ${SPIB_2013}; F_v, F_c⊥, E, E_min from memory`;
+const SOUTHERN_PINE_2013_NO1 = `F_c: ${SPIB_2013}; F_b, F_t, F_v, F_c⊥, E, E_min from memory`;
+const SOUTHERN_PINE_2013_NO1_12 = `F_c, F_t: ${SPIB_2013}; F_b, F_v, F_c⊥, E, E_min from memory`;
 
 export const sawnReferenceValues = [
   // Douglas Fir-Larch, Table 4A. SS, No.1, No.2: REFERENCES.md.
@@ -250,74 +258,79 @@ export const sawnReferenceValues = [
     provenance: 'from memory',
   },
 
-  // Southern Pine, Table 4B (size-specific, values in effect since the 2013 revision).
-  // Select Structural: from memory.
+  // Southern Pine, Table 4B (size-specific). Select Structural and No.1 carry SPIB's values of 1 June 2013
+  // (the rows held before replaced values higher than those in force); each row's note says which values.
   {
     species: 'southern-pine',
     grade: 'select-structural',
     nominalWidthIn: 4,
-    FbPsi: 2850,
-    FtPsi: 1600,
-    FvPsi: 175,
-    FcPerpPsi: 565,
-    FcPsi: 2100,
-    EPsi: 1_800_000,
-    EminPsi: 660_000,
-    provenance: 'from memory',
-  },
-  {
-    species: 'southern-pine',
-    grade: 'select-structural',
-    nominalWidthIn: 6,
-    FbPsi: 2550,
-    FtPsi: 1400,
-    FvPsi: 175,
-    FcPerpPsi: 565,
-    FcPsi: 2000,
-    EPsi: 1_800_000,
-    EminPsi: 660_000,
-    provenance: 'from memory',
-  },
-  {
-    species: 'southern-pine',
-    grade: 'select-structural',
-    nominalWidthIn: 8,
-    FbPsi: 2300,
-    FtPsi: 1300,
+    FbPsi: 2350,
+    FtPsi: 1650,
     FvPsi: 175,
     FcPerpPsi: 565,
     FcPsi: 1900,
     EPsi: 1_800_000,
     EminPsi: 660_000,
-    provenance: 'from memory',
+    provenance: 'references',
+    note: SOUTHERN_PINE_2013_SELECT,
   },
   {
     species: 'southern-pine',
     grade: 'select-structural',
-    nominalWidthIn: 10,
-    FbPsi: 2050,
-    FtPsi: 1100,
-    FvPsi: 175,
-    FcPerpPsi: 565,
-    FcPsi: 1850,
-    EPsi: 1_800_000,
-    EminPsi: 660_000,
-    provenance: 'from memory',
-  },
-  {
-    species: 'southern-pine',
-    grade: 'select-structural',
-    nominalWidthIn: 12,
-    FbPsi: 1900,
-    FtPsi: 1050,
+    nominalWidthIn: 6,
+    FbPsi: 2100,
+    FtPsi: 1450,
     FvPsi: 175,
     FcPerpPsi: 565,
     FcPsi: 1800,
     EPsi: 1_800_000,
     EminPsi: 660_000,
-    provenance: 'from memory',
+    provenance: 'references',
+    note: SOUTHERN_PINE_2013_SELECT,
   },
-  // No.1: from memory.
+  {
+    species: 'southern-pine',
+    grade: 'select-structural',
+    nominalWidthIn: 8,
+    FbPsi: 1950,
+    FtPsi: 1350,
+    FvPsi: 175,
+    FcPerpPsi: 565,
+    FcPsi: 1700,
+    EPsi: 1_800_000,
+    EminPsi: 660_000,
+    provenance: 'references',
+    note: SOUTHERN_PINE_2013_SELECT,
+  },
+  {
+    species: 'southern-pine',
+    grade: 'select-structural',
+    nominalWidthIn: 10,
+    FbPsi: 1700,
+    FtPsi: 1150,
+    FvPsi: 175,
+    FcPerpPsi: 565,
+    FcPsi: 1650,
+    EPsi: 1_800_000,
+    EminPsi: 660_000,
+    provenance: 'references',
+    note: SOUTHERN_PINE_2013_SELECT,
+  },
+  {
+    species: 'southern-pine',
+    grade: 'select-structural',
+    nominalWidthIn: 12,
+    FbPsi: 1600,
+    FtPsi: 1100,
+    FvPsi: 175,
+    FcPerpPsi: 565,
+    FcPsi: 1650,
+    EPsi: 1_800_000,
+    EminPsi: 660_000,
+    provenance: 'references',
+    note: SOUTHERN_PINE_2013_SELECT,
+  },
+  // No.1: F_c and the 2x12 F_t from the 2013 values (REFERENCES.md); the rest from memory.
   {
     species: 'southern-pine',
     grade: 'no1',
@@ -326,10 +339,11 @@ export const sawnReferenceValues = [
     FtPsi: 1000,
     FvPsi: 175,
     FcPerpPsi: 565,
-    FcPsi: 1850,
+    FcPsi: 1650,
     EPsi: 1_600_000,
     EminPsi: 580_000,
-    provenance: 'from memory',
+    provenance: 'references',
+    note: SOUTHERN_PINE_2013_NO1,
   },
   {
     species: 'southern-pine',
@@ -339,10 +353,11 @@ export const sawnReferenceValues = [
     FtPsi: 875,
     FvPsi: 175,
     FcPerpPsi: 565,
-    FcPsi: 1750,
+    FcPsi: 1550,
     EPsi: 1_600_000,
     EminPsi: 580_000,
-    provenance: 'from memory',
+    provenance: 'references',
+    note: SOUTHERN_PINE_2013_NO1,
   },
   {
     species: 'southern-pine',
@@ -352,10 +367,11 @@ export const sawnReferenceValues = [
     FtPsi: 800,
     FvPsi: 175,
     FcPerpPsi: 565,
-    FcPsi: 1650,
+    FcPsi: 1500,
     EPsi: 1_600_000,
     EminPsi: 580_000,
-    provenance: 'from memory',
+    provenance: 'references',
+    note: SOUTHERN_PINE_2013_NO1,
   },
   {
     species: 'southern-pine',
@@ -365,23 +381,25 @@ export const sawnReferenceValues = [
     FtPsi: 700,
     FvPsi: 175,
     FcPerpPsi: 565,
-    FcPsi: 1600,
+    FcPsi: 1450,
     EPsi: 1_600_000,
     EminPsi: 580_000,
-    provenance: 'from memory',
+    provenance: 'references',
+    note: SOUTHERN_PINE_2013_NO1,
   },
   {
     species: 'southern-pine',
     grade: 'no1',
     nominalWidthIn: 12,
     FbPsi: 1000,
-    FtPsi: 675,
+    FtPsi: 650,
     FvPsi: 175,
     FcPerpPsi: 565,
-    FcPsi: 1550,
+    FcPsi: 1400,
     EPsi: 1_600_000,
     EminPsi: 580_000,
-    provenance: 'from memory',
+    provenance: 'references',
+    note: SOUTHERN_PINE_2013_NO1_12,
   },
   // No.2: F_b for 2x8/2x10/2x12, F_v, F_c⊥, E, E_min: REFERENCES.md; F_b 2x4/2x6, F_t and F_c: from memory.
   {
@@ -448,5 +466,98 @@ export const sawnReferenceValues = [
     EPsi: 1_400_000,
     EminPsi: 510_000,
     provenance: 'references',
+  },
+  // No.3 and Stud: from memory (values of the 2013 revision as recalled, the lower reading where unsure);
+  // confirm in the printed Supplement. Stud is graded to 6 in wide, as in Table 4A.
+  {
+    species: 'southern-pine',
+    grade: 'no3',
+    nominalWidthIn: 4,
+    FbPsi: 650,
+    FtPsi: 375,
+    FvPsi: 175,
+    FcPerpPsi: 565,
+    FcPsi: 850,
+    EPsi: 1_300_000,
+    EminPsi: 470_000,
+    provenance: 'from memory',
+  },
+  {
+    species: 'southern-pine',
+    grade: 'no3',
+    nominalWidthIn: 6,
+    FbPsi: 575,
+    FtPsi: 325,
+    FvPsi: 175,
+    FcPerpPsi: 565,
+    FcPsi: 825,
+    EPsi: 1_300_000,
+    EminPsi: 470_000,
+    provenance: 'from memory',
+  },
+  {
+    species: 'southern-pine',
+    grade: 'no3',
+    nominalWidthIn: 8,
+    FbPsi: 550,
+    FtPsi: 300,
+    FvPsi: 175,
+    FcPerpPsi: 565,
+    FcPsi: 800,
+    EPsi: 1_300_000,
+    EminPsi: 470_000,
+    provenance: 'from memory',
+  },
+  {
+    species: 'southern-pine',
+    grade: 'no3',
+    nominalWidthIn: 10,
+    FbPsi: 475,
+    FtPsi: 275,
+    FvPsi: 175,
+    FcPerpPsi: 565,
+    FcPsi: 775,
+    EPsi: 1_300_000,
+    EminPsi: 470_000,
+    provenance: 'from memory',
+  },
+  {
+    species: 'southern-pine',
+    grade: 'no3',
+    nominalWidthIn: 12,
+    FbPsi: 450,
+    FtPsi: 250,
+    FvPsi: 175,
+    FcPerpPsi: 565,
+    FcPsi: 775,
+    EPsi: 1_300_000,
+    EminPsi: 470_000,
+    provenance: 'from memory',
+  },
+  {
+    species: 'southern-pine',
+    grade: 'stud',
+    nominalWidthIn: 4,
+    FbPsi: 575,
+    FtPsi: 325,
+    FvPsi: 175,
+    FcPerpPsi: 565,
+    FcPsi: 850,
+    EPsi: 1_300_000,
+    EminPsi: 470_000,
+    provenance: 'from memory',
+  },
+  {
+    species: 'southern-pine',
+    grade: 'stud',
+    nominalWidthIn: 6,
+    FbPsi: 550,
+    FtPsi: 300,
+    FvPsi: 175,
+    FcPerpPsi: 565,
+    FcPsi: 825,
+    EPsi: 1_300_000,
+    EminPsi: 470_000,
+    provenance: 'from memory',
   },
 ] as const satisfies readonly SawnReferenceRow[];

@@ -2,10 +2,10 @@
  * Reference design values, visually graded timbers 5 in × 5 in and larger.
  *
  * Source: American Wood Council, NDS Supplement — Design Values for Wood Construction, 2018 edition,
- * Table 4D. Beams and Stringers: width more than 2 in greater than thickness (6x10, 6x12); Posts and
- * Timbers: width not more than 2 in greater than thickness (6x6, 6x8).
+ * Table 4D. Beams and Stringers: width more than 2 in greater than thickness (6x10 to 6x16, 8x12 to 8x16);
+ * Posts and Timbers: width not more than 2 in greater than thickness (6x6, 6x8, 8x8, 8x10).
  * Units: psi; normal load duration. Size factor for timbers: C_F = (12/d)^(1/9) only where d > 12 in
- * (Table 4D footnote), so C_F = 1.0 for the 6x6 to 6x12 sizes listed here.
+ * (Table 4D footnote): 1.0 to 6x12 and 8x12, below 1.0 for 6x14, 6x16, 8x14 and 8x16.
  *
  * Provenance: every row from memory — confirm against the printed Table 4D before relying on it. Only
  * Douglas Fir-Larch and Hem-Fir are tabulated here; other species' timbers are not offered.

@@ -1,10 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import { expectApprox } from '@/tests/helpers/approx';
 import { sawnReferenceRowSchema } from '@/shared/schemas/calc/materials';
-import { sawnReferenceValues, sawnSpecies } from '@/tables/lumber/sawn-reference-values';
+import {
+  sawnReferenceValues,
+  sawnSpecies,
+  type SawnReferenceRow,
+} from '@/tables/lumber/sawn-reference-values';
 
-function row(species: string, grade: string, nominalWidthIn: number | null = null) {
-  const found = sawnReferenceValues.find(
+function row(species: string, grade: string, nominalWidthIn: number | null = null): SawnReferenceRow {
+  const rows: readonly SawnReferenceRow[] = sawnReferenceValues;
+  const found = rows.find(
     (r) => r.species === species && r.grade === grade && r.nominalWidthIn === nominalWidthIn,
   );
   if (!found) throw new Error(`missing ${species} ${grade} ${nominalWidthIn}`);
@@ -54,6 +59,27 @@ describe('NDS Supplement 2018 Table 4A / 4B rows', () => {
     const r = row('southern-pine', 'no2', width);
     expect(r.FbPsi).toBe(fb);
     expect([r.FvPsi, r.FcPerpPsi, r.EPsi, r.EminPsi]).toEqual([175, 565, 1_400_000, 510_000]);
+  });
+
+  // NDS Supplement 2018 Table 4B, Southern Pine, SPIB's values in force since 1 June 2013 as listed in
+  // REFERENCES.md (seen in a transcription of the Southern Pine Use Guide; confirm in the printed Supplement).
+  // Widths 2x4 / 2x6 / 2x8 / 2x10 / 2x12.
+  const WIDTHS = [4, 6, 8, 10, 12] as const;
+  it.each([
+    ['F_b', 'FbPsi', [2350, 2100, 1950, 1700, 1600]],
+    ['F_t', 'FtPsi', [1650, 1450, 1350, 1150, 1100]],
+    ['F_c', 'FcPsi', [1900, 1800, 1700, 1650, 1650]],
+  ] as const)('Table 4B Southern Pine Select Structural %s (SPIB 2013 values)', (_name, key, values) => {
+    expect(WIDTHS.map((w) => row('southern-pine', 'select-structural', w)[key])).toEqual(values);
+    for (const w of WIDTHS) {
+      expect(row('southern-pine', 'select-structural', w).note).toContain('Southern Pine Use Guide');
+    }
+  });
+
+  it('Table 4B Southern Pine No.1 F_c and the 2x12 F_t (SPIB 2013 values)', () => {
+    expect(WIDTHS.map((w) => row('southern-pine', 'no1', w).FcPsi)).toEqual([1650, 1550, 1500, 1450, 1400]);
+    expect(row('southern-pine', 'no1', 12).FtPsi).toBe(650);
+    for (const w of WIDTHS) expect(row('southern-pine', 'no1', w).note).toContain('confirm');
   });
 
   it('E_min is close to the NDS Appendix D relation for visually graded lumber (COV_E 0.25)', () => {

@@ -4,12 +4,14 @@ import { getMaterial, getSize, sizeIdentity } from '@/lib/calc/materials';
 import { CAUTION_TEXT } from '@/lib/calc/prescriptive/caution';
 import { LOAD_TYPES, type LoadType } from '@/lib/calc/types';
 import type {
+  CombinationDemands,
   MemberCheckInput,
   MemberCheckOptions,
   MemberCheckResult,
   MemberLoadingInput,
 } from '@/shared/schemas/calc/member';
 import { jackStuds } from './bearing-jacks';
+import { combinationDemands } from './combination-demands';
 import { DEFLECTION_PRESETS } from './deflection-presets';
 import { describeChecks } from './describe-checks';
 import { echoInputs } from './echo-inputs';
@@ -131,6 +133,30 @@ function postsFor(prepared: PreparedMember, evaluation: SizeEvaluation): MemberC
   });
 }
 
+/** Per support, the largest and least reaction of any combination with the combination that gives each. */
+function reactionsBySupport(
+  byCombination: readonly CombinationDemands[],
+): NonNullable<MemberCheckResult['reactions']['bySupport']> {
+  const first = byCombination[0];
+  return first.reactions.map((r, i) => {
+    let largest = { lb: r.lb, combination: first.combination };
+    let least = largest;
+    for (const d of byCombination) {
+      const lb = d.reactions[i].lb;
+      if (lb > largest.lb) largest = { lb, combination: d.combination };
+      if (lb < least.lb) least = { lb, combination: d.combination };
+    }
+    return {
+      support: r.support,
+      atFt: r.atFt,
+      largestLb: largest.lb,
+      largestCombination: largest.combination,
+      leastLb: least.lb,
+      leastCombination: least.combination,
+    };
+  });
+}
+
 /**
  * Preliminary check of a header or beam (NDS ASD): loads to per-foot loads by type, the job edition's ASD
  * combinations (combinations naming a load type that carries nothing are skipped, another always governs
@@ -145,6 +171,11 @@ function postsFor(prepared: PreparedMember, evaluation: SizeEvaluation): MemberC
  *
  * @param input parsed memberCheckInputSchema (ft, in, psf, plf, lb)
  * @param options diagrams: sample V, M, y of the governing combination
+ * The result also carries the demands of every combination and of the governing one (reactions, M_max,
+ * V_max and the design shear, deflections with positions; see combinationDemands), the largest and least
+ * reaction at each support with its combination, and the jack studs bearing needs beside what common
+ * practice adds.
+ *
  * @returns the result (stresses psi, deflections and bearing lengths in, loads lb)
  * @throws CalcInputError naming the input field for anything the engine cannot check
  * @example checkMember(memberCheckInputSchema.parse({ kind: 'header', edition: 'ASCE 7-22', clearSpanFt: 6, sources: [...], materialId: 'sawn-douglas-fir-larch-no2', sizeId: '2-ply-2x10' })).governing;
@@ -159,7 +190,7 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
   const evaluation = evaluateSize(prepared, section, size.selfWeightPlf, support.spec);
   const checks = describeChecks(prepared, section, evaluation);
   const jacks = jackStuds(evaluation.bearing.requiredLengthIn, input.clearSpanFt);
-  const mount = mountRequirements(input, section.dIn, size.plies);
+  const mount = mountRequirements(input, section.dIn, size.plies, evaluation.bearing.requiredLengthIn);
   const warnings = [...resolved.warnings, ...prepared.warnings];
   if (material.generic) warnings.push("Generic values: confirm with the manufacturer's published values.");
   if (input.deflectionUse === 'roof-no-ceiling' && (input.roofPitchIn12 ?? 0) <= 3) {
@@ -189,6 +220,14 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
     byType[t] = { leftLb: leftLb + sw, rightLb: rightLb + sw };
   }
   const governingCheck = checks.find((c) => c.id === evaluation.governing.id) ?? checks[0];
+  const byCombination = combinationDemands(
+    prepared,
+    evaluation.selfWeightPlf,
+    evaluation.eiLbIn2,
+    section.dIn,
+  );
+  const governingDemands =
+    byCombination.find((d) => d.combination === governingCheck.combination) ?? byCombination[0];
   const posts = postsFor(prepared, evaluation);
   if (posts?.some((p) => !p.pass)) {
     warnings.push('A post under the member fails its check: choose a larger post or brace it.');
@@ -208,6 +247,9 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
       sizeLabel: size.label,
       plateLabel: support.plateLabel,
       supportWidthIn: support.spec.widthIn,
+      snowThermal: prepared.snow
+        ? { condition: prepared.snow.thermalCondition, ct: prepared.snow.thermalCt }
+        : undefined,
     }),
     ...(prepared.snow && {
       snow: {
@@ -216,6 +258,10 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
         pmPsf: prepared.snow.pmPsf,
         designPsf: prepared.snow.designPsf,
         governing: prepared.snow.governing,
+        thermalCondition: prepared.snow.thermalCondition,
+        thermalCt: prepared.snow.thermalCt,
+        thermalCtGiven: prepared.snow.thermalCtGiven,
+        slipperyCurveUsed: prepared.snow.slipperyCurveUsed,
         factors: prepared.snow.factors,
         notes: prepared.snow.notes,
         reference: prepared.snow.reference,
@@ -238,18 +284,22 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
       rightLb: evaluation.bearing.rightLb,
       combination: prepared.combinations[evaluation.bearing.combinationIndex].combination.name,
       byType,
+      bySupport: reactionsBySupport(byCombination),
     },
     bearing: {
       requiredLengthIn: evaluation.bearing.requiredLengthIn,
       providedLengthIn: Math.min(prepared.spans.bearingLeftIn, prepared.spans.bearingRightIn),
       jackStuds: jacks.count,
       jackStudsNote: jacks.note,
+      jackStudsForBearing: jacks.forBearing,
+      jackStudsAddedByPractice: jacks.addedByPractice,
       governedBy: evaluation.bearing.governedBy,
     },
     mount,
     posts,
     warnings,
     sources: baseSources(prepared, material.source),
+    demands: { governing: governingDemands, byCombination },
   };
   if (options.diagrams) {
     const index = prepared.combinations.findIndex((c) => c.combination.name === governingCheck.combination);

@@ -25,12 +25,13 @@ class EchoList {
 
   addSnow(key: keyof SnowInputs, label: string, value: number | string | boolean, unit?: string): void {
     const flags = this.input.flags;
+    const absent = this.input.snow?.[key] === undefined;
     this.out.push({
       field: `snow.${key}`,
       label,
       value,
       unit,
-      flag: flags?.[`snow.${key}`] ?? flags?.snow ?? 'assumed',
+      flag: absent ? 'default' : (flags?.[`snow.${key}`] ?? flags?.snow ?? 'assumed'),
     });
   }
 }
@@ -38,7 +39,8 @@ class EchoList {
 /**
  * The member's inputs as used, each with its flag: a field the user left out is `default`; a field given
  * takes the flag in `input.flags`, else `assumed`. Snow inputs (ground snow and its factors) are echoed as
- * `snow.<name>` with the flag given for `snow.<name>`, else for `snow`, else `assumed`.
+ * `snow.<name>` with the flag given for `snow.<name>`, else for `snow`, else `assumed` (`default` for an
+ * optional snow input left out, such as the thermal condition; C_t is echoed as used).
  *
  * @param input member input; spans resolved spans (ft, in); used the values actually used by field
  * @returns echoed inputs with labels and units
@@ -48,7 +50,14 @@ class EchoList {
 export function echoInputs(
   input: MemberCheckInput,
   spans: MemberSpans,
-  used: { materialLabel: string; sizeLabel: string; plateLabel: string | null; supportWidthIn: number },
+  used: {
+    materialLabel: string;
+    sizeLabel: string;
+    plateLabel: string | null;
+    supportWidthIn: number;
+    /** The roof's thermal condition and C_t the snow used (when the member has snow). */
+    snowThermal?: { condition: string; ct: number };
+  },
 ): EchoedInput[] {
   const echo = new EchoList(input);
   echo.add('kind', 'Member', input.kind);
@@ -65,7 +74,12 @@ export function echoInputs(
     echo.addSnow('groundSnowPsf', 'Ground snow p_g', snow.groundSnowPsf, 'psf');
     echo.addSnow('riskCategory', 'Risk category', snow.riskCategory);
     echo.addSnow('exposureCe', 'Exposure factor C_e', snow.exposureCe);
-    echo.addSnow('thermalCt', 'Thermal factor C_t', snow.thermalCt);
+    if (used.snowThermal) {
+      echo.addSnow('thermalCondition', 'Roof thermal condition', used.snowThermal.condition);
+      echo.addSnow('thermalCt', 'Thermal factor C_t', used.snowThermal.ct);
+    }
+    if (snow.roofInsulationR !== undefined)
+      echo.addSnow('roofInsulationR', 'Roof insulation R', snow.roofInsulationR, 'ft²·h·°F/Btu');
     if (snow.importanceIs !== undefined)
       echo.addSnow('importanceIs', 'Snow importance factor I_s', snow.importanceIs);
     echo.addSnow('slipperyUnobstructed', 'Unobstructed slippery roof', snow.slipperyUnobstructed);
@@ -92,5 +106,7 @@ export function echoInputs(
   echo.add('supportWidthIn', 'Support width', used.supportWidthIn, 'in');
   if (used.plateLabel) echo.add('plateMaterialId', 'Plate under the jacks', used.plateLabel);
   echo.add('mount', 'Mounting', input.mount ?? 'dropped');
+  if (input.mount === 'raised' && input.atticClearanceIn !== undefined)
+    echo.add('atticClearanceIn', 'Attic clearance above the ceiling line', input.atticClearanceIn, 'in');
   return echo.out;
 }

@@ -245,7 +245,15 @@ export function evaluateSize(
   bearing.combinationIndex = reactionIndex;
   const checks: CheckNumbers[] = [bending, shear, live, total, bearing];
   let governing = checks[0];
-  for (const check of checks) if (check.ratio > governing.ratio) governing = check;
+  for (const check of checks) {
+    if (!Number.isFinite(check.ratio)) {
+      throw new CalcInputError(
+        'sources',
+        'These loads give numbers past what the checks can compare: enter loads within the stated limits',
+      );
+    }
+    if (check.ratio > governing.ratio) governing = check;
+  }
   return {
     selfWeightPlf: s,
     eiLbIn2,

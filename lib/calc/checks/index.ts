@@ -26,10 +26,12 @@ export {
 } from './section-factors';
 export { describeChecks } from './describe-checks';
 export { resolveMember, type ResolvedMember } from './resolve-member';
+export { unknownGradeMaterial } from './unknown-grade';
 export { DEFLECTION_PRESETS, type DeflectionPreset } from './deflection-presets';
 export { creepFactor } from './creep';
 export { endShearsAtD } from './end-shears';
-export { jackStuds, JACK_STUD_IN, TWO_JACKS_OVER_FT } from './bearing-jacks';
+export { jackStuds, JACK_STUD_IN, TWO_JACKS_OVER_FT, type JackStuds } from './bearing-jacks';
+export { combinationDemands, supportNames } from './combination-demands';
 export {
   mountRequirements,
   DEFAULT_JOIST_SPACING_IN,

@@ -1,13 +1,7 @@
-import {
-  getMaterial,
-  getSize,
-  listSizes,
-  weakestGrade,
-  type Material,
-  type MemberSize,
-} from '@/lib/calc/materials';
+import { getMaterial, getSize, listSizes, type Material, type MemberSize } from '@/lib/calc/materials';
 import { CalcInputError } from '@/lib/calc/types';
 import type { MemberCheckInput } from '@/shared/schemas/calc/member';
+import { unknownGradeMaterial } from './unknown-grade';
 
 /** The material and size a member check uses, after unknown grade, ply count and measured size. */
 export interface ResolvedMember {
@@ -17,8 +11,8 @@ export interface ResolvedMember {
 }
 
 /**
- * Resolves the member's material and size: an unknown grade becomes the weakest listed grade of the species
- * (with a warning), `plies` picks the same ply size with that many plies, and a measured ply (old lumber)
+ * Resolves the member's material and size: an unknown grade becomes the weakest grade of the species offered
+ * in that size (unknownGradeMaterial, with a warning), `plies` picks the same ply size with that many plies, and a measured ply (old lumber)
  * replaces the catalogue dimensions with section properties of the measured rectangle.
  *
  * @param input member input (materialId, sizeId, plies, gradeUnknown, measuredPly in in)
@@ -36,9 +30,9 @@ export function resolveMember(
     if (material.family !== 'sawn') {
       throw new CalcInputError('gradeUnknown', 'An unknown grade can only be assumed for sawn lumber');
     }
-    material = weakestGrade(material.species);
+    material = unknownGradeMaterial(material.id, input.sizeId);
     warnings.push(
-      `Grade unknown: checked as ${material.label}, the weakest listed grade of the species. A readable grade stamp may allow a larger value.`,
+      `Grade unknown: checked as ${material.label}, the weakest grade of the species offered in this size. A readable grade stamp may allow a larger value.`,
     );
   }
   let size = getSize(material.id, input.sizeId);

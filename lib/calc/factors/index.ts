@@ -8,7 +8,7 @@ export {
   loadDurationFactor,
 } from './load-duration';
 export { sawnSizeFactors, type SawnSizeFactors } from './size-factor';
-export { glulamVolumeFactor } from './volume-factor';
+export { glulamVolumeFactor, GLULAM_VOLUME_REFERENCE } from './volume-factor';
 export { lvlDepthFactor } from './lvl-depth-factor';
 export { bendingSizeFactor } from './bending-size-factor';
 export {

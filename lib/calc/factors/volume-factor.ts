@@ -1,11 +1,19 @@
 import type { GlulamSpeciesGroup } from '@/tables/glulam/stress-classes';
 
-const REFERENCE_LENGTH_FT = 21;
-const REFERENCE_DEPTH_IN = 12;
-const REFERENCE_WIDTH_IN = 5.125;
-/** Widths over 10-3/4 in (multiple-piece laminations) use 10.75 in (NDS 2018 §5.3.6). */
-const MAX_WIDTH_IN = 10.75;
-const EXPONENT_DENOMINATOR: Record<GlulamSpeciesGroup, number> = { western: 10, 'southern-pine': 20 };
+/**
+ * Constants of the glulam volume factor: reference length 21 ft, depth 12 in, width 5-1/8 in; widths over
+ * 10-3/4 in (multiple-piece laminations) use 10.75 in; exponent 1/x with x = 10 western, 20 Southern Pine.
+ * Reference: NDS 2018 §5.3.6, equation 5.3-1.
+ */
+export const GLULAM_VOLUME_REFERENCE = Object.freeze({
+  lengthFt: 21,
+  depthIn: 12,
+  widthIn: 5.125,
+  maxWidthIn: 10.75,
+  exponent: Object.freeze({ western: 1 / 10, 'southern-pine': 1 / 20 }) as Readonly<
+    Record<GlulamSpeciesGroup, number>
+  >,
+});
 
 /**
  * Glulam volume factor C_V = (21/L)^(1/x) (12/d)^(1/x) (5.125/b)^(1/x) ≤ 1.0, x = 10 for western species
@@ -24,9 +32,9 @@ export function glulamVolumeFactor(input: {
   bIn: number;
   speciesGroup: GlulamSpeciesGroup;
 }): number {
-  const exponent = 1 / EXPONENT_DENOMINATOR[input.speciesGroup];
-  const bIn = Math.min(input.bIn, MAX_WIDTH_IN);
-  const product =
-    (REFERENCE_LENGTH_FT / input.spanFt) * (REFERENCE_DEPTH_IN / input.dIn) * (REFERENCE_WIDTH_IN / bIn);
+  const ref = GLULAM_VOLUME_REFERENCE;
+  const exponent = ref.exponent[input.speciesGroup];
+  const bIn = Math.min(input.bIn, ref.maxWidthIn);
+  const product = (ref.lengthFt / input.spanFt) * (ref.depthIn / input.dIn) * (ref.widthIn / bIn);
   return Math.min(1, product ** exponent);
 }

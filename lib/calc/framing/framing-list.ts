@@ -40,7 +40,9 @@ function round16(inches: number): number {
  * - jack = RO top (sill height + RO height) − bottom plates (the jack stands on the bottom plate);
  * - king = wall plate height − all plates;
  * - cripples above = from the top of the header to the underside of the top plates, one at each layout
- *   position over the header; below the sill (windows) from the bottom plate to the rough sill.
+ *   position over the header, flat headers included (nailing for the wall finish; the code does not require
+ *   them over a flat 2x4, IRC 2021 R602.7.4, and the note says so); below the sill (windows) from the bottom
+ *   plate to the rough sill.
  *
  * @param input parsed framingInputSchema (all dimensions in inches)
  * @returns lines with qty, lengthIn (in), stock (label, length in, count), note; header length (in); warnings; notes
@@ -123,16 +125,20 @@ export function buildFramingList(input: FramingInput): FramingList {
   );
 
   const gapAboveIn = underTopPlatesIn - headerTopIn;
-  if (header.flat) {
-    if (gapAboveIn > 0)
-      notes.push('Flat 2x4 header: no cripples or blocking are required above it (IRC 2021 R602.7.4).');
-  } else if (gapAboveIn >= SMALLEST_CRIPPLE_IN) {
+  if (header.flat && gapAboveIn > 0) {
+    notes.push(
+      'Flat 2x4 header: the code requires no cripples or blocking above it (IRC 2021 R602.7.4); they are listed at layout anyway as nailing for the wall finish (common practice).',
+    );
+  }
+  if (gapAboveIn >= SMALLEST_CRIPPLE_IN) {
     add(
       `Cripples above header ${stud}`,
       layoutCount(headerLengthIn, spacing),
       gapAboveIn,
       studStock,
-      `at the ${spacing} in stud layout over the header`,
+      header.flat
+        ? `at the ${spacing} in stud layout over the flat header: nailing for the wall finish, not required by code (common practice)`
+        : `at the ${spacing} in stud layout over the header`,
     );
   } else if (gapAboveIn > 1e-9) {
     warnings.push(

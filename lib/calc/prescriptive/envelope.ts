@@ -58,6 +58,10 @@ export function envelopeReasons(input: PrescriptiveInput): string[] {
   }
   if (member.mount === 'flush')
     reasons.push('it is flush with the joists (hangers), not a header in the wall');
+  if (member.mount === 'raised')
+    reasons.push(
+      'it is raised into the attic with the ceiling joists hung from it, not a header in the wall',
+    );
   if (member.wetService) reasons.push('it is in wet service');
   if ((member.temperatureF ?? 70) > 100) reasons.push('it is in sustained heat over 100 °F');
   return reasons;

@@ -6,6 +6,7 @@ import { serviceConditions, supportSpec } from '@/lib/calc/checks/check-member';
 import { getMaterial, listSizes, sizeIdentity, type Material, type MemberSize } from '@/lib/calc/materials';
 import { CAUTION_TEXT } from '@/lib/calc/prescriptive/caution';
 import { CalcInputError } from '@/lib/calc/types';
+import { CALC_BOUNDS } from '@/shared/schemas/calc/bounds';
 import type { CheckId } from '@/shared/schemas/calc/member';
 import type { ShortlistEntry, ShortlistInput, ShortlistResult } from '@/shared/schemas/calc/shortlist';
 import { pieceWeightLb, sizeFitReason, type FitLimits } from './size-fits';
@@ -27,6 +28,8 @@ function fitLimits(input: ShortlistInput): FitLimits {
   let maxDepthIn = input.maxDepthIn ?? null;
   if (maxDepthIn === null && input.mount === 'flush' && input.joistDepthIn !== undefined)
     maxDepthIn = input.joistDepthIn;
+  if (maxDepthIn === null && input.mount === 'raised' && input.atticClearanceIn !== undefined)
+    maxDepthIn = input.atticClearanceIn;
   if (
     maxDepthIn === null &&
     (input.mount ?? 'dropped') === 'dropped' &&
@@ -70,14 +73,18 @@ function sorter(sortBy: ShortlistResult['sortBy']): (a: ShortlistEntry, b: Short
 
 /**
  * Checks every size of the chosen materials (plies 1–4 where the material offers them) for one member's
- * loads and keeps what fits: depth (joists for flush, headroom for dropped, or a given maximum), width in
- * the wall, heaviest and longest piece carried in. Passing sizes are sorted shallowest, lightest, fewest plies
- * (then shallowest) or cheapest first (price per ft × length to buy) with their utilization; sizes failing by at most 15 % are listed as
+ * loads and keeps what fits: depth (joists for flush, attic clearance for raised, headroom for dropped, or a
+ * given maximum), width in the wall, heaviest and longest piece carried in. Passing sizes are sorted
+ * shallowest, lightest, fewest plies (then shallowest) or cheapest first (price per ft × length to buy) with
+ * their utilization; sizes failing by at most 15 % are listed as
  * near misses with what fails. The loads are analysed once; each size is a superposition (evaluateSize).
+ * A material or ply count named twice is checked once; the work (sizes × combinations) is capped at
+ * CALC_BOUNDS.shortlistWork.
  *
  * @param input parsed shortlistInputSchema (ft, in, psf, plf, lb; prices per ft)
  * @returns passing sizes, near misses, counts, filters and warnings
- * @throws CalcInputError for unknown materials or invalid loads
+ * @throws CalcInputError for unknown materials, invalid loads, or work past the stated ceiling (field
+ *   materialIds)
  * @example buildShortlist(shortlistInputSchema.parse({ ...loads, materialIds: ['lvl-2.0e'], sortBy: 'lightest' })).passing[0];
  * Reference: NDS 2018 §§3.3–3.5, 3.10 (through evaluateSize); DESIGN.md §5 "Shortlist".
  */
@@ -87,7 +94,18 @@ export function buildShortlist(input: ShortlistInput): ShortlistResult {
   const support = supportSpec(input).spec;
   const limits = fitLimits(input);
   const { designSpanFt, lengthToBuyFt, clearSpanFt } = prepared.spans;
-  const plies = input.plies ?? ALL_PLIES;
+  const plies = [...new Set(input.plies ?? ALL_PLIES)];
+  const materialIds = [...new Set(input.materialIds)];
+  let sizeCount = 0;
+  for (const materialId of materialIds) sizeCount += listSizes(materialId, { plies }).length;
+  const combinationCount = prepared.combinations.filter((c) => !c.skipped).length;
+  const work = sizeCount * combinationCount;
+  if (work > CALC_BOUNDS.shortlistWork) {
+    throw new CalcInputError(
+      'materialIds',
+      `This shortlist asks for ${work.toLocaleString('en-US')} checks (${sizeCount} sizes × ${combinationCount} load combinations); at most ${CALC_BOUNDS.shortlistWork.toLocaleString('en-US')} per request: choose fewer materials or ply counts`,
+    );
+  }
   const sortBy = input.sortBy ?? 'shallowest';
   const comboName = (i: number) => prepared.combinations[i].combination.name;
   const warnings = [...prepared.warnings];
@@ -112,7 +130,7 @@ export function buildShortlist(input: ShortlistInput): ShortlistResult {
     });
   };
 
-  for (const materialId of input.materialIds) {
+  for (const materialId of materialIds) {
     const material = getMaterial(materialId);
     if (material.generic)
       warnings.push(`${material.label}: generic values, confirm with the manufacturer's published values.`);

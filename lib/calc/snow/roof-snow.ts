@@ -2,8 +2,10 @@ import type { FactorUse } from '@/lib/calc/types';
 import { roofAngleDeg } from '@/lib/calc/loads/roof-slope';
 import { flatRoofSnowPsf } from '@/lib/calc/snow/flat-roof';
 import { LOW_SLOPE_LIMIT_DEG, minimumSnowPsf } from '@/lib/calc/snow/minimum';
+import { slipperyCurve } from '@/lib/calc/snow/slippery-curve';
 import { roofSlopeFactor } from '@/lib/calc/snow/slope-factor';
-import type { SnowInput } from '@/shared/schemas/calc/loads';
+import { thermalFactor } from '@/lib/calc/snow/thermal-factor';
+import type { RoofThermalCondition, SnowInput } from '@/shared/schemas/calc/loads';
 
 /** Snow importance factor I_s by risk category (ASCE 7-16 Table 1.5-2: I 0.8, II 1.0, III 1.1, IV 1.2). */
 const IMPORTANCE_BY_RISK: Record<SnowInput['riskCategory'], number> = { I: 0.8, II: 1.0, III: 1.1, IV: 1.2 };
@@ -28,6 +30,13 @@ export interface RoofSnow {
   /** The design roof snow, the larger of p_s and p_m, psf: the roofSnowPsf of buildMemberLoads. */
   designPsf: number;
   slopeDeg: number;
+  /** The roof's thermal condition used (given or the default) and whether C_t was given outright. */
+  thermalCondition: RoofThermalCondition;
+  thermalCtGiven: boolean;
+  /** C_t used, dimensionless. */
+  thermalCt: number;
+  /** True when the slippery-surface C_s curve was used. */
+  slipperyCurveUsed: boolean;
   factors: FactorUse[];
   warnings: string[];
   notes: string[];
@@ -40,15 +49,16 @@ export interface RoofSnow {
  * warnings for unbalanced snow on ridge lines and drift where the roof steps down (neither is included).
  * Under ASCE 7-22 the result is strength-level: the ASD combinations apply 0.7S to it.
  *
- * Defaults (editable): C_e 1.0 (partially exposed), C_t 1.0 (heated building, ASCE 7 Table 7.3-2 "all
- * structures except as indicated", from memory), I_s from the risk category (II → 1.0), risk category II
- * (dwellings).
+ * Defaults (editable): C_e 1.0 (partially exposed); C_t from the roof's thermal condition, by default a
+ * ventilated attic over an insulated ceiling (ASCE 7-16 1.1, ASCE 7-22 1.2; see thermalFactor), or as given;
+ * I_s from the risk category (II → 1.0), risk category II (dwellings). The C_s curve follows C_t; the
+ * slippery-surface curve needs a cold roof, or a warm roof insulated as §7.4.1 asks (see slipperyCurve).
  *
  * @param input parsed snowInputSchema: ground snow psf, roof pitch in 12, factors
  * @returns loads in psf on horizontal projection, factors, warnings, notes, reference
  * @example
  * roofSnowLoad(snowInputSchema.parse({ edition: 'ASCE 7-16', groundSnowPsf: 30, roofPitchIn12: 6 })).designPsf
- * // 21 (p_f = 0.7 × 30; C_s = 1.0 at 26.6°; p_m does not apply at 15° or steeper)
+ * // 23.1 (p_f = 0.7 × 1.1 × 30, vented attic over an insulated ceiling; C_s = 1.0 at 26.6°; no p_m at 15° or steeper)
  * Reference: ASCE 7-16 §§7.3–7.4, 7.6, 7.7; ASCE 7-22 §§7.3–7.4, 7.6, 7.7.
  */
 export function roofSnowLoad(input: SnowInput): RoofSnow {
@@ -56,15 +66,22 @@ export function roofSnowLoad(input: SnowInput): RoofSnow {
   const slopeDeg = roofAngleDeg(input.roofPitchIn12);
   const importanceIs = input.importanceIs ?? IMPORTANCE_BY_RISK[input.riskCategory];
   const pg = input.groundSnowPsf;
-  const pfPsf = flatRoofSnowPsf(edition, pg, input.exposureCe, input.thermalCt, importanceIs);
-  const slopeCs = roofSlopeFactor(slopeDeg, input.thermalCt, input.slipperyUnobstructed);
+  const thermal = thermalFactor(edition, input.thermalCondition, input.thermalCt);
+  const slippery = slipperyCurve({
+    slippery: input.slipperyUnobstructed,
+    ct: thermal.ct,
+    ventilated: thermal.ventilated,
+    insulationR: input.roofInsulationR,
+  });
+  const pfPsf = flatRoofSnowPsf(edition, pg, input.exposureCe, thermal.ct, importanceIs);
+  const slopeCs = roofSlopeFactor(slopeDeg, thermal.ct, slippery.used);
   const psPsf = slopeCs * pfPsf;
   const pmPsf = minimumSnowPsf(edition, pg, slopeDeg, importanceIs, input.riskCategory);
   const governing = pmPsf > psPsf ? 'minimum' : 'sloped';
 
   const factors: FactorUse[] = [
     { symbol: 'C_e', value: input.exposureCe, note: 'exposure factor, ASCE 7 Table 7.3-1' },
-    { symbol: 'C_t', value: input.thermalCt, note: 'thermal factor, ASCE 7 Table 7.3-2' },
+    { symbol: 'C_t', value: thermal.ct, note: thermal.note },
     edition === 'ASCE 7-16'
       ? {
           symbol: 'I_s',
@@ -79,12 +96,13 @@ export function roofSnowLoad(input: SnowInput): RoofSnow {
     {
       symbol: 'C_s',
       value: slopeCs,
-      note: `slope factor at ${slopeDeg.toFixed(1)}°, ${input.slipperyUnobstructed ? 'unobstructed slippery' : 'other'} surface, ASCE 7 Fig. 7.4-1`,
+      note: `slope factor at ${slopeDeg.toFixed(1)}°, ${thermal.ct > 1 ? `cold roof (C_t ${thermal.ct})` : 'warm roof'}, ${slippery.used ? 'unobstructed slippery' : 'other'} surface curve, ${edition} Fig. 7.4-1`,
     },
   ];
 
   const warnings: string[] = [];
   const notes: string[] = [];
+  if (slippery.note) notes.push(slippery.note);
   if (pg > 0) {
     const ridged = input.roofType === 'gable' || input.roofType === 'hip';
     if (
@@ -125,6 +143,10 @@ export function roofSnowLoad(input: SnowInput): RoofSnow {
     governing,
     designPsf: Math.max(psPsf, pmPsf),
     slopeDeg,
+    thermalCondition: thermal.condition,
+    thermalCtGiven: thermal.given,
+    thermalCt: thermal.ct,
+    slipperyCurveUsed: slippery.used,
     factors,
     warnings,
     notes,

@@ -8,6 +8,7 @@ import { asdCombinations } from '@/lib/calc/loads';
 import { getMaterial, listSizes } from '@/lib/calc/materials';
 import { CAUTION_TEXT } from '@/lib/calc/prescriptive/caution';
 import { CalcInputError, type LoadCombination, type LoadType } from '@/lib/calc/types';
+import { CALC_BOUNDS } from '@/shared/schemas/calc/bounds';
 import type { SpanTableInput, SpanTableResult } from '@/shared/schemas/calc/span-table';
 import { uniformSpanLimits, type UniformSpanCase } from './uniform-span-limits';
 
@@ -17,15 +18,17 @@ const LOOKUP_SPAN_FT = 21;
 
 /**
  * A span table for the user's own loads: for each size of the chosen materials and each tributary width,
- * the largest design span it carries under D (+ self-weight), L, Lr and S per foot of tributary width, by
+ * the largest span it carries (printed as the clear span unless the design span is asked for) under D (+ self-weight), L, Lr and S per foot of tributary width, by
  * the same rules as the member check (ASD combinations of the edition, C_D per combination, bending with
  * C_L = 1.0 for a braced top edge, shear at d, live and total deflection with creep, bearing on the member
  * and the plate), each limit solved in closed form (glulam bending by bisection to 1/16 in). Never a code
- * table: the numbers come from the user's loads.
+ * table: the numbers come from the user's loads. A material or ply count named twice is tabulated once; the
+ * work (sizes × widths × combinations) is capped at CALC_BOUNDS.spanTableWork.
  *
  * @param input parsed spanTableInputSchema (psf, ft, in)
  * @returns rows by size with one cell per tributary width (span ft, printed ft-in, the governing check)
- * @throws CalcInputError for unknown materials
+ * @throws CalcInputError for unknown materials, no load at all, or work past the stated ceiling (field
+ *   materialIds)
  * @example buildSpanTable(spanTableInputSchema.parse({ edition: 'ASCE 7-16', deadPsf: 10, livePsf: 40, tributaryWidthsFt: [16 / 12], materialIds: ['sawn-spruce-pine-fir-no1-no2'], repetitive: true, selfWeight: false })).rows[0].cells[0].spanText;
  * Reference: AWC Design Aid No. 6 (2007) case 1; NDS 2018 §§3.3–3.5, 3.10; ASCE 7-16/7-22 §2.4.1.
  */
@@ -43,13 +46,31 @@ export function buildSpanTable(input: SpanTableInput): SpanTableResult {
     (Object.keys(c.factors) as LoadType[]).every((t) => t === 'D' || psfByType[t] > 0),
   );
   const selfWeight = input.selfWeight ?? true;
+  if (!selfWeight && psfByType.D + psfByType.L + psfByType.Lr + psfByType.S <= 0) {
+    throw new CalcInputError('deadPsf', 'Give a load above 0 psf, or include the self-weight');
+  }
   const bearingIn = input.bearingIn ?? DEFAULT_BEARING_IN;
+  const spanBasis = input.spanBasis ?? 'clear';
+  const spanHeading =
+    spanBasis === 'clear'
+      ? `Clear spans: between the faces of the supports (the design span less ${bearingIn} in of bearing, half at each end)`
+      : 'Design spans: support centre to support centre';
   const warnings: string[] = [];
   const rows: SpanTableResult['rows'] = [];
-  const plies = input.plies ?? [1, 2, 3, 4];
+  const plies = [...new Set(input.plies ?? [1, 2, 3, 4])];
   const preset = DEFLECTION_PRESETS[input.deflectionUse ?? 'floor'];
+  const materialIds = [...new Set(input.materialIds)];
+  let sizeCount = 0;
+  for (const materialId of materialIds) sizeCount += listSizes(materialId, { plies }).length;
+  const work = sizeCount * input.tributaryWidthsFt.length * Math.max(1, active.length);
+  if (work > CALC_BOUNDS.spanTableWork) {
+    throw new CalcInputError(
+      'materialIds',
+      `This span table asks for ${work.toLocaleString('en-US')} checks (${sizeCount} sizes × ${input.tributaryWidthsFt.length} tributary widths × ${active.length} load combinations); at most ${CALC_BOUNDS.spanTableWork.toLocaleString('en-US')} per request: choose fewer materials, ply counts or widths`,
+    );
+  }
 
-  for (const materialId of input.materialIds) {
+  for (const materialId of materialIds) {
     const material = getMaterial(materialId);
     if (material.generic)
       warnings.push(`${material.label}: generic values, confirm with the manufacturer's published values.`);
@@ -81,10 +102,13 @@ export function buildSpanTable(input: SpanTableInput): SpanTableResult {
           support,
         };
         const limits = uniformSpanLimits(materialId, size, section, spanCase);
+        const clearSpanFt = Math.max(0, limits.spanFt - bearingIn / IN_PER_FT);
         return {
           tributaryFt,
           spanFt: limits.spanFt,
-          spanText: formatSpanFtIn(limits.spanFt * IN_PER_FT),
+          spanText: formatSpanFtIn((spanBasis === 'clear' ? clearSpanFt : limits.spanFt) * IN_PER_FT),
+          clearSpanFt,
+          designSpanFt: limits.spanFt,
           governedBy: limits.governedBy,
           combination: limits.combination,
         };
@@ -94,10 +118,14 @@ export function buildSpanTable(input: SpanTableInput): SpanTableResult {
   }
   return {
     caution: CAUTION_TEXT,
+    spanBasis,
+    spanHeading,
     tributaryWidthsFt: input.tributaryWidthsFt,
     rows,
     notes: [
-      'Spans are design spans, support centre to support centre; the clear span is the design span less half the bearing at each end.',
+      spanBasis === 'clear'
+        ? 'Spans printed are clear spans, between the faces of the supports (what is measured on site); the design span, support centre to support centre, is the clear span plus half the bearing at each end.'
+        : 'Spans printed are design spans, support centre to support centre; the clear span is the design span less half the bearing at each end.',
       'Printed spans are rounded down to the inch.',
       `Top edge braced along its length (C_L = 1.0); bearing ${bearingIn} in at each end; deflection ${preset.label}: L/${preset.liveRatio} variable, L/${preset.totalRatio} total with creep.`,
       'Uniform loads only: point loads and partial loads need a member check.',

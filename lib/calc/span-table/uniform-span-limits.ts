@@ -1,5 +1,5 @@
 import { IN3_PER_FT3 } from '@/lib/calc/analysis/simple-span';
-import { glulamVolumeFactor } from '@/lib/calc/factors';
+import { GLULAM_VOLUME_REFERENCE } from '@/lib/calc/factors';
 import { materialSpec, type MemberSize } from '@/lib/calc/materials';
 import { LOAD_TYPES, type LoadCombination, type LoadType } from '@/lib/calc/types';
 import type { CheckId } from '@/shared/schemas/calc/member';
@@ -8,9 +8,6 @@ import type { SupportSpec } from '@/lib/calc/checks/evaluate-size';
 import type { SectionFactors } from '@/lib/calc/checks/section-factors';
 
 const IN_PER_FT = 12;
-/** Bisection stops at 1/16 in of span, in ft. */
-const SPAN_TOLERANCE_FT = 1 / 16 / IN_PER_FT;
-const MAX_SPAN_FT = 200;
 
 /** What limits a uniformly loaded simple span, each check's largest design span (ft). */
 export interface UniformSpanLimits {
@@ -45,8 +42,8 @@ function lineLoad(c: LoadCombination, w: Record<LoadType, number>, sw: number, s
 /**
  * The largest design span (ft) a braced member carries under uniform full-span loads, for each check, in
  * closed form from the simple-span formulas (M = wl²/8, V at d = w(l/2 − d), Δ = 5wl⁴/384EI, R = wl/2) per ASD
- * combination. Glulam bending, whose volume factor C_V depends on the span, is solved by bisection to
- * 1/16 in. The top edge is taken as braced (C_L = 1.0), as for joists and headers under framing.
+ * combination, glulam bending too (its volume factor C_V is a power of the span, so the limit stays a closed
+ * form). The top edge is taken as braced (C_L = 1.0), as for joists and headers under framing.
  *
  * @param materialId material; size member size (in); section its factors (in, psi) from sectionFactors
  * @param spanCase loads (plf), combinations, limits and support
@@ -94,13 +91,15 @@ export function uniformSpanLimits(
     const FbNoCv = section.FbBasePsi * c.CD;
     const bendingSpan = (FbPsi: number) => Math.sqrt((8 * section.sxIn3 * FbPsi) / (IN_PER_FT * wc));
     if (spec.family === 'glulam') {
-      const group = spec.stressClass.speciesGroup;
-      const ratio = (L: number) =>
-        (wc * L * L * IN_PER_FT) /
-        8 /
-        section.sxIn3 /
-        (FbNoCv * glulamVolumeFactor({ spanFt: L, dIn: size.dIn, bIn: size.bIn, speciesGroup: group }));
-      take('bending', bisectSpan(ratio), c.name);
+      take(
+        'bending',
+        glulamBendingSpan(
+          bendingSpan(FbNoCv),
+          size,
+          GLULAM_VOLUME_REFERENCE.exponent[spec.stressClass.speciesGroup],
+        ),
+        c.name,
+      );
     } else {
       // C_L = 1.0 here, so where C_V and C_L are not combined (LVL with C_V ≤ 1.0) the lesser is C_V.
       take(
@@ -132,18 +131,16 @@ function deflectionSpan(eiLbIn2: number, wPlf: number, ratio: number, capIn: num
   return Math.min(byRatio, byCap);
 }
 
-/** Largest span with ratio(L) ≤ 1 for a ratio rising with span, by bisection to 1/16 in. */
-function bisectSpan(ratio: (spanFt: number) => number): number {
-  let lo = 0;
-  let hi = 1;
-  while (ratio(hi) <= 1 && hi < MAX_SPAN_FT) {
-    lo = hi;
-    hi *= 2;
-  }
-  while (hi - lo > SPAN_TOLERANCE_FT / 4) {
-    const mid = 0.5 * (lo + hi);
-    if (ratio(mid) <= 1) lo = mid;
-    else hi = mid;
-  }
-  return lo;
+/**
+ * Largest glulam bending span, ft, in closed form. With C_V = (A/L)^e ≤ 1, A = 21 ft·(12/d)(5.125/b),
+ * e = 1/10 western or 1/20 Southern Pine (NDS 2018 eq. 5.3-1): the span without C_V is L₀ = √(8·S·F_b/w);
+ * if L₀ ≤ A then C_V = 1 there and L₀ is the span, else w·L²/(8S) = F_b·(A/L)^e gives
+ * L = (L₀²·A^e)^(1/(2 + e)).
+ */
+function glulamBendingSpan(spanWithoutCvFt: number, size: MemberSize, exponent: number): number {
+  const ref = GLULAM_VOLUME_REFERENCE;
+  const bIn = Math.min(size.bIn, ref.maxWidthIn);
+  const aFt = ref.lengthFt * (ref.depthIn / size.dIn) * (ref.widthIn / bIn);
+  if (spanWithoutCvFt <= aFt) return spanWithoutCvFt;
+  return Math.pow(spanWithoutCvFt * spanWithoutCvFt * Math.pow(aFt, exponent), 1 / (2 + exponent));
 }

@@ -23,7 +23,10 @@ export const framingHeaderSchema = z.object({
   plies: count('plies', 1, 4),
   /** Engineered lumber is ordered to length; sawn lumber comes in stock lengths. */
   engineered: z.boolean().default(false),
-  /** A single flat 2x4 in a nonbearing wall (IRC 2021 R602.7.4): no cripples above it. */
+  /**
+   * A single flat 2x4 in a nonbearing wall (IRC 2021 R602.7.4): the code requires no cripples above it; the
+   * framing list still sets them at layout as nailing for the wall finish (common practice).
+   */
   flat: z.boolean().default(false),
 });
 

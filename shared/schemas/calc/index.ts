@@ -1,4 +1,5 @@
 /** Zod contracts of the calculation engine's inputs and results, shared by client and server. */
+export * from './bounds';
 export * from './units';
 export * from './loads';
 export * from './materials';

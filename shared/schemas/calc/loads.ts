@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { CALC_BOUNDS } from '@/shared/schemas/calc/bounds';
 import { loadStandardSchema, roofTypes } from '@/shared/schemas/jobs';
 
 /**
@@ -12,11 +13,26 @@ export const inputFlagSchema = z.enum(inputFlags);
 
 export const loadTypeSchema = z.enum(['D', 'L', 'Lr', 'S']);
 
-const nonNegative = (what: string) =>
+/** Largest area load accepted, psf (heavy storage is 250 psf in ASCE 7 Table 4.3-1; twice that is room enough). */
+export const MAX_AREA_LOAD_PSF = 500;
+/** Largest line load accepted, plf. */
+export const MAX_LINE_LOAD_PLF = 20_000;
+/** Largest point load accepted, lb. */
+export const MAX_POINT_LOAD_LB = 200_000;
+
+/**
+ * A load or position that cannot be negative and has a stated ceiling: loads past it are refused at the
+ * field (numbers like 1e300 psf would overflow the checks' ratios to Infinity).
+ */
+const nonNegative = (what: string, max: number, unit: string) =>
   z
     .number({ message: `Enter ${what}` })
     .finite()
-    .min(0, { message: `${what} cannot be negative` });
+    .min(0, { message: `${what} cannot be negative` })
+    .max(max, { message: `${what} is at most ${max.toLocaleString('en-US')} ${unit}` });
+const psf = (what: string) => nonNegative(what, MAX_AREA_LOAD_PSF, 'psf');
+const pounds = (what: string) => nonNegative(what, MAX_POINT_LOAD_LB, 'lb');
+const position = (what: string) => nonNegative(what, 200, 'ft');
 
 const tributaryFt = z
   .number({ message: 'Enter the tributary width' })
@@ -32,8 +48,8 @@ const sourceBase = {
 
 /** A uniform source may cover only part of the span: from startFt to endFt, measured from the left support. */
 const extent = {
-  startFt: nonNegative('a start position').optional(),
-  endFt: nonNegative('an end position').optional(),
+  startFt: position('a start position').optional(),
+  endFt: position('an end position').optional(),
 };
 
 export const roofSourceSchema = z.object({
@@ -41,12 +57,12 @@ export const roofSourceSchema = z.object({
   ...sourceBase,
   ...extent,
   tributaryFt,
-  deadPsf: nonNegative('the roof dead load'),
+  deadPsf: psf('the roof dead load'),
   /** True when deadPsf is per sloped roof area; the engine divides by cos θ to get horizontal projection. */
   deadAlongSlope: z.boolean().default(false),
-  roofLivePsf: nonNegative('the roof live load'),
+  roofLivePsf: psf('the roof live load'),
   /** Sloped-roof snow (horizontal projection) for this source; omitted = the member input's roofSnowPsf. */
-  snowPsf: nonNegative('the snow load').optional(),
+  snowPsf: psf('the snow load').optional(),
 });
 
 export const ceilingSourceSchema = z.object({
@@ -54,8 +70,8 @@ export const ceilingSourceSchema = z.object({
   ...sourceBase,
   ...extent,
   tributaryFt,
-  deadPsf: nonNegative('the ceiling dead load'),
-  livePsf: nonNegative('the attic live load'),
+  deadPsf: psf('the ceiling dead load'),
+  livePsf: psf('the attic live load'),
   /** Ceiling joists run continuous over the member (not lapped or spliced over it): 1.25 × the half-span load. */
   continuousOver: z.boolean().default(false),
 });
@@ -65,8 +81,8 @@ export const floorSourceSchema = z.object({
   ...sourceBase,
   ...extent,
   tributaryFt,
-  deadPsf: nonNegative('the floor dead load'),
-  livePsf: nonNegative('the floor live load'),
+  deadPsf: psf('the floor dead load'),
+  livePsf: psf('the floor live load'),
   /** Joists run continuous over the member (not lapped or spliced over it): 1.25 × the half-span load. */
   continuousOver: z.boolean().default(false),
 });
@@ -77,9 +93,9 @@ export const wallAboveSourceSchema = z
     kind: z.literal('wall-above'),
     ...sourceBase,
     ...extent,
-    wPlf: nonNegative('the wall load').optional(),
+    wPlf: nonNegative('the wall load', MAX_LINE_LOAD_PLF, 'plf').optional(),
     heightFt: z.number().finite().positive({ message: 'Wall height must be above 0' }).max(40).optional(),
-    deadPsf: nonNegative('the wall dead load').optional(),
+    deadPsf: psf('the wall dead load').optional(),
   })
   .refine((s) => (s.wPlf !== undefined) !== (s.heightFt !== undefined && s.deadPsf !== undefined), {
     message: 'Give the wall above either a load in plf or a height and a psf, not both',
@@ -100,11 +116,11 @@ export const pointSourceSchema = z.object({
   ...sourceBase,
   pointKind: pointLoadKindSchema,
   /** Position from the left support, ft. */
-  atFt: nonNegative('the position'),
-  deadLb: nonNegative('the dead load').default(0),
-  liveLb: nonNegative('the live load').default(0),
-  roofLiveLb: nonNegative('the roof live load').default(0),
-  snowLb: nonNegative('the snow load').default(0),
+  atFt: position('the position'),
+  deadLb: pounds('the dead load').default(0),
+  liveLb: pounds('the live load').default(0),
+  roofLiveLb: pounds('the roof live load').default(0),
+  snowLb: pounds('the snow load').default(0),
 });
 
 export const loadSourceSchema = z.discriminatedUnion('kind', [
@@ -127,14 +143,35 @@ export const memberLoadsInputSchema = z.object({
   /** Roof slope, rise in 12 (the job's roofPitchIn12). */
   roofPitchIn12: z.number().finite().min(0).max(24).default(0),
   /** Sloped-roof snow p_s from the snow module, psf of horizontal projection (0 where there is no snow). */
-  roofSnowPsf: nonNegative('the roof snow load').default(0),
+  roofSnowPsf: psf('the roof snow load').default(0),
   /** Member self-weight, plf (the caller knows the member). */
-  selfWeightPlf: nonNegative('the self-weight').default(0),
-  sources: z.array(loadSourceSchema).max(40, { message: 'At most 40 load sources' }),
+  selfWeightPlf: nonNegative('the self-weight', MAX_LINE_LOAD_PLF, 'plf').default(0),
+  sources: z
+    .array(loadSourceSchema)
+    .max(CALC_BOUNDS.sources, { message: `At most ${CALC_BOUNDS.sources} load sources` }),
 });
 export type MemberLoadsInput = z.infer<typeof memberLoadsInputSchema>;
 
 export const riskCategorySchema = z.enum(['I', 'II', 'III', 'IV']);
+
+/**
+ * The roof's thermal condition (ASCE 7 Table 7.3-2), from which the engine takes the thermal factor C_t and
+ * the slope-factor curve of the job's edition:
+ * - 'heated-unvented': a heated building whose roof is not ventilated (cathedral ceiling, insulation at the
+ *   roof deck);
+ * - 'vented-attic-insulated-ceiling': a ventilated attic over a heated space with more than R-25 in the
+ *   ceiling between them (the usual house);
+ * - 'vented-attic-little-insulation': a ventilated attic over a heated space with R-25 or less in the ceiling;
+ * - 'unheated': an unheated structure (detached garage, shed, open porch roof).
+ */
+export const roofThermalConditions = [
+  'heated-unvented',
+  'vented-attic-insulated-ceiling',
+  'vented-attic-little-insulation',
+  'unheated',
+] as const;
+export const roofThermalConditionSchema = z.enum(roofThermalConditions);
+export type RoofThermalCondition = z.infer<typeof roofThermalConditionSchema>;
 
 /**
  * Snow inputs for one roof (ASCE 7 chapter 7). Ground snow in psf as the job's edition defines it
@@ -143,14 +180,25 @@ export const riskCategorySchema = z.enum(['I', 'II', 'III', 'IV']);
  */
 export const snowInputSchema = z.object({
   edition: loadStandardSchema,
-  groundSnowPsf: nonNegative('the ground snow load').max(300, { message: 'Ground snow at most 300 psf' }),
+  groundSnowPsf: nonNegative('the ground snow load', 300, 'psf'),
   roofPitchIn12: z.number().finite().min(0).max(24),
   roofType: z.enum(roofTypes).default('gable'),
   riskCategory: riskCategorySchema.default('II'),
   exposureCe: z.number().finite().min(0.7).max(1.3).default(1.0),
-  thermalCt: z.number().finite().min(0.85).max(1.3).default(1.0),
+  /** The roof's thermal condition; omitted = 'vented-attic-insulated-ceiling' (the usual house). */
+  thermalCondition: roofThermalConditionSchema.optional(),
+  /** C_t given outright, overriding the value the thermal condition gives (the condition still says vented or not). */
+  thermalCt: z.number().finite().min(0.85).max(1.3).optional(),
   importanceIs: z.number().finite().min(0.8).max(1.2).optional(),
-  /** Unobstructed slippery surface (metal, glass, smooth membrane) that lets snow slide off the eaves. */
+  /**
+   * Thermal resistance of the roof's insulation, R in ft²·h·°F/Btu: a warm roof (C_t ≤ 1.0) takes the
+   * slippery-surface curve only with enough of it (ASCE 7-16 §7.4.1). Omitted = not known.
+   */
+  roofInsulationR: z.number().finite().min(0).max(100).optional(),
+  /**
+   * Unobstructed slippery surface (metal, glass, smooth membrane) that lets snow slide off the eaves. Its
+   * lower curve is used on a cold roof, and on a warm roof only when roofInsulationR meets §7.4.1.
+   */
   slipperyUnobstructed: z.boolean().default(false),
   /** The roof steps down to a lower roof next to this member (drift). */
   roofStepsDown: z.boolean().default(false),

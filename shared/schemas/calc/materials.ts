@@ -27,6 +27,7 @@ export const sawnReferenceRowSchema = z
     EPsi: psi.min(800_000).max(2_500_000),
     EminPsi: psi.min(250_000).max(1_000_000),
     provenance,
+    note: z.string().min(1).optional(),
   })
   .refine((row) => row.EminPsi < row.EPsi, { message: 'E_min must be below E' });
 
@@ -103,8 +104,8 @@ export const glulamSizeSetSchema = z
   .object({
     speciesGroup: z.enum(['western', 'southern-pine']),
     laminationIn: z.number().positive(),
-    widthsIn: z.array(z.number().positive().max(12)).min(1),
-    depthsIn: z.array(z.number().positive().max(48)).min(1),
+    widthsIn: z.array(z.number().positive().max(12)).min(1).max(20),
+    depthsIn: z.array(z.number().positive().max(48)).min(1).max(60),
   })
   .refine(
     (set) =>

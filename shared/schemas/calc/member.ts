@@ -1,9 +1,11 @@
 import { z } from 'zod';
+import { CALC_BOUNDS } from '@/shared/schemas/calc/bounds';
 import { loadStandardSchema } from '@/shared/schemas/jobs';
 import {
   inputFlagSchema,
   loadSourceSchema,
   loadTypeSchema,
+  roofThermalConditionSchema,
   snowInputSchema,
 } from '@/shared/schemas/calc/loads';
 
@@ -27,6 +29,7 @@ export const memberKinds = ['header', 'beam'] as const;
 export const deflectionUses = [
   'floor',
   'floor-tile',
+  'floor-stone',
   'plaster-ceiling',
   'gypsum-ceiling',
   'roof',
@@ -34,7 +37,12 @@ export const deflectionUses = [
 ] as const;
 export const deflectionUseSchema = z.enum(deflectionUses);
 export type DeflectionUse = z.infer<typeof deflectionUseSchema>;
-export const mountKinds = ['dropped', 'flush'] as const;
+/**
+ * How the member sits: dropped below the joists, flush with them (joists hung in hangers), or raised into the
+ * attic above the ceiling with the ceiling joists hung from it by hangers or straps (a common fix in
+ * single-storey houses).
+ */
+export const mountKinds = ['dropped', 'flush', 'raised'] as const;
 export const supportKinds = ['jacks', 'post'] as const;
 
 const positive = (label: string) =>
@@ -42,6 +50,17 @@ const positive = (label: string) =>
     .number({ message: `Enter ${label}` })
     .finite()
     .positive({ message: `${label} must be above 0` });
+
+/** A length with a least value: below it the checks divide by next to nothing (ratios run to Infinity). */
+const atLeast = (label: string, min: number, unit: string) =>
+  z
+    .number({ message: `Enter ${label}` })
+    .finite()
+    .min(min, { message: `${label} must be at least ${min} ${unit}` });
+
+/** A list of at most `max` items, with the message naming the limit. */
+const listOf = <T extends z.ZodType>(item: T, max: number, what: string) =>
+  z.array(item).max(max, { message: `At most ${max} ${what}` });
 
 /** Snow inputs of the roof above the member; edition and pitch come from the member input. */
 export const memberSnowSchema = snowInputSchema.omit({ edition: true, roofPitchIn12: true });
@@ -65,13 +84,13 @@ export const memberCheckInputSchema = z.object({
   edition: loadStandardSchema,
   clearSpanFt: positive('the clear span').max(40, { message: 'Clear span at most 40 ft' }),
   /** Bearing length at each end, in; default 3 (two jack studs, common practice). */
-  bearingLeftIn: positive('the left bearing length').max(24).optional(),
-  bearingRightIn: positive('the right bearing length').max(24).optional(),
+  bearingLeftIn: atLeast('the left bearing length', 0.5, 'in').max(24).optional(),
+  bearingRightIn: atLeast('the right bearing length', 0.5, 'in').max(24).optional(),
   /** Roof slope, rise in 12; default 0. */
   roofPitchIn12: z.number().finite().min(0).max(24).optional(),
   /** Snow on the roof above; omitted = no snow on this member's roof sources. */
   snow: memberSnowSchema.optional(),
-  sources: z.array(loadSourceSchema).max(40, { message: 'At most 40 load sources' }),
+  sources: listOf(loadSourceSchema, CALC_BOUNDS.sources, 'load sources'),
   /** Add the member's own weight as dead load; default true. */
   selfWeight: z.boolean().optional(),
   materialId: z.string().min(1, { message: 'Choose a material' }),
@@ -83,7 +102,10 @@ export const memberCheckInputSchema = z.object({
   gradeUnknown: z.boolean().optional(),
   /** Old lumber by measured size: one ply's width and the depth, in (replaces the catalogue dimensions). */
   measuredPly: z
-    .object({ bIn: positive('the measured width').max(12), dIn: positive('the measured depth').max(24) })
+    .object({
+      bIn: atLeast('the measured width', 0.5, 'in').max(12),
+      dIn: atLeast('the measured depth', 1, 'in').max(24),
+    })
     .optional(),
   /** Wet service (moisture content above 19 % in service); default false. */
   wetService: z.boolean().optional(),
@@ -102,21 +124,26 @@ export const memberCheckInputSchema = z.object({
   /** Deflection limits by use; default 'floor' (L/360 live, L/240 total). */
   deflectionUse: deflectionUseSchema.optional(),
   /** Absolute cap on total deflection, in (e.g. 0.375 for a flush beam); default none. */
-  deflectionCapIn: positive('the deflection cap').max(4).optional(),
+  deflectionCapIn: atLeast('the deflection cap', 0.05, 'in').max(4).optional(),
   /** Part of the occupancy live load that is sustained (for creep), 0–1; default 0. */
   sustainedLiveFraction: z.number().finite().min(0).max(1).optional(),
   /** What the member bears on: jack studs on a wall plate, or a post; default 'jacks'. */
   supportKind: z.enum(supportKinds).optional(),
   /** Width of the support across the member (wall stud depth or post face), in; default 3.5 (2x4 wall). */
-  supportWidthIn: positive('the support width').max(12).optional(),
+  supportWidthIn: atLeast('the support width', 1.5, 'in').max(12).optional(),
   /** Material of the plate under the jack studs (its F_c⊥ usually governs); default Spruce-Pine-Fir No.1/No.2. */
   plateMaterialId: z.string().min(1).optional(),
-  /** Dropped below the joists or flush with them; default 'dropped'. */
+  /** Dropped below the joists, flush with them, or raised into the attic; default 'dropped'. */
   mount: z.enum(mountKinds).optional(),
-  /** Joist depth, in: the most a flush member may be. */
+  /** Joist depth, in: the most a flush member may be; for a raised member, the ceiling joists' depth. */
   joistDepthIn: positive('the joist depth').max(24).optional(),
+  /**
+   * Raised: clear height in the attic where the member goes, from the ceiling line (underside of the ceiling
+   * joists) up to the underside of the roof framing, in. The most a raised member may be.
+   */
+  atticClearanceIn: positive('the attic clearance').max(240).optional(),
   /** Joist spacing, in; default 16. */
-  joistSpacingIn: positive('the joist spacing').max(48).optional(),
+  joistSpacingIn: atLeast('the joist spacing', 4, 'in').max(48).optional(),
   /** Joists frame in from both sides (flush); default true. */
   joistsBothSides: z.boolean().optional(),
   /** Height from the floor to the underside of the joists, in (dropped: headroom = this − member depth). */
@@ -125,7 +152,12 @@ export const memberCheckInputSchema = z.object({
   minHeadroomIn: positive('the headroom').max(200).optional(),
   posts: memberPostsSchema.optional(),
   /** How each input was obtained, by field name ("clearSpanFt": "measured"). */
-  flags: z.record(z.string(), inputFlagSchema).optional(),
+  flags: z
+    .record(z.string().max(80), inputFlagSchema)
+    .refine((flags) => Object.keys(flags).length <= CALC_BOUNDS.flags, {
+      message: `At most ${CALC_BOUNDS.flags} flags`,
+    })
+    .optional(),
 });
 export type MemberCheckInput = z.infer<typeof memberCheckInputSchema>;
 /** The loading, support and use of a member without its material and size (shared with the shortlist). */
@@ -163,7 +195,7 @@ export const checkResultSchema = z.object({
   pass: z.boolean(),
   /** The load combination that governs this check. */
   combination: z.string(),
-  factors: z.array(factorUseSchema),
+  factors: listOf(factorUseSchema, CALC_BOUNDS.factors, 'factors'),
   formula: z.string(),
   note: z.string().optional(),
 });
@@ -197,6 +229,36 @@ const diagramSampleSchema = z.object({
   deflectionIn: z.number(),
 });
 
+/** The supports of a member, left to right: two ends, and a centre post under a two-span continuous beam. */
+export const supportNames = ['left', 'centre', 'right'] as const;
+export const supportNameSchema = z.enum(supportNames);
+export type SupportName = z.infer<typeof supportNameSchema>;
+
+/** A deflection (in, downward positive) and where its largest value is (ft along the design span). */
+const deflectionAtSchema = z.object({ in: z.number(), atFt: z.number() });
+
+/**
+ * What one load combination asks of the member (self-weight included): support reactions of that
+ * combination (lb, upward positive), the largest moment (lb·ft, sagging positive) and shear (lb) with their
+ * positions, the design shear the shear check uses (at d from the supports when asked) and the support it is
+ * next to, and the variable-load, plain elastic total and creep-adjusted total deflections with the position
+ * of each largest value. Positions are ft along the design span from the left support's centre.
+ */
+export const combinationDemandsSchema = z.object({
+  combination: z.string(),
+  CD: z.number(),
+  reactions: z
+    .array(z.object({ support: supportNameSchema, atFt: z.number(), lb: z.number() }))
+    .max(supportNames.length),
+  maxMoment: z.object({ lbFt: z.number(), atFt: z.number() }),
+  maxShear: z.object({ lb: z.number(), atFt: z.number() }),
+  designShear: z.object({ lb: z.number(), support: supportNameSchema, atD: z.boolean() }),
+  deflectionLive: deflectionAtSchema,
+  deflectionTotalElastic: deflectionAtSchema,
+  deflectionTotal: deflectionAtSchema,
+});
+export type CombinationDemands = z.infer<typeof combinationDemandsSchema>;
+
 /** Which size of which material a result is about (lib/calc sizeIdentity); b and d in in. */
 export const sizeIdentitySchema = z.object({
   materialId: z.string(),
@@ -224,7 +286,7 @@ export const memberCheckResultSchema = z.object({
     bearingLeftIn: z.number(),
     bearingRightIn: z.number(),
   }),
-  inputs: z.array(echoedInputSchema),
+  inputs: listOf(echoedInputSchema, CALC_BOUNDS.echoedInputs, 'echoed inputs'),
   /**
    * Roof snow from the member's snow inputs, psf of horizontal projection: flat roof p_f, sloped roof p_s,
    * low-slope minimum p_m, the design value used for roof sources (and which governs), with each factor.
@@ -236,14 +298,24 @@ export const memberCheckResultSchema = z.object({
       pmPsf: z.number(),
       designPsf: z.number(),
       governing: z.enum(['sloped', 'minimum']),
-      factors: z.array(factorUseSchema),
-      notes: z.array(z.string()),
+      /** The roof's thermal condition used (given or the default), the C_t used and whether it was given. */
+      thermalCondition: roofThermalConditionSchema.optional(),
+      thermalCt: z.number().optional(),
+      thermalCtGiven: z.boolean().optional(),
+      /** True when the slippery-surface C_s curve was used (a cold roof, or a warm roof insulated enough). */
+      slipperyCurveUsed: z.boolean().optional(),
+      factors: listOf(factorUseSchema, CALC_BOUNDS.factors, 'factors'),
+      notes: listOf(z.string(), CALC_BOUNDS.messages, 'notes'),
       reference: z.string(),
     })
     .optional(),
-  takedown: z.array(takedownLineSchema),
-  combinations: z.array(z.object({ name: z.string(), CD: z.number(), skipped: z.boolean() })),
-  checks: z.array(checkResultSchema),
+  takedown: listOf(takedownLineSchema, CALC_BOUNDS.takedownLines, 'takedown lines'),
+  combinations: listOf(
+    z.object({ name: z.string(), CD: z.number(), skipped: z.boolean() }),
+    CALC_BOUNDS.combinations,
+    'combinations',
+  ),
+  checks: listOf(checkResultSchema, CALC_BOUNDS.checks, 'checks'),
   governing: z.object({ check: checkIdSchema, combination: z.string(), ratio: z.number() }),
   reactions: z.object({
     /** Largest reaction of any combination at each end, lb. */
@@ -252,20 +324,47 @@ export const memberCheckResultSchema = z.object({
     combination: z.string(),
     /** Reaction at each end by load type (unfactored), lb. */
     byType: z.record(loadTypeSchema, z.object({ leftLb: z.number(), rightLb: z.number() })),
+    /**
+     * Per support: the largest reaction of any combination and that combination, and the least (a negative
+     * least is uplift: the member must be held down there) with its combination, lb.
+     */
+    bySupport: z
+      .array(
+        z.object({
+          support: supportNameSchema,
+          atFt: z.number(),
+          largestLb: z.number(),
+          largestCombination: z.string(),
+          leastLb: z.number(),
+          leastCombination: z.string(),
+        }),
+      )
+      .max(supportNames.length)
+      .optional(),
   }),
   bearing: z.object({
     requiredLengthIn: z.number(),
     providedLengthIn: z.number(),
     jackStuds: z.number().int(),
     jackStudsNote: z.string(),
+    /** Jack studs the bearing length needs, and how many more the common-practice minimum adds. */
+    jackStudsForBearing: z.number().int().optional(),
+    jackStudsAddedByPractice: z.number().int().optional(),
     governedBy: z.enum(['member', 'plate']),
   }),
   mount: z.object({
     kind: z.enum(mountKinds),
     depthFits: z.boolean().nullable(),
+    /** Flush: hangers, one per joist framing in; raised: a hanger or strap per ceiling joist hung from it. */
     hangers: z.number().int().nullable(),
     headroomIn: z.number().nullable(),
-    requirements: z.array(z.string()),
+    /** Raised: how far the member rises above the ceiling line (its bottom on the ceiling line), in. */
+    depthAboveCeilingIn: z.number().nullable().optional(),
+    /** Raised: how far it rises above the tops of the ceiling joists, in (null without their depth). */
+    depthAboveJoistsIn: z.number().nullable().optional(),
+    /** Raised: bearing length each end needs on its post or jack studs, in (from the bearing check). */
+    endBearingRequiredIn: z.number().optional(),
+    requirements: listOf(z.string(), CALC_BOUNDS.messages, 'requirements'),
   }),
   posts: z
     .array(
@@ -281,9 +380,21 @@ export const memberCheckResultSchema = z.object({
       }),
     )
     .optional(),
-  warnings: z.array(z.string()),
-  sources: z.array(z.string()),
-  diagram: z.object({ combination: z.string(), samples: z.array(diagramSampleSchema) }).optional(),
+  warnings: listOf(z.string(), CALC_BOUNDS.messages, 'warnings'),
+  sources: listOf(z.string(), CALC_BOUNDS.messages, 'sources'),
+  diagram: z
+    .object({
+      combination: z.string(),
+      samples: listOf(diagramSampleSchema, CALC_BOUNDS.diagramSamples, 'samples'),
+    })
+    .optional(),
+  /** Demands of the governing combination (that of the governing check) and of every combination checked. */
+  demands: z
+    .object({
+      governing: combinationDemandsSchema,
+      byCombination: listOf(combinationDemandsSchema, CALC_BOUNDS.combinations, 'combinations'),
+    })
+    .optional(),
 });
 export type MemberCheckResult = z.infer<typeof memberCheckResultSchema>;
 
@@ -302,7 +413,7 @@ export const prescriptiveResultSchema = z.object({
   verdict: z.enum(['likely-covered', 'engineer-needed']),
   message: z.string(),
   /** Every reason the case sits outside what header tables cover (empty when likely covered). */
-  reasons: z.array(z.string()),
+  reasons: listOf(z.string(), CALC_BOUNDS.messages, 'reasons'),
   /** Tributary's own smallest sawn 2x header for the same loads (when likely covered). */
   computed: z
     .object({
@@ -313,6 +424,6 @@ export const prescriptiveResultSchema = z.object({
       governingCheck: z.string(),
     })
     .nullable(),
-  notes: z.array(z.string()),
+  notes: listOf(z.string(), CALC_BOUNDS.messages, 'notes'),
 });
 export type PrescriptiveResult = z.infer<typeof prescriptiveResultSchema>;

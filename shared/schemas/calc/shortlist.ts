@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { CALC_BOUNDS } from '@/shared/schemas/calc/bounds';
 import { memberCheckInputSchema, sizeIdentitySchema } from '@/shared/schemas/calc/member';
 
 /**
@@ -12,10 +13,21 @@ export const shortlistSorts = ['shallowest', 'lightest', 'fewest-plies', 'cheape
 export const shortlistInputSchema = memberCheckInputSchema
   .omit({ materialId: true, sizeId: true, plies: true, gradeUnknown: true, measuredPly: true, posts: true })
   .extend({
-    materialIds: z.array(z.string().min(1)).min(1, { message: 'Choose at least one material' }).max(40),
+    /** Materials to check; a material named twice is checked once. */
+    materialIds: z
+      .array(z.string().min(1).max(80))
+      .min(1, { message: 'Choose at least one material' })
+      .max(CALC_BOUNDS.materialIds, { message: `At most ${CALC_BOUNDS.materialIds} materials` }),
     /** Ply counts to consider; default 1 to 4. */
-    plies: z.array(z.number().int().min(1).max(4)).min(1).optional(),
-    /** Deepest member that fits, in; default the joist depth (flush) or the headroom limit (dropped). */
+    plies: z
+      .array(z.number().int().min(1).max(4))
+      .min(1)
+      .max(CALC_BOUNDS.plies, { message: `At most ${CALC_BOUNDS.plies} ply counts` })
+      .optional(),
+    /**
+     * Deepest member that fits, in; default the joist depth (flush), the attic clearance (raised) or the
+     * headroom limit (dropped).
+     */
     maxDepthIn: z.number().finite().positive().max(48).optional(),
     /** Widest member that fits the wall, in (a 2x4 wall 3.5, a 2x6 wall 5.5). */
     maxWidthIn: z.number().finite().positive().max(24).optional(),
@@ -25,7 +37,12 @@ export const shortlistInputSchema = memberCheckInputSchema
     maxPieceLengthFt: z.number().finite().positive().max(80).optional(),
     sortBy: z.enum(shortlistSorts).optional(),
     /** Price per linear foot of the whole member, by "materialId/sizeId" or by sizeId alone. */
-    pricePerFt: z.record(z.string(), z.number().finite().min(0)).optional(),
+    pricePerFt: z
+      .record(z.string().max(160), z.number().finite().min(0).max(1_000_000))
+      .refine((prices) => Object.keys(prices).length <= CALC_BOUNDS.prices, {
+        message: `At most ${CALC_BOUNDS.prices} prices`,
+      })
+      .optional(),
     /** Most passing sizes to return; default 25. */
     limit: z.number().int().min(1).max(500).optional(),
   });
@@ -52,11 +69,11 @@ export const shortlistResultSchema = z.object({
   caution: z.string(),
   sortBy: z.enum(shortlistSorts),
   spans: z.object({ clearSpanFt: z.number(), designSpanFt: z.number(), lengthToBuyFt: z.number() }),
-  passing: z.array(shortlistEntrySchema),
-  nearMisses: z.array(shortlistEntrySchema),
+  passing: z.array(shortlistEntrySchema).max(500),
+  nearMisses: z.array(shortlistEntrySchema).max(CALC_BOUNDS.catalogueSizes),
   counts: z.object({ checked: z.number().int(), filteredOut: z.number().int(), passing: z.number().int() }),
-  filters: z.array(z.string()),
-  warnings: z.array(z.string()),
-  sources: z.array(z.string()),
+  filters: z.array(z.string()).max(CALC_BOUNDS.messages),
+  warnings: z.array(z.string()).max(CALC_BOUNDS.catalogueSizes),
+  sources: z.array(z.string()).max(CALC_BOUNDS.messages),
 });
 export type ShortlistResult = z.infer<typeof shortlistResultSchema>;

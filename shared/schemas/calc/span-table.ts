@@ -1,12 +1,20 @@
 import { z } from 'zod';
+import { CALC_BOUNDS } from '@/shared/schemas/calc/bounds';
 import { loadStandardSchema } from '@/shared/schemas/jobs';
 import { checkIdSchema, deflectionUseSchema, supportKinds } from '@/shared/schemas/calc/member';
 
 /**
  * Input and result of a span table (DESIGN.md §5 "Span table"): for the user's area loads (psf) at each
- * tributary width (ft), the largest design span (ft) each size carries, solved from the checks, printed in
- * ft-in. Spans are design spans (support centre to support centre).
+ * tributary width (ft), the largest span (ft) each size carries, solved from the checks, printed in ft-in.
+ * The printed span is the clear span by default (between the faces of the supports: the design span less
+ * the bearing, half at each end — what is measured on site), or the design span (support centre to support
+ * centre) on request; the result says which. Every cell carries both.
  */
+
+/** Which span a span table prints: the clear span (default) or the design span. */
+export const spanBases = ['clear', 'design'] as const;
+export const spanBasisSchema = z.enum(spanBases);
+export type SpanBasis = z.infer<typeof spanBasisSchema>;
 
 const psf = (label: string) =>
   z
@@ -26,9 +34,17 @@ export const spanTableInputSchema = z.object({
   tributaryWidthsFt: z
     .array(z.number().finite().positive().max(60))
     .min(1, { message: 'Give at least one tributary width' })
-    .max(12, { message: 'At most 12 tributary widths' }),
-  materialIds: z.array(z.string().min(1)).min(1, { message: 'Choose at least one material' }).max(40),
-  plies: z.array(z.number().int().min(1).max(4)).min(1).optional(),
+    .max(CALC_BOUNDS.tributaryWidths, { message: `At most ${CALC_BOUNDS.tributaryWidths} tributary widths` }),
+  /** Materials to tabulate; a material named twice is tabulated once. */
+  materialIds: z
+    .array(z.string().min(1).max(80))
+    .min(1, { message: 'Choose at least one material' })
+    .max(CALC_BOUNDS.materialIds, { message: `At most ${CALC_BOUNDS.materialIds} materials` }),
+  plies: z
+    .array(z.number().int().min(1).max(4))
+    .min(1)
+    .max(CALC_BOUNDS.plies, { message: `At most ${CALC_BOUNDS.plies} ply counts` })
+    .optional(),
   selfWeight: z.boolean().optional(),
   repetitive: z.boolean().optional(),
   wetService: z.boolean().optional(),
@@ -36,10 +52,17 @@ export const spanTableInputSchema = z.object({
   incised: z.boolean().optional(),
   shearAtD: z.boolean().optional(),
   deflectionUse: deflectionUseSchema.optional(),
-  deflectionCapIn: z.number().finite().positive().max(4).optional(),
+  deflectionCapIn: z
+    .number()
+    .finite()
+    .min(0.05, { message: 'The deflection cap must be at least 0.05 in' })
+    .max(4)
+    .optional(),
   sustainedLiveFraction: z.number().finite().min(0).max(1).optional(),
   /** Bearing length at each end, in; default 3. */
   bearingIn: z.number().finite().positive().max(24).optional(),
+  /** Print clear spans (default) or design spans. */
+  spanBasis: spanBasisSchema.optional(),
   supportKind: z.enum(supportKinds).optional(),
   supportWidthIn: z.number().finite().positive().max(12).optional(),
   plateMaterialId: z.string().min(1).optional(),
@@ -49,10 +72,13 @@ export type SpanTableInputBody = z.input<typeof spanTableInputSchema>;
 
 export const spanTableCellSchema = z.object({
   tributaryFt: z.number(),
-  /** Largest design span, ft. */
+  /** Largest design span, ft (support centre to support centre). */
   spanFt: z.number(),
-  /** The span as printed: ft-in, rounded down to the inch. */
+  /** The span as printed, on the table's spanBasis: ft-in, rounded down to the inch. */
   spanText: z.string(),
+  /** The largest span as a clear span (design span less the bearing) and as a design span, ft. */
+  clearSpanFt: z.number().optional(),
+  designSpanFt: z.number().optional(),
   governedBy: checkIdSchema,
   combination: z.string(),
 });
@@ -62,15 +88,18 @@ export const spanTableRowSchema = z.object({
   materialLabel: z.string(),
   sizeId: z.string(),
   sizeLabel: z.string(),
-  cells: z.array(spanTableCellSchema),
+  cells: z.array(spanTableCellSchema).max(CALC_BOUNDS.tributaryWidths),
 });
 
 export const spanTableResultSchema = z.object({
   caution: z.string(),
-  tributaryWidthsFt: z.array(z.number()),
-  rows: z.array(spanTableRowSchema),
-  notes: z.array(z.string()),
-  warnings: z.array(z.string()),
-  sources: z.array(z.string()),
+  /** Which span spanText prints, and the heading that says so. */
+  spanBasis: spanBasisSchema.optional(),
+  spanHeading: z.string().optional(),
+  tributaryWidthsFt: z.array(z.number()).max(CALC_BOUNDS.tributaryWidths),
+  rows: z.array(spanTableRowSchema).max(CALC_BOUNDS.catalogueSizes),
+  notes: z.array(z.string()).max(CALC_BOUNDS.messages),
+  warnings: z.array(z.string()).max(CALC_BOUNDS.catalogueSizes),
+  sources: z.array(z.string()).max(CALC_BOUNDS.messages),
 });
 export type SpanTableResult = z.infer<typeof spanTableResultSchema>;

@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { CAUTION_TEXT, checkMember, listSizes } from '@/lib/calc';
+import { CAUTION_TEXT, checkMember, listMaterials, listSizes } from '@/lib/calc';
+import { CALC_BOUNDS } from '@/shared/schemas/calc/bounds';
 import { apiErrorBodySchema } from '@/shared/errors';
 import { memberCheckInputSchema, memberCheckResultSchema } from '@/shared/schemas/calc/member';
 import type { MemberCheckRequestBody } from '@/shared/schemas/calc/requests';
@@ -175,6 +176,42 @@ describe('bad input answers 400 with field messages', () => {
       { ...spanTableBody, materialIds: ['nope'] },
       'materialId',
     ],
+    [
+      'a roof dead load of 1e300 psf',
+      '/api/calc/check',
+      { ...header, sources: [{ ...roofAndCeiling[0], deadPsf: 1e300 }] },
+      'sources.0.deadPsf',
+    ],
+    [
+      'a point load of 1e300 lb',
+      '/api/calc/check',
+      {
+        ...header,
+        sources: [{ kind: 'point', pointKind: 'post-above', atFt: 3, liveLb: 1e300 }],
+      },
+      'sources.0.liveLb',
+    ],
+    [
+      'a measured ply too thin to check',
+      '/api/calc/check',
+      { ...header, measuredPly: { bIn: 1e-300, dIn: 9.25 } },
+      'measuredPly.bIn',
+    ],
+    ['five ply counts', '/api/calc/shortlist', { ...shortlistBody, plies: [1, 2, 3, 4, 4] }, 'plies'],
+    ['five ply counts', '/api/calc/span-table', { ...spanTableBody, plies: [1, 2, 3, 4, 1] }, 'plies'],
+    [
+      'more work than one request may ask (engine)',
+      '/api/calc/span-table',
+      {
+        ...spanTableBody,
+        plies: undefined,
+        roofLivePsf: 20,
+        roofSnowPsf: 30,
+        tributaryWidthsFt: [2, 4, 6, 8, 10, 12, 14, 16, 18, 20, 22, 24],
+        materialIds: listMaterials().map((m) => m.id),
+      },
+      'materialIds',
+    ],
   ];
 
   it.each(cases)('%s on %s', async (_label, path, body, field) => {
@@ -260,5 +297,39 @@ describe('POST /api/calc/span-table', () => {
         expect(row.cells[i].spanFt).toBeLessThan(row.cells[i - 1].spanFt);
       }
     }
+  });
+});
+
+describe('bounded work (CALC_BOUNDS)', () => {
+  it('tabulates a material named 40 times once, in a small answer', async () => {
+    const res = await contractor
+      .post('/api/calc/span-table')
+      .send({
+        ...spanTableBody,
+        plies: undefined,
+        tributaryWidthsFt: [2, 4, 6, 8, 10, 12, 14, 16, 18, 20, 22, 24],
+        materialIds: Array.from({ length: 40 }, () => DFL2),
+      })
+      .expect(200);
+    const result = spanTableResultSchema.parse(res.body);
+    expect(result.rows.map((r) => r.sizeId)).toEqual(listSizes(DFL2).map((s) => s.id));
+    expect(JSON.stringify(res.body).length).toBeLessThan(200_000);
+  });
+
+  it('names the ceiling in the 400 for a span table past it', async () => {
+    const res = await contractor
+      .post('/api/calc/span-table')
+      .send({
+        ...spanTableBody,
+        plies: undefined,
+        roofLivePsf: 20,
+        roofSnowPsf: 30,
+        tributaryWidthsFt: [2, 4, 6, 8, 10, 12, 14, 16, 18, 20, 22, 24],
+        materialIds: listMaterials().map((m) => m.id),
+      })
+      .expect(400);
+    const message = apiErrorBodySchema.parse(res.body).error.fields?.materialIds?.[0] ?? '';
+    expect(message).toContain(CALC_BOUNDS.spanTableWork.toLocaleString('en-US'));
+    expect(message).toContain('sizes × 12 tributary widths');
   });
 });

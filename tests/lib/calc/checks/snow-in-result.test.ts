@@ -10,7 +10,7 @@ const header = (edition: 'ASCE 7-16' | 'ASCE 7-22') =>
       edition,
       clearSpanFt: 6,
       roofPitchIn12: 6,
-      snow: { groundSnowPsf: 30, riskCategory: 'III' },
+      snow: { groundSnowPsf: 30, riskCategory: 'III', thermalCondition: 'heated-unvented' },
       sources: [{ kind: 'roof', tributaryFt: 14, deadPsf: 15, roofLivePsf: 20 }],
       materialId: 'sawn-douglas-fir-larch-no2',
       sizeId: '2-ply-2x10',
@@ -43,6 +43,32 @@ describe('roof snow shown in the member result with its factors and flags', () =
     expect(groundSnow).toMatchObject({ value: 30, unit: 'psf', flag: 'measured' });
     expect(inputs.find((i) => i.field === 'snow.exposureCe')).toMatchObject({ value: 1, flag: 'default' });
     expect(inputs.find((i) => i.field === 'snow.riskCategory')).toMatchObject({ value: 'III' });
+    expect(inputs.find((i) => i.field === 'snow.thermalCondition')).toMatchObject({
+      value: 'heated-unvented',
+      flag: 'default',
+    });
+    expect(inputs.find((i) => i.field === 'snow.thermalCt')).toMatchObject({ value: 1, flag: 'default' });
+  });
+
+  it('shows the thermal condition and the C_t it gave, default a vented attic (ASCE 7-22: 1.2)', () => {
+    const result = checkMember(
+      memberCheckInputSchema.parse({
+        kind: 'header',
+        edition: 'ASCE 7-22',
+        clearSpanFt: 6,
+        roofPitchIn12: 6,
+        snow: { groundSnowPsf: 30 },
+        sources: [{ kind: 'roof', tributaryFt: 14, deadPsf: 15, roofLivePsf: 20 }],
+        materialId: 'sawn-douglas-fir-larch-no2',
+        sizeId: '2-ply-2x10',
+      }),
+    );
+    // ASCE 7-22 Table 7.3-2, ventilated roof: C_t 1.2 (secondary sources in REFERENCES.md; confirm).
+    expect(result.snow?.thermalCondition).toBe('vented-attic-insulated-ceiling');
+    expect(result.snow?.thermalCtGiven).toBe(false);
+    expectApprox(result.snow?.thermalCt ?? NaN, 1.2, { abs: 1e-12 });
+    expectApprox(result.snow?.factors.find((f) => f.symbol === 'C_t')?.value ?? NaN, 1.2, { abs: 1e-12 });
+    expect(result.inputs.find((i) => i.field === 'snow.thermalCondition')?.flag).toBe('default');
   });
 
   it('has no snow block when the member has no snow inputs', () => {

@@ -68,13 +68,19 @@ describe('buildFramingList', () => {
     expect(top.stock).toEqual({ label: '8 ft', lengthIn: 96, count: 1 });
   });
 
-  it('leaves cripples off above a flat 2x4 header (IRC 2021 R602.7.4)', () => {
+  it('lists cripples at layout above a flat 2x4 header too, noting the code does not require them', () => {
     const list = build({
       ...door,
       jacksPerSide: 0,
       header: { label: '2x4 flat', depthIn: 1.5, plies: 1, flat: true },
     });
-    expect(list.lines.some((l) => l.item.startsWith('Cripples'))).toBe(false);
+    // Common practice: cripples at the 16 in layout over the 38 in header give nailing for the wall finish;
+    // IRC 2021 R602.7.4 requires none above a flat 2x4 header. Gap: 97-1/8 wall − 3 (top plates) − the
+    // header top at 82-1/2 (RO) + 1-1/2 (flat 2x4) above the subfloor.
+    const cripples = line(list, 'Cripples above');
+    expect(cripples.qty).toBe(3);
+    expectApprox(cripples.lengthIn, 97.125 - 3 - (82.5 + 1.5), { abs: 1 / 32 });
+    expect(cripples.note).toContain('not required by code');
     expectApprox(list.headerLengthIn, 38, { abs: 1e-9 });
     expect(list.notes[0]).toContain('R602.7.4');
   });

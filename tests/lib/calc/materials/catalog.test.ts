@@ -10,6 +10,7 @@ import {
   weakestGrade,
 } from '@/lib/calc/materials';
 import { CalcInputError } from '@/lib/calc/types';
+import { unknownGradeMaterial } from '@/lib/calc/checks';
 
 const DFL2 = 'sawn-douglas-fir-larch-no2';
 const SP2 = 'sawn-southern-pine-no2';
@@ -104,7 +105,7 @@ describe('reference values', () => {
   });
 
   it('Table 4A values are the same for every width (C_F applied separately): DF-L No.2 F_b 900, E 1.6e6', () => {
-    for (const size of listSizes(DFL2).filter((s) => !s.nominal.startsWith('6x'))) {
+    for (const size of listSizes(DFL2).filter((s) => s.bIn / s.plies < 5)) {
       expect(referenceValues(DFL2, size)).toMatchObject({ FbPsi: 900, EPsi: 1_600_000, EminPsi: 580_000 });
     }
   });
@@ -128,11 +129,61 @@ describe('weakest grade', () => {
     expect(weakestGrade('spruce-pine-fir').grade).toBe('No.3');
   });
 
-  it('is No.2 for Southern Pine, the weakest grade held here', () => {
-    expect(weakestGrade('southern-pine').grade).toBe('No.2');
+  it('is No.3 for Southern Pine too, now that Table 4B No.3 is held (from memory)', () => {
+    expect(weakestGrade('southern-pine').grade).toBe('No.3');
   });
 
   it('throws a field error for an unknown species', () => {
     expect(() => weakestGrade('balsa')).toThrow(expect.objectContaining({ field: 'species' }));
+  });
+});
+
+describe('catalogue reach', () => {
+  it('offers Spruce-Pine-Fir Select Structural, No.3 and Stud; Southern Pine No.3 and Stud; DF-L and Hem-Fir No.3', () => {
+    const ids = listMaterials('sawn').map((m) => m.id);
+    expect(ids).toEqual(
+      expect.arrayContaining([
+        'sawn-spruce-pine-fir-select-structural',
+        'sawn-spruce-pine-fir-no3',
+        'sawn-spruce-pine-fir-stud',
+        'sawn-southern-pine-no3',
+        'sawn-southern-pine-stud',
+        'sawn-douglas-fir-larch-no3',
+        'sawn-hem-fir-no3',
+      ]),
+    );
+  });
+
+  it('offers 4x14 and 4x16 (NDS Supplement 2018 Table 1B: 3-1/2 × 13-1/4 and 3-1/2 × 15-1/4 in)', () => {
+    expect(getSize(DFL2, '4x14')).toMatchObject({ bIn: 3.5, dIn: 13.25 });
+    expect(getSize(SP2, '4x16')).toMatchObject({ bIn: 3.5, dIn: 15.25 });
+  });
+
+  it('offers timbers to 6x16 and 8x16, Beams and Stringers or Posts and Timbers by Table 4D (from memory)', () => {
+    for (const id of ['6x14', '6x16', '8x8', '8x10', '8x12', '8x14', '8x16'])
+      expect(getSize(DFL2, id).plies).toBe(1);
+    // Beams and Stringers: width more than 2 in (nominal) over the thickness (8x12, 6x16); Posts and Timbers
+    // otherwise (8x8, 8x10). DF-L No.2: B&S F_b 875, P&T F_b 750 (Table 4D, from memory).
+    expect(referenceValues(DFL2, getSize(DFL2, '8x12')).FbPsi).toBe(875);
+    expect(referenceValues(DFL2, getSize(DFL2, '6x16')).FbPsi).toBe(875);
+    expect(referenceValues(DFL2, getSize(DFL2, '8x10')).FbPsi).toBe(750);
+    expect(referenceValues(DFL2, getSize(DFL2, '8x8')).FbPsi).toBe(750);
+  });
+});
+
+describe('unknown grade falls to the true weakest grade for the size', () => {
+  it('is Southern Pine No.3 now that No.3 is held (Table 4B, from memory)', () => {
+    expect(unknownGradeMaterial(SP2, '2x10').grade).toBe('No.3');
+  });
+
+  it('is Stud for a DF-L 2x4 and No.3 for a 2x6 (F_b·C_F: Stud 700 × 1.1 < No.3 525 × 1.5; No.3 525 × 1.3 < Stud 700 × 1.0)', () => {
+    // NDS Supplement 2018 Table 4A values and size factors (No.3 and Stud from memory).
+    expect(unknownGradeMaterial(DFL2, '2x4').grade).toBe('Stud');
+    expect(unknownGradeMaterial(DFL2, '2x6').grade).toBe('No.3');
+    expect(unknownGradeMaterial(DFL2, '2-ply-2x10').grade).toBe('No.3');
+  });
+
+  it('is No.2 for a timber (Table 4D holds Select Structural to No.2 only)', () => {
+    expect(unknownGradeMaterial(DFL2, '6x12').grade).toBe('No.2');
   });
 });

@@ -102,3 +102,12 @@ describe('buildShortlist', () => {
     expect(short.warnings.some((w) => w.includes('fail on bearing alone'))).toBe(true);
   });
 });
+
+describe('bounded work', () => {
+  it('checks a material named twice, and a ply count named twice, once', () => {
+    const once = run({ materialIds: ['lvl-2.0e'], plies: [2] });
+    const twice = run({ materialIds: ['lvl-2.0e', 'lvl-2.0e'], plies: [2, 2] });
+    expect(twice.counts).toEqual(once.counts);
+    expect(twice.passing.map((e) => e.sizeId)).toEqual(once.passing.map((e) => e.sizeId));
+  });
+});
