@@ -20,7 +20,11 @@ export function spanTableCsv(result: SpanTableResult, basis: SpanBasis): string 
   const header = ['Material', 'Size'];
   for (const ft of result.tributaryWidthsFt) {
     const width = widthTitle(ft);
-    header.push(`${name}, tributary ${width} (ft-in)`, `${name}, tributary ${width} (ft)`, `Governs, tributary ${width}`);
+    header.push(
+      `${name}, tributary ${width} (ft-in)`,
+      `${name}, tributary ${width} (ft)`,
+      `Governs, tributary ${width}`,
+    );
   }
   const rows = result.rows.map((row) => [
     row.materialLabel,

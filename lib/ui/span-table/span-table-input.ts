@@ -15,8 +15,7 @@ export type FieldErrors = Partial<Record<keyof SpanTableDraft | '_', string[]>>;
 type Field = keyof FieldErrors;
 
 export type SpanTableRun =
-  | { ok: true; input: SpanTableInput; result: SpanTableResult }
-  | { ok: false; errors: FieldErrors };
+  { ok: true; input: SpanTableInput; result: SpanTableResult } | { ok: false; errors: FieldErrors };
 
 /** How each field is named in a message, and its unit. */
 const FIELDS: Partial<Record<Field, { label: string; unit: string }>> = {
@@ -73,7 +72,10 @@ function inches(errors: FieldErrors, field: Field, text: string): number | undef
  *
  * @example readSpanTableDraft(emptySpanTableDraft()).input.tributaryWidthsFt // [4, 8, 12, 16]
  */
-export function readSpanTableDraft(draft: SpanTableDraft): { input: SpanTableInputBody; errors: FieldErrors } {
+export function readSpanTableDraft(draft: SpanTableDraft): {
+  input: SpanTableInputBody;
+  errors: FieldErrors;
+} {
   const errors: FieldErrors = {};
   const widths = parseWidthList(draft.widths);
   for (const message of widths.errors) add(errors, 'widths', message);

@@ -11,7 +11,9 @@ const psfText = (psf: number | undefined) =>
 function pliesText(plies: readonly number[]): string {
   const sorted = [...plies].sort((a, b) => a - b);
   const list =
-    sorted.length === 1 ? String(sorted[0]) : `${sorted.slice(0, -1).join(', ')} or ${sorted[sorted.length - 1]}`;
+    sorted.length === 1
+      ? String(sorted[0])
+      : `${sorted.slice(0, -1).join(', ')} or ${sorted[sorted.length - 1]}`;
   return `${list} ${sorted.length === 1 && sorted[0] === 1 ? 'ply' : 'plies'}`;
 }
 

@@ -24,10 +24,14 @@ export function parseWidthList(text: string): WidthList {
   const errors: string[] = [];
   pieces.forEach((piece, i) => {
     try {
-      widthsFt.push(parseLength(piece, 'tributaryWidthsFt', { defaultUnit: 'ft', label: `Width ${i + 1}` }) / 12);
+      widthsFt.push(
+        parseLength(piece, 'tributaryWidthsFt', { defaultUnit: 'ft', label: `Width ${i + 1}` }) / 12,
+      );
     } catch (error) {
       if (!(error instanceof CalcInputError)) throw error;
-      errors.push(/\d\s+\d+\s+\d/.test(piece) ? `${error.message}. Separate widths with commas` : error.message);
+      errors.push(
+        /\d\s+\d+\s+\d/.test(piece) ? `${error.message}. Separate widths with commas` : error.message,
+      );
     }
   });
   return { pieces, widthsFt, errors };

@@ -10,7 +10,10 @@ import {
 import { readSpanTableDraft, runSpanTable } from '@/lib/ui/span-table/span-table-input';
 import { spanTableInputSchema } from '@/shared/schemas/calc/span-table';
 
-const draft = (patch: Partial<SpanTableDraft> = {}): SpanTableDraft => ({ ...emptySpanTableDraft(), ...patch });
+const draft = (patch: Partial<SpanTableDraft> = {}): SpanTableDraft => ({
+  ...emptySpanTableDraft(),
+  ...patch,
+});
 
 function errorsOf(patch: Partial<SpanTableDraft>) {
   const run = runSpanTable(draft(patch));
