@@ -22,7 +22,8 @@ ${S} { display: none; }
   ${S} thead { display: table-header-group; }
   ${S} tr { break-inside: avoid; }
   ${S} .spans th, ${S} .spans td { text-align: right; white-space: nowrap; font-variant-numeric: tabular-nums; }
-  ${S} .spans th:first-child, ${S} .spans tbody th { text-align: left; }
+  ${S} .spans { table-layout: fixed; }
+  ${S} .spans th:first-child, ${S} .spans tbody th { text-align: left; width: 22%; white-space: normal; }
   ${S} .assumptions th { text-align: left; width: 28%; }
   ${S} .caution { border-left: 3pt solid ${colors.ink}; padding: 2pt 0 2pt 6pt; margin: 6pt 0; break-inside: avoid; }
 }`;

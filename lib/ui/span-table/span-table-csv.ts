@@ -7,13 +7,19 @@ import { spanBasisName, type SpanBasis } from './span-basis';
 export const widthTitle = (tributaryFt: number) => formatFtIn(tributaryFt * 12);
 
 /**
+ * A printed span with its marks, "12-3" → `12' 3"`: spreadsheets read a bare "3-7" as a date (7 March), so
+ * the CSV carries the marks.
+ */
+export const markedSpan = (spanText: string) => spanText.replace(/^(\d+)-(\d+)$/, `$1' $2"`);
+
+/**
  * The span table as CSV (RFC 4180): one record per size with, for each tributary width, the span as printed
- * (ft-in, rounded down to the inch), the span in decimal feet and the check that governs it in words. The
- * header names which span the numbers are.
+ * (ft-in with its marks, rounded down to the inch), the span in decimal feet and the check that governs it in
+ * words. The header names which span the numbers are.
  *
  * @param result the engine's span table
  * @param basis which span its numbers are
- * @example spanTableCsv(result, 'design').split('\r\n')[0] // 'Material,Size,"Design span at 4\' 0"" (ft-in)",…'
+ * @example spanTableCsv(result, 'design').split('\r\n')[0] // 'Material,Size,"Design span, tributary 4\' 0"" (ft-in)",…'
  */
 export function spanTableCsv(result: SpanTableResult, basis: SpanBasis): string {
   const name = spanBasisName(basis);
@@ -30,7 +36,7 @@ export function spanTableCsv(result: SpanTableResult, basis: SpanBasis): string 
     row.materialLabel,
     row.sizeLabel,
     ...row.cells.flatMap((cell) => [
-      cell.spanText,
+      markedSpan(cell.spanText),
       cell.spanFt.toFixed(3),
       `${GOVERNING_KEYS[cell.governedBy].word} (${cell.combination})`,
     ]),

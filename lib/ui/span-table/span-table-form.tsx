@@ -147,7 +147,7 @@ export function SpanTableForm({ draft, errors, onChange }: FormProps) {
       <Card title="Widths and limits">
         <TextField
           label="Tributary widths"
-          hint={`Feet, separated by commas: 4, 8, 12 or 6' 6", 13-4.`}
+          hint={`In feet, with commas between: 4, 8, 12, 16 or 6' 6", 13' 4"`}
           unit="ft"
           value={draft.widths}
           onChangeText={set('widths')}

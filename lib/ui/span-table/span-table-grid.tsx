@@ -7,14 +7,20 @@ import { spanBasisName, type SpanBasis } from './span-basis';
 import { widthTitle } from './span-table-csv';
 
 const SIZE_WIDTH = 124;
-const CELL_WIDTH = 84;
-const ROW_HEIGHT = 48;
+const CELL_WIDTH = 80;
+const ROW_HEIGHT = 52;
 
 /** "12-3" → "12 ft 3 in", for screen readers. */
 const spoken = (spanText: string) => spanText.replace(/^(\d+)-(\d+)$/, '$1 ft $2 in');
 
+/** "2-ply 1-3/4 x 9-1/2" → ["2-ply", "1-3/4 x 9-1/2"], so a long size breaks between plies and section. */
+function sizeLines(label: string): [string | null, string] {
+  const match = /^(\d+-ply) (.+)$/.exec(label);
+  return match ? [match[1], match[2]] : [null, label];
+}
+
 /**
- * The table: one row per size, one column per tributary width, each span in ft-in with the key of the check
+ * The table: one row per size, one column per tributary width, each span in ft-in over the key of the check
  * that governs it. The size column stays put while the spans scroll sideways on a narrow screen.
  */
 export function SpanTableGrid({ result, basis }: { result: SpanTableResult; basis: SpanBasis }) {
@@ -22,16 +28,24 @@ export function SpanTableGrid({ result, basis }: { result: SpanTableResult; basi
   return (
     <View style={styles.frame} testID="span-table-grid">
       <View style={styles.sizeColumn}>
-        <View style={[styles.cell, styles.head, styles.sizeCell]}>
+        <View style={[styles.cell, styles.head]}>
           <Text variant="label">Size</Text>
         </View>
-        {result.rows.map((row, i) => (
-          <View key={row.sizeId} style={[styles.cell, styles.sizeCell, i % 2 === 1 && styles.striped]}>
-            <Text variant="label" numberOfLines={2}>
-              {row.sizeLabel}
-            </Text>
-          </View>
-        ))}
+        {result.rows.map((row, i) => {
+          const [plies, section] = sizeLines(row.sizeLabel);
+          return (
+            <View key={row.sizeId} style={[styles.cell, i % 2 === 1 && styles.striped]}>
+              {plies ? (
+                <Text variant="caption" tone="muted">
+                  {plies}
+                </Text>
+              ) : null}
+              <Text variant="label" numberOfLines={1}>
+                {section}
+              </Text>
+            </View>
+          );
+        })}
       </View>
       <ScrollView horizontal style={styles.scroll} contentContainerStyle={styles.scrollContent}>
         <View>
@@ -55,10 +69,10 @@ export function SpanTableGrid({ result, basis }: { result: SpanTableResult; basi
                       cell.spanText,
                     )}, ${governs.word.toLowerCase()} governs`}
                   >
-                    <Text variant="bodyStrong" style={styles.span}>
+                    <Text variant="bodyStrong" numberOfLines={1} style={styles.span}>
                       {cell.spanText}
                     </Text>
-                    <Text variant="caption" tone="muted" style={styles.key}>
+                    <Text variant="caption" tone="muted">
                       {governs.key}
                     </Text>
                   </View>
@@ -92,15 +106,7 @@ const styles = StyleSheet.create({
     justifyContent: 'center',
   },
   head: { backgroundColor: colors.surfaceSunken, borderBottomWidth: 2, borderBottomColor: colors.lineStrong },
-  sizeCell: { width: SIZE_WIDTH },
-  spanCell: {
-    width: CELL_WIDTH,
-    flexDirection: 'row',
-    alignItems: 'center',
-    justifyContent: 'flex-end',
-    gap: spacing.xs,
-  },
+  spanCell: { width: CELL_WIDTH, alignItems: 'flex-end' },
   striped: { backgroundColor: colors.paper },
   span: { fontVariant: ['tabular-nums'] },
-  key: { minWidth: 18 },
 });

@@ -21,5 +21,9 @@ describe('navigation by role', () => {
     expect(isNavItemActive(jobs, '/jobs')).toBe(true);
     expect(isNavItemActive(jobs, '/jobs/abc')).toBe(true);
     expect(isNavItemActive(jobs, '/jobsite')).toBe(false);
+    const spanTables = navItemsForRole('contractor')[1];
+    expect(spanTables.href).toBe('/span-tables');
+    expect(isNavItemActive(spanTables, '/span-tables')).toBe(true);
+    expect(isNavItemActive(jobs, '/span-tables')).toBe(false);
   });
 });

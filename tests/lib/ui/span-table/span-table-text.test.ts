@@ -3,7 +3,7 @@ import { buildSpanTable, DEFLECTION_PRESETS } from '@/lib/calc';
 import { GOVERNING_KEYS, legendLines } from '@/lib/ui/span-table/governing-key';
 import { printSheetModel } from '@/lib/ui/span-table/print-sheet-model';
 import { spanBasisHeading, spanBasisName } from '@/lib/ui/span-table/span-basis';
-import { spanTableCsv, widthTitle } from '@/lib/ui/span-table/span-table-csv';
+import { markedSpan, spanTableCsv, widthTitle } from '@/lib/ui/span-table/span-table-csv';
 import { assumptionsOf } from '@/lib/ui/span-table/span-table-summary';
 import { checkIds } from '@/shared/schemas/calc/member';
 import { spanTableInputSchema } from '@/shared/schemas/calc/span-table';
@@ -56,6 +56,12 @@ describe('span basis heading', () => {
 });
 
 describe('span table CSV', () => {
+  it('writes spans with their marks so a spreadsheet does not read 3-7 as a date', () => {
+    expect(markedSpan('3-7')).toBe(`3' 7"`);
+    expect(markedSpan('12-11')).toBe(`12' 11"`);
+    expect(markedSpan('—')).toBe('—');
+  });
+
   const lines = spanTableCsv(result, 'design').split('\r\n');
 
   it('has a header naming the span, the width and the unit of each column, quoted where it holds a "', () => {
@@ -81,7 +87,7 @@ describe('span table CSV', () => {
       expect(fields).toHaveLength(2 + 3 * row.cells.length);
       expect(fields.slice(0, 2)).toEqual([row.materialLabel, row.sizeLabel]);
       row.cells.forEach((cell, j) => {
-        expect(fields[2 + 3 * j]).toBe(cell.spanText);
+        expect(fields[2 + 3 * j]).toBe(markedSpan(cell.spanText));
         expect(Number(fields[3 + 3 * j])).toBe(Number(cell.spanFt.toFixed(3)));
         expect(fields[4 + 3 * j]).toBe(`${GOVERNING_KEYS[cell.governedBy].word} (${cell.combination})`);
       });
