@@ -1,4 +1,5 @@
 import { formatIn } from '@/lib/format';
+import type { SpanTableResult } from '@/shared/schemas/calc/span-table';
 
 /**
  * Which span a table's numbers are: `clear`, between the faces of the supports (what is measured on site),
@@ -6,6 +7,17 @@ import { formatIn } from '@/lib/format';
  * so the two differ by one bearing length (shared/schemas/calc/member.ts).
  */
 export type SpanBasis = 'clear' | 'design';
+
+/**
+ * Which span a result's numbers are: the `spanBasis` the engine states in the result where it states one
+ * (the clear-span engine does); a result without it is from the engine that prints design spans only.
+ *
+ * @example spanBasisOf(result) // 'design' for a result that states no basis
+ */
+export function spanBasisOf(result: SpanTableResult): SpanBasis {
+  const { spanBasis } = result as SpanTableResult & { spanBasis?: unknown };
+  return spanBasis === 'clear' || spanBasis === 'design' ? spanBasis : 'design';
+}
 
 const NAMES: Record<SpanBasis, string> = { clear: 'Clear span', design: 'Design span' };
 

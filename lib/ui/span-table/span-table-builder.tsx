@@ -4,7 +4,7 @@ import { colors, layout, spacing } from '@/lib/theme';
 import { FieldMessages } from '@/lib/ui/field-messages';
 import { Notice } from '@/lib/ui/notice';
 import { Text } from '@/lib/ui/text';
-import type { SpanBasis } from './span-basis';
+import { spanBasisOf } from './span-basis';
 import { emptySpanTableDraft } from './span-table-draft';
 import { SpanTableForm } from './span-table-form';
 import { runSpanTable } from './span-table-input';
@@ -13,12 +13,6 @@ import { SpanTableResultView } from './span-table-result';
 /** Form beside the table from this content width up, px. */
 const TWO_PANE_MIN = 1000;
 const FORM_PANE_WIDTH = 440;
-
-/**
- * The numbers the engine prints today are design spans (shared/schemas/calc/span-table.ts: "Spans are
- * design spans"); the table's head says so.
- */
-const ENGINE_SPAN_BASIS: SpanBasis = 'design';
 
 /**
  * The span table builder: the person's loads, material and widths, and the table the engine solves for them
@@ -44,7 +38,7 @@ export function SpanTableBuilder() {
   );
   const form = <SpanTableForm draft={draft} errors={errors} onChange={setDraft} />;
   const table = run.ok ? (
-    <SpanTableResultView input={run.input} result={run.result} basis={ENGINE_SPAN_BASIS} />
+    <SpanTableResultView input={run.input} result={run.result} basis={spanBasisOf(run.result)} />
   ) : (
     <Notice tone="error" title="No table yet" testID="span-table-blocked">
       <Text>Nothing was computed: fix the fields marked in the form.</Text>

@@ -14,8 +14,9 @@ export const markedSpan = (spanText: string) => spanText.replace(/^(\d+)-(\d+)$/
 
 /**
  * The span table as CSV (RFC 4180): one record per size with, for each tributary width, the span as printed
- * (ft-in with its marks, rounded down to the inch), the span in decimal feet and the check that governs it in
- * words. The header names which span the numbers are.
+ * (ft-in with its marks, rounded down to the inch, on the table's basis), the design span in decimal feet
+ * (the engine's spanFt, support centre to centre whatever the basis) and the check that governs it in words.
+ * The header names which span each column is.
  *
  * @param result the engine's span table
  * @param basis which span its numbers are
@@ -28,7 +29,7 @@ export function spanTableCsv(result: SpanTableResult, basis: SpanBasis): string 
     const width = widthTitle(ft);
     header.push(
       `${name}, tributary ${width} (ft-in)`,
-      `${name}, tributary ${width} (ft)`,
+      `Design span, tributary ${width} (ft)`,
       `Governs, tributary ${width}`,
     );
   }

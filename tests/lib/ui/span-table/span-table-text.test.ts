@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { buildSpanTable, DEFLECTION_PRESETS } from '@/lib/calc';
 import { GOVERNING_KEYS, legendLines } from '@/lib/ui/span-table/governing-key';
 import { printSheetModel } from '@/lib/ui/span-table/print-sheet-model';
-import { spanBasisHeading, spanBasisName } from '@/lib/ui/span-table/span-basis';
+import { spanBasisHeading, spanBasisName, spanBasisOf } from '@/lib/ui/span-table/span-basis';
 import { markedSpan, spanTableCsv, widthTitle } from '@/lib/ui/span-table/span-table-csv';
 import { assumptionsOf } from '@/lib/ui/span-table/span-table-summary';
 import { checkIds } from '@/shared/schemas/calc/member';
@@ -53,6 +53,13 @@ describe('span basis heading', () => {
     expect(text).toMatch(/design span, support centre to centre, is 4-1\/2" longer/);
     expect(spanBasisName('clear')).toBe('Clear span');
   });
+
+  it('takes the basis the result states, and design spans from a result that states none', () => {
+    const stated = (spanBasis: unknown) => Object.assign({}, result, { spanBasis });
+    expect(spanBasisOf(stated('clear'))).toBe('clear');
+    expect(spanBasisOf(stated('design'))).toBe('design');
+    expect(spanBasisOf(stated(undefined))).toBe('design');
+  });
 });
 
 describe('span table CSV', () => {
@@ -77,6 +84,15 @@ describe('span table CSV', () => {
         `"Governs, tributary 6' 6"""`,
       ].join(','),
     );
+  });
+
+  it('names the printed spans by the table’s basis and the decimal feet always as design spans', () => {
+    const [header] = readCsv(spanTableCsv(result, 'clear'));
+    expect(header.slice(2, 5)).toEqual([
+      `Clear span, tributary 4' 0" (ft-in)`,
+      `Design span, tributary 4' 0" (ft)`,
+      `Governs, tributary 4' 0"`,
+    ]);
   });
 
   it('has one record per size with each cell’s printed span, its decimal feet and what governs', () => {
