@@ -2,20 +2,21 @@ import type { Role } from '@/shared/schemas/auth';
 import type { IconName } from './icon';
 
 export type NavItem = {
-  href: '/jobs' | '/members' | '/requests' | '/account';
+  href: '/jobs' | '/span-tables' | '/members' | '/requests' | '/account';
   label: string;
   icon: IconName;
 };
 
 const jobs: NavItem = { href: '/jobs', label: 'Jobs', icon: 'jobs' };
+const spanTables: NavItem = { href: '/span-tables', label: 'Span tables', icon: 'spanTable' };
 const members: NavItem = { href: '/members', label: 'Members', icon: 'members' };
 const requests: NavItem = { href: '/requests', label: 'Requests', icon: 'requests' };
 const account: NavItem = { href: '/account', label: 'Account', icon: 'account' };
 
 const byRole: Record<Role, NavItem[]> = {
-  owner: [jobs, members, account],
-  contractor: [jobs, account],
-  estimator: [jobs, account],
+  owner: [jobs, spanTables, members, account],
+  contractor: [jobs, spanTables, account],
+  estimator: [jobs, spanTables, account],
   engineer: [requests, account],
 };
 

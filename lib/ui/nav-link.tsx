@@ -16,7 +16,7 @@ export function NavLink({ item, active, placement }: NavLinkProps) {
       <Pressable
         aria-current={active ? 'page' : undefined}
         aria-label={item.label}
-        testID={`nav-${item.label.toLowerCase()}`}
+        testID={`nav-${item.label.toLowerCase().replaceAll(' ', '-')}`}
         // Flat style object: expo-router Link asChild merges the child style by object spread.
         style={StyleSheet.flatten([side ? styles.side : styles.tab, active && side && styles.sideActive])}
       >

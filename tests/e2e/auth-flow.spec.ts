@@ -66,23 +66,23 @@ describe('demo roles see only what their role may see (phone)', () => {
   const cases = [
     {
       email: 'owner@demo.tributary.test',
-      visible: ['nav-jobs', 'nav-members', 'nav-account'],
+      visible: ['nav-jobs', 'nav-span-tables', 'nav-members', 'nav-account'],
       hidden: ['nav-requests'],
     },
     {
       email: 'contractor@demo.tributary.test',
-      visible: ['nav-jobs', 'nav-account'],
+      visible: ['nav-jobs', 'nav-span-tables', 'nav-account'],
       hidden: ['nav-members', 'nav-requests'],
     },
     {
       email: 'estimator@demo.tributary.test',
-      visible: ['nav-jobs', 'nav-account'],
+      visible: ['nav-jobs', 'nav-span-tables', 'nav-account'],
       hidden: ['nav-members', 'nav-requests'],
     },
     {
       email: 'engineer@demo.tributary.test',
       visible: ['nav-requests', 'nav-account'],
-      hidden: ['nav-jobs', 'nav-members'],
+      hidden: ['nav-jobs', 'nav-span-tables', 'nav-members'],
     },
   ];
   for (const role of cases) {

@@ -5,9 +5,9 @@ const labels = (role: Parameters<typeof navItemsForRole>[0]) => navItemsForRole(
 
 describe('navigation by role', () => {
   it('gives each role its tabs', () => {
-    expect(labels('owner')).toEqual(['Jobs', 'Members', 'Account']);
-    expect(labels('contractor')).toEqual(['Jobs', 'Account']);
-    expect(labels('estimator')).toEqual(['Jobs', 'Account']);
+    expect(labels('owner')).toEqual(['Jobs', 'Span tables', 'Members', 'Account']);
+    expect(labels('contractor')).toEqual(['Jobs', 'Span tables', 'Account']);
+    expect(labels('estimator')).toEqual(['Jobs', 'Span tables', 'Account']);
     expect(labels('engineer')).toEqual(['Requests', 'Account']);
   });
 
@@ -21,5 +21,9 @@ describe('navigation by role', () => {
     expect(isNavItemActive(jobs, '/jobs')).toBe(true);
     expect(isNavItemActive(jobs, '/jobs/abc')).toBe(true);
     expect(isNavItemActive(jobs, '/jobsite')).toBe(false);
+    const spanTables = navItemsForRole('contractor')[1];
+    expect(spanTables.href).toBe('/span-tables');
+    expect(isNavItemActive(spanTables, '/span-tables')).toBe(true);
+    expect(isNavItemActive(jobs, '/span-tables')).toBe(false);
   });
 });

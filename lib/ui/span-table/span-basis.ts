@@ -1,0 +1,45 @@
+import { formatIn } from '@/lib/format';
+import type { SpanTableResult } from '@/shared/schemas/calc/span-table';
+
+/**
+ * Which span a table's numbers are: `clear`, between the faces of the supports (what is measured on site),
+ * or `design`, support centre to support centre. Design span = clear span + half the bearing at each end,
+ * so the two differ by one bearing length (shared/schemas/calc/member.ts).
+ */
+export type SpanBasis = 'clear' | 'design';
+
+/**
+ * Which span a result's numbers are: the `spanBasis` the engine states in the result where it states one
+ * (the clear-span engine does); a result without it is from the engine that prints design spans only.
+ *
+ * @example spanBasisOf(result) // 'design' for a result that states no basis
+ */
+export function spanBasisOf(result: SpanTableResult): SpanBasis {
+  const { spanBasis } = result as SpanTableResult & { spanBasis?: unknown };
+  return spanBasis === 'clear' || spanBasis === 'design' ? spanBasis : 'design';
+}
+
+const NAMES: Record<SpanBasis, string> = { clear: 'Clear span', design: 'Design span' };
+
+/** "Clear span" or "Design span". */
+export function spanBasisName(basis: SpanBasis): string {
+  return NAMES[basis];
+}
+
+/**
+ * The sentence at the head of a span table saying which span each number is, how it is printed, and how
+ * to get the other span from it.
+ *
+ * @param basis which span the numbers are
+ * @param bearingIn bearing length at each end, in
+ * @example spanBasisHeading('design', 3) // 'Each number is the largest design span …'
+ */
+export function spanBasisHeading(basis: SpanBasis, bearingIn: number): string {
+  const bearing = formatIn(bearingIn);
+  const printed = 'in feet-inches (12-3 is 12 ft 3 in), rounded down to the inch';
+  return basis === 'clear'
+    ? `Each number is the largest clear span, between the faces of the supports (what you measure on site), ` +
+        `with ${bearing} of bearing at each end, ${printed}. The design span, support centre to centre, is ${bearing} longer.`
+    : `Each number is the largest design span, support centre to support centre, ${printed}. ` +
+        `The clear span between the supports (what you measure on site) is ${bearing} shorter: half the ${bearing} bearing at each end.`;
+}
