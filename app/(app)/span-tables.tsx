@@ -1,5 +1,9 @@
-import { SpanTableBuilder } from '@/lib/ui/span-table/span-table-builder';
+import { LazySpanTableBuilder, WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
 
 export default function SpanTablesPage() {
-  return <SpanTableBuilder />;
+  return (
+    <WorkspaceSuspense>
+      <LazySpanTableBuilder />
+    </WorkspaceSuspense>
+  );
 }

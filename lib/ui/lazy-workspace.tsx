@@ -10,3 +10,8 @@ export const LazyMemberEditor = lazy(() => loadWorkspace().then((m) => ({ defaul
 export function WorkspaceSuspense({ children }: { children: ReactNode }) {
   return <Suspense fallback={<LoadingView />}>{children}</Suspense>;
 }
+
+/** The span table builder, loaded with the engine when the span tables screen first opens. */
+export const LazySpanTableBuilder = lazy(() =>
+  loadWorkspace().then((m) => ({ default: m.SpanTableBuilder })),
+);

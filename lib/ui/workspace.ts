@@ -4,3 +4,4 @@
  * with the screens that use it and never with the sign-in screen.
  */
 export { MemberEditor } from './member/member-editor';
+export { SpanTableBuilder } from './span-table/span-table-builder';

@@ -1,22 +1,17 @@
 import { formatIn } from '@/lib/format';
-import type { SpanTableResult } from '@/shared/schemas/calc/span-table';
+import type { SpanBasis, SpanTableResult } from '@/shared/schemas/calc/span-table';
+
+export type { SpanBasis };
 
 /**
- * Which span a table's numbers are: `clear`, between the faces of the supports (what is measured on site),
- * or `design`, support centre to support centre. Design span = clear span + half the bearing at each end,
- * so the two differ by one bearing length (shared/schemas/calc/member.ts).
- */
-export type SpanBasis = 'clear' | 'design';
-
-/**
- * Which span a result's numbers are: the `spanBasis` the engine states in the result where it states one
- * (the clear-span engine does); a result without it is from the engine that prints design spans only.
+ * Which span a result's numbers are: `clear`, between the faces of the supports (what is measured on site),
+ * or `design`, support centre to support centre (design span = clear span + half the bearing at each end).
+ * The engine states it; its default is the clear span.
  *
- * @example spanBasisOf(result) // 'design' for a result that states no basis
+ * @example spanBasisOf(result) // 'clear' unless design spans were asked for
  */
 export function spanBasisOf(result: SpanTableResult): SpanBasis {
-  const { spanBasis } = result as SpanTableResult & { spanBasis?: unknown };
-  return spanBasis === 'clear' || spanBasis === 'design' ? spanBasis : 'design';
+  return result.spanBasis ?? 'clear';
 }
 
 const NAMES: Record<SpanBasis, string> = { clear: 'Clear span', design: 'Design span' };

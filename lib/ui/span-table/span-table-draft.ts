@@ -19,6 +19,8 @@ export type SpanTableDraft = {
   widths: string;
   plies: number[];
   selfWeight: boolean;
+  /** Print design spans (support centre to support centre) instead of clear spans. */
+  designSpans: boolean;
 };
 
 /** The ply counts a material comes in, fewest first (glulam: one). */
@@ -54,6 +56,7 @@ export function emptySpanTableDraft(): SpanTableDraft {
     widths: '4, 8, 12, 16',
     plies: plyCounts(materialId).filter((p) => p <= 3),
     selfWeight: true,
+    designSpans: false,
   };
 }
 

@@ -91,6 +91,13 @@ export function SpanTableForm({ draft, errors, onChange }: FormProps) {
           onChange={set('selfWeight')}
           testID="span-self-weight"
         />
+        <CheckRow
+          label="Print design spans instead"
+          hint="Support centre to support centre. Off: clear spans between the supports, as measured on site."
+          value={draft.designSpans}
+          onChange={set('designSpans')}
+          testID="span-design-spans"
+        />
       </Card>
       <Card title="Loads per square foot">
         <Text variant="caption" tone="muted">

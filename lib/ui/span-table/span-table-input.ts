@@ -40,6 +40,7 @@ const INPUT_TO_DRAFT: Record<string, Field> = {
   plies: 'plies',
   deflectionUse: 'deflectionUse',
   bearingIn: 'bearing',
+  spanBasis: 'designSpans',
 };
 
 const capitalize = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
@@ -91,6 +92,7 @@ export function readSpanTableDraft(draft: SpanTableDraft): {
     selfWeight: draft.selfWeight,
     deflectionUse: draft.deflectionUse,
     bearingIn: inches(errors, 'bearing', draft.bearing),
+    spanBasis: draft.designSpans ? 'design' : undefined,
   };
   return { input, errors };
 }

@@ -7,8 +7,11 @@ import {
   withMaterial,
   type SpanTableDraft,
 } from '@/lib/ui/span-table/span-table-draft';
+import { spanBasisOf } from '@/lib/ui/span-table/span-basis';
 import { readSpanTableDraft, runSpanTable } from '@/lib/ui/span-table/span-table-input';
 import { spanTableInputSchema } from '@/shared/schemas/calc/span-table';
+import { expectApprox } from '@/tests/helpers/approx';
+import { formatSpanFtIn } from '@/lib/format';
 
 const draft = (patch: Partial<SpanTableDraft> = {}): SpanTableDraft => ({
   ...emptySpanTableDraft(),
@@ -62,6 +65,20 @@ describe('readSpanTableDraft', () => {
 });
 
 describe('runSpanTable', () => {
+  it('prints clear spans by default and design spans when asked, a bearing length apart', () => {
+    const clear = runSpanTable(draft());
+    const design = runSpanTable(draft({ designSpans: true }));
+    expect(clear.ok && spanBasisOf(clear.result)).toBe('clear');
+    expect(design.ok && spanBasisOf(design.result)).toBe('design');
+    if (!clear.ok || !design.ok) return;
+    const [c, d] = [clear.result.rows[0].cells[0], design.result.rows[0].cells[0]];
+    // The same largest span either way; design span = clear span + half the 3 in bearing at each end.
+    expectApprox(d.spanFt, c.spanFt, { abs: 1e-9 });
+    expectApprox((c.designSpanFt ?? NaN) - (c.clearSpanFt ?? NaN), 3 / 12, { abs: 1e-9 });
+    expect(c.spanText).toBe(formatSpanFtIn((c.clearSpanFt ?? NaN) * 12));
+    expect(d.spanText).toBe(formatSpanFtIn(d.spanFt * 12));
+  });
+
   it('builds the same table as the engine on the schema-parsed input (the server’s path)', () => {
     const run = runSpanTable(draft());
     expect(run.ok).toBe(true);

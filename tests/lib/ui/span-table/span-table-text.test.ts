@@ -54,11 +54,11 @@ describe('span basis heading', () => {
     expect(spanBasisName('clear')).toBe('Clear span');
   });
 
-  it('takes the basis the result states, and design spans from a result that states none', () => {
-    const stated = (spanBasis: unknown) => Object.assign({}, result, { spanBasis });
+  it('takes the basis the result states, and the engine default (clear spans) from one that states none', () => {
+    const stated = (spanBasis: 'clear' | 'design' | undefined) => ({ ...result, spanBasis });
     expect(spanBasisOf(stated('clear'))).toBe('clear');
     expect(spanBasisOf(stated('design'))).toBe('design');
-    expect(spanBasisOf(stated(undefined))).toBe('design');
+    expect(spanBasisOf(stated(undefined))).toBe('clear');
   });
 });
 
