@@ -11,6 +11,11 @@ import { MeasureField } from './measure-field';
 const mountChoices = [
   { value: 'dropped' as MountKind, label: 'Dropped', description: 'Below the joists: check the headroom' },
   { value: 'flush' as MountKind, label: 'Flush', description: 'In the joist depth: a hanger on every joist' },
+  {
+    value: 'raised' as MountKind,
+    label: 'Raised into the attic',
+    description: 'Above the ceiling: each ceiling joist hung from it by a hanger or strap',
+  },
 ];
 const supportChoices = [
   { value: 'jacks' as SupportKind, label: 'Jack studs on a plate' },
@@ -26,6 +31,7 @@ export function ConditionsCard({ form, errors }: { form: MemberDraftState; error
       | 'deflectionCap'
       | 'joistDepth'
       | 'underJoistsHeight'
+      | 'atticClearance'
       | 'supportWidth'
       | 'temperature',
   ) => ({
@@ -77,7 +83,30 @@ export function ConditionsCard({ form, errors }: { form: MemberDraftState; error
         onChange={set('mount')}
         testID="mount"
       />
-      {draft.mount === 'flush' ? (
+      {draft.mount === 'raised' ? (
+        <>
+          <MeasureField
+            label="Ceiling joist depth"
+            unit="in"
+            value={draft.joistDepth}
+            onChangeText={set('joistDepth')}
+            errors={errors.joistDepth}
+            testID="joist-depth"
+            {...flagProps('joistDepth')}
+          />
+          <MeasureField
+            label="Attic clearance (optional)"
+            hint="From the ceiling line up to the underside of the roof framing where the member goes."
+            unit="in"
+            tape
+            value={draft.atticClearance}
+            onChangeText={set('atticClearance')}
+            errors={errors.atticClearance}
+            testID="attic-clearance"
+            {...flagProps('atticClearance')}
+          />
+        </>
+      ) : draft.mount === 'flush' ? (
         <MeasureField
           label="Joist depth"
           hint="The deepest a flush member may be."

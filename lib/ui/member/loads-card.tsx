@@ -7,7 +7,9 @@ import { ChoiceGroup } from '@/lib/ui/choice-group';
 import { FieldMessages } from '@/lib/ui/field-messages';
 import { Text } from '@/lib/ui/text';
 import type { MemberDraftState } from '@/lib/hooks/use-member-draft';
+import { roofThermalConditions, type RoofThermalCondition } from '@/shared/schemas/calc/loads';
 import { loadStandardEditions, type Job, type LoadStandard } from '@/shared/schemas/jobs';
+import { PickerField } from '@/lib/ui/picker-field';
 import type { FieldErrors } from './member-input';
 import { MeasureField } from './measure-field';
 import { SourceCard } from './source-card';
@@ -17,6 +19,23 @@ import { WhatsAboveCard } from './whats-above-card';
 const addable: SourceKind[] = ['roof', 'ceiling', 'floor', 'wall-above', 'point'];
 
 type EditionChoice = 'job' | LoadStandard;
+
+const thermalLabels: Record<RoofThermalCondition, { label: string; description: string }> = {
+  'vented-attic-insulated-ceiling': {
+    label: 'Vented attic over an insulated ceiling',
+    description: 'The usual house: more than R-25 in the ceiling',
+  },
+  'vented-attic-little-insulation': {
+    label: 'Vented attic, little ceiling insulation',
+    description: 'R-25 or less between the attic and the rooms',
+  },
+  'heated-unvented': {
+    label: 'Heated, roof not vented',
+    description: 'Cathedral ceiling or insulation at the roof deck',
+  },
+  unheated: { label: 'Unheated building', description: 'Detached garage, shed, open porch roof' },
+};
+const thermalChoices = roofThermalConditions.map((value) => ({ value, ...thermalLabels[value] }));
 
 /** The job's load context (shown, overridable here) and the member's load sources. */
 export function LoadsCard({ form, errors, job }: { form: MemberDraftState; errors: FieldErrors; job: Job }) {
@@ -66,6 +85,14 @@ export function LoadsCard({ form, errors, job }: { form: MemberDraftState; error
           />
         </View>
       </View>
+      <PickerField
+        label="Roof's thermal condition (for the snow load)"
+        hint="Sets the thermal factor C_t (ASCE 7 Table 7.3-2); the result shows the value used."
+        choices={thermalChoices}
+        value={draft.thermal}
+        onChange={set('thermal')}
+        testID="roof-thermal"
+      />
       <Text variant="label">Load sources</Text>
       {above ? (
         <WhatsAboveCard job={job} onAdd={form.addSources} onClose={() => setAbove(false)} />

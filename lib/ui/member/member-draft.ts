@@ -1,10 +1,11 @@
+import type { RoofThermalCondition } from '@/shared/schemas/calc/loads';
 import type { DeflectionUse } from '@/shared/schemas/calc/member';
 import type { LoadStandard } from '@/shared/schemas/jobs';
 import type { Job } from '@/shared/schemas/jobs';
 import type { InputFlag, SourceDraft } from './source-draft';
 
 export type MemberKind = 'header' | 'beam';
-export type MountKind = 'dropped' | 'flush';
+export type MountKind = 'dropped' | 'flush' | 'raised';
 export type SupportKind = 'jacks' | 'post';
 /** What the clear span was measured between: the framing, or the finished wall faces. */
 export type MeasuredTo = 'framing' | 'drywall' | 'plaster';
@@ -25,6 +26,8 @@ export type MemberDraft = {
   edition: LoadStandard | null;
   /** Ground snow, psf; prefilled from the job. */
   groundSnow: string;
+  /** The roof's thermal condition for C_t (ASCE 7 Table 7.3-2). */
+  thermal: RoofThermalCondition;
   roofPitch: string;
   sources: SourceDraft[];
   selfWeight: boolean;
@@ -40,6 +43,8 @@ export type MemberDraft = {
   mount: MountKind;
   joistDepth: string;
   underJoistsHeight: string;
+  /** Raised: clear height in the attic from the ceiling line to the roof framing. */
+  atticClearance: string;
   supportKind: SupportKind;
   supportWidth: string;
   plateMaterialId: string;
@@ -61,6 +66,7 @@ export const flaggedFields = {
   deflectionCap: 'deflectionCapIn',
   joistDepth: 'joistDepthIn',
   underJoistsHeight: 'underJoistsHeightIn',
+  atticClearance: 'atticClearanceIn',
   supportWidth: 'supportWidthIn',
 } as const;
 export type FlaggedField = keyof typeof flaggedFields;
@@ -72,6 +78,7 @@ const tapeFields: ReadonlySet<FlaggedField> = new Set([
   'bearingRight',
   'joistDepth',
   'underJoistsHeight',
+  'atticClearance',
   'supportWidth',
   'unbracedLength',
 ]);
@@ -99,6 +106,7 @@ export function emptyMemberDraft(kind: MemberKind, job: Job): MemberDraft {
     bearingRight: '3',
     edition: null,
     groundSnow: String(job.groundSnowPsf),
+    thermal: 'vented-attic-insulated-ceiling',
     roofPitch: String(job.roofPitchIn12),
     sources: [],
     selfWeight: true,
@@ -114,6 +122,7 @@ export function emptyMemberDraft(kind: MemberKind, job: Job): MemberDraft {
     mount: 'dropped',
     joistDepth: '',
     underJoistsHeight: '',
+    atticClearance: '',
     supportKind: 'jacks',
     supportWidth: '3-1/2',
     plateMaterialId: 'sawn-spruce-pine-fir-no1-no2',

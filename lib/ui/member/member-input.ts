@@ -158,7 +158,10 @@ export function readMemberDraft(draft: MemberDraft, job: Job): DraftReading {
     bearingLeftIn: r.inches('bearingLeft', draft.bearingLeft, 'left bearing length'),
     bearingRightIn: r.inches('bearingRight', draft.bearingRight, 'right bearing length'),
     roofPitchIn12: r.number('roofPitch', draft.roofPitch, 'roof slope'),
-    snow: groundSnowPsf > 0 ? { groundSnowPsf, roofType: job.roofType } : undefined,
+    snow:
+      groundSnowPsf > 0
+        ? { groundSnowPsf, roofType: job.roofType, thermalCondition: draft.thermal }
+        : undefined,
     sources,
     selfWeight: draft.selfWeight,
     materialId: draft.materialId,
@@ -173,6 +176,10 @@ export function readMemberDraft(draft: MemberDraft, job: Job): DraftReading {
     deflectionCapIn: r.inches('deflectionCap', draft.deflectionCap, 'deflection cap'),
     mount: draft.mount,
     joistDepthIn: r.inches('joistDepth', draft.joistDepth, 'joist depth', draft.mount === 'flush'),
+    atticClearanceIn:
+      draft.mount === 'raised'
+        ? r.inches('atticClearance', draft.atticClearance, 'attic clearance')
+        : undefined,
     underJoistsHeightIn: r.inches('underJoistsHeight', draft.underJoistsHeight, 'height to the joists'),
     supportKind: draft.supportKind,
     supportWidthIn,
@@ -201,6 +208,7 @@ const inputToDraft: Record<string, string> = {
   deflectionCapIn: 'deflectionCap',
   joistDepthIn: 'joistDepth',
   underJoistsHeightIn: 'underJoistsHeight',
+  atticClearanceIn: 'atticClearance',
   supportWidthIn: 'supportWidth',
   'posts.heightFt': 'posts.height',
 };

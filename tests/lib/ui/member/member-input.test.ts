@@ -44,7 +44,11 @@ describe('readMemberDraft', () => {
     expect(errors).toEqual({});
     expectApprox(input.clearSpanFt, 162.375 / 12, { abs: 1e-12 });
     expect(input.edition).toBe('ASCE 7-22');
-    expect(input.snow).toEqual({ groundSnowPsf: 30, roofType: 'gable' });
+    expect(input.snow).toEqual({
+      groundSnowPsf: 30,
+      roofType: 'gable',
+      thermalCondition: 'vented-attic-insulated-ceiling',
+    });
     expect(memberCheckInputSchema.safeParse(input).success).toBe(true);
     const roof = input.sources[0];
     expect(roof.kind === 'roof' && roof.tributaryFt).toBe(6.5);
