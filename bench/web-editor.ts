@@ -45,7 +45,7 @@ export async function editorColdMs(baseUrl: string): Promise<number> {
 
 /**
  * Keystroke to result in the editor with the CPU slowed `cpuRate`×: a beam with roof, ceiling, floor and a
- * point load; each key changes the clear span, and the time runs from the key's keydown to the frame after
+ * point load; each key types over the span's last digit (12, 13, 14 … ft), and the time runs from the key's keydown to the frame after
  * the bending row shows the new numbers (check and diagrams re-rendered). Returns each key's time, ms.
  */
 export async function keystrokeToResultMs(baseUrl: string, keys: number, cpuRate: number): Promise<number[]> {
@@ -71,7 +71,9 @@ export async function keystrokeToResultMs(baseUrl: string, keys: number, cpuRate
     await page.keyboard.press('End');
     const times: number[] = [];
     for (let i = 0; i < keys; i++) {
-      const key = i % 2 === 0 ? 'Backspace' : String(2 + ((i >> 1) % 7));
+      // Select the span's last digit and type over it: 12 ft → 13 ft → 14 ft …, one key, always a valid span.
+      await page.keyboard.press('Shift+ArrowLeft');
+      const key = String(3 + (i % 6));
       await page.evaluate(() => {
         const row = document.querySelector('[data-testid="check-bending"]');
         const w = window as unknown as { __done?: Promise<number> };

@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { draftStorage } from '@/lib/api/draft-storage';
 import {
   flagAfterEdit,
@@ -52,37 +52,43 @@ export function useMemberDraft(initial: MemberDraft, storageKey: string) {
     [update],
   );
 
-  return {
-    draft,
-    restored: state.restored,
-    set,
-    setFlag: (field: FlaggedField, flag: InputFlag) =>
-      update((d) => ({ ...d, flags: { ...d.flags, [field]: flag } })),
-    setSource: (index: number, patch: Partial<SourceDraft>) =>
-      update((d) => ({
-        ...d,
-        sources: d.sources.map((s, i) =>
-          i === index
-            ? { ...s, ...patch, flag: patch.flag ?? (s.flag === 'default' ? 'assumed' : s.flag) }
-            : s,
-        ),
-      })),
-    addSource: (kind: SourceKind) => update((d) => ({ ...d, sources: [...d.sources, newSource(kind)] })),
-    addSources: (sources: SourceDraft[]) => update((d) => ({ ...d, sources: [...d.sources, ...sources] })),
-    removeSource: (index: number) =>
-      update((d) => ({ ...d, sources: d.sources.filter((_, i) => i !== index) })),
-    moveSource: (index: number, step: -1 | 1) =>
-      update((d) => ({ ...d, sources: moveSource(d.sources, index, step) })),
-    /** Forget the device copy (after a save, or when the person discards it). */
-    forget: useCallback(
-      (replacement?: MemberDraft) => {
-        draftStorage.remove(storageKey);
-        touched.current = false;
-        setState((s) => ({ draft: replacement ?? s.draft, restored: false }));
-      },
-      [storageKey],
-    ),
-  };
+  const forget = useCallback(
+    (replacement?: MemberDraft) => {
+      draftStorage.remove(storageKey);
+      touched.current = false;
+      setState((s) => ({ draft: replacement ?? s.draft, restored: false }));
+    },
+    [storageKey],
+  );
+
+  // One object of actions for the life of the form, so memoised cards can compare them by identity.
+  const actions = useMemo(
+    () => ({
+      set,
+      setFlag: (field: FlaggedField, flag: InputFlag) =>
+        update((d) => ({ ...d, flags: { ...d.flags, [field]: flag } })),
+      setSource: (index: number, patch: Partial<SourceDraft>) =>
+        update((d) => ({
+          ...d,
+          sources: d.sources.map((s, i) =>
+            i === index
+              ? { ...s, ...patch, flag: patch.flag ?? (s.flag === 'default' ? 'assumed' : s.flag) }
+              : s,
+          ),
+        })),
+      addSource: (kind: SourceKind) => update((d) => ({ ...d, sources: [...d.sources, newSource(kind)] })),
+      addSources: (sources: SourceDraft[]) => update((d) => ({ ...d, sources: [...d.sources, ...sources] })),
+      removeSource: (index: number) =>
+        update((d) => ({ ...d, sources: d.sources.filter((_, i) => i !== index) })),
+      moveSource: (index: number, step: -1 | 1) =>
+        update((d) => ({ ...d, sources: moveSource(d.sources, index, step) })),
+      /** Forget the device copy (after a save, or when the person discards it). */
+      forget,
+    }),
+    [set, update, forget],
+  );
+
+  return { draft, restored: state.restored, ...actions };
 }
 
 export type MemberDraftState = ReturnType<typeof useMemberDraft>;

@@ -53,6 +53,7 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         await page.waitForURL(/\/members\/[^/]+$/);
         await page.getByTestId('save-status').getByText('Saved').waitFor();
 
+        await page.getByTestId('find-sizes').click();
         await page.getByTestId('filter-depth').fill('11-7/8');
         const choose = page.locator('[data-testid^="choose-"]').first();
         await choose.waitFor();
@@ -63,6 +64,7 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
 
         await page.reload();
         await page.getByTestId('check-table').waitFor();
+        await page.getByTestId('find-sizes').click();
         await page.getByTestId(`choose-${chosenId}`).getByText('Chosen').waitFor();
         expect(await page.getByTestId('source-3-at').inputValue()).toBe(`5' 0"`);
         await page.getByTestId('member-diagrams').waitFor();

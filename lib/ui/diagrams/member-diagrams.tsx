@@ -1,4 +1,4 @@
-import { useState, type ReactNode } from 'react';
+import { memo, useState, type ReactNode } from 'react';
 import { StyleSheet, View, type LayoutChangeEvent } from 'react-native';
 import { spacing } from '@/lib/theme';
 import type { MemberCheckResult } from '@/shared/schemas/calc/member';
@@ -31,7 +31,7 @@ function Section({ title, note, children }: { title: string; note: string; child
  * The four diagrams of a member check, one under the other on one span scale: the loaded member, shear,
  * bending moment and deflection. Measures its own width.
  */
-export function MemberDiagrams({ result, testID }: MemberDiagramsProps) {
+function MemberDiagramsView({ result, testID }: MemberDiagramsProps) {
   const [width, setWidth] = useState(0);
   const onLayout = (e: LayoutChangeEvent) => {
     const next = Math.floor(e.nativeEvent.layout.width);
@@ -75,3 +75,6 @@ const styles = StyleSheet.create({
   stack: { alignSelf: 'stretch', gap: spacing.xl },
   section: { gap: spacing.xs },
 });
+
+/** The four diagrams; drawn again only for a new result. */
+export const MemberDiagrams = memo(MemberDiagramsView);

@@ -1,8 +1,10 @@
+import { memo } from 'react';
 import { Card } from '@/lib/ui/card';
 import { ChoiceGroup } from '@/lib/ui/choice-group';
 import { TextField } from '@/lib/ui/text-field';
 import type { MemberDraftState } from '@/lib/hooks/use-member-draft';
 import type { MemberKind } from './member-draft';
+import { sameCardSlice } from './card-memo';
 import type { FieldErrors } from './member-input';
 
 const kindChoices = [
@@ -15,7 +17,7 @@ const kindChoices = [
 ];
 
 /** What the member is and where it is. */
-export function BasicsCard({ form, errors }: { form: MemberDraftState; errors: FieldErrors }) {
+function BasicsCardView({ form, errors }: { form: MemberDraftState; errors: FieldErrors }) {
   const { draft, set } = form;
   return (
     <Card title="Member">
@@ -44,3 +46,9 @@ export function BasicsCard({ form, errors }: { form: MemberDraftState; errors: F
     </Card>
   );
 }
+
+/** Basics inputs of the member editor; renders again only when its own fields change. */
+export const BasicsCard = memo(
+  BasicsCardView,
+  sameCardSlice(['kind', 'label', 'wall'], ['kind', 'label', 'wall']),
+);

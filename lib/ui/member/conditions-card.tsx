@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { Card } from '@/lib/ui/card';
 import { CheckRow } from '@/lib/ui/check-row';
 import { ChoiceGroup } from '@/lib/ui/choice-group';
@@ -5,6 +6,7 @@ import { PickerField } from '@/lib/ui/picker-field';
 import type { MemberDraftState } from '@/lib/hooks/use-member-draft';
 import { deflectionChoices, materialChoices, sizeChoices } from './choices';
 import type { MountKind, SupportKind } from './member-draft';
+import { sameCardSlice } from './card-memo';
 import type { FieldErrors } from './member-input';
 import { MeasureField } from './measure-field';
 
@@ -23,7 +25,7 @@ const supportChoices = [
 ];
 
 /** Bracing, deflection use, mount, what the ends bear on, service conditions and posts under the ends. */
-export function ConditionsCard({ form, errors }: { form: MemberDraftState; errors: FieldErrors }) {
+function ConditionsCardView({ form, errors }: { form: MemberDraftState; errors: FieldErrors }) {
   const { draft, set, setFlag } = form;
   const flagProps = (
     field:
@@ -208,3 +210,37 @@ export function ConditionsCard({ form, errors }: { form: MemberDraftState; error
     </Card>
   );
 }
+
+/** Conditions inputs of the member editor; renders again only when its own fields change. */
+export const ConditionsCard = memo(
+  ConditionsCardView,
+  sameCardSlice(
+    [
+      'braced',
+      'unbracedLength',
+      'deflectionUse',
+      'deflectionCap',
+      'mount',
+      'joistDepth',
+      'underJoistsHeight',
+      'atticClearance',
+      'supportKind',
+      'supportWidth',
+      'plateMaterialId',
+      'wetService',
+      'temperature',
+      'posts',
+      'flags',
+    ],
+    [
+      'unbracedLength',
+      'deflectionCap',
+      'joistDepth',
+      'underJoistsHeight',
+      'atticClearance',
+      'supportWidth',
+      'temperature',
+      'posts',
+    ],
+  ),
+);

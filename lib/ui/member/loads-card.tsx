@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { memo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '@/lib/theme';
 import { Button } from '@/lib/ui/button';
@@ -10,6 +10,7 @@ import type { MemberDraftState } from '@/lib/hooks/use-member-draft';
 import { roofThermalConditions, type RoofThermalCondition } from '@/shared/schemas/calc/loads';
 import { loadStandardEditions, type Job, type LoadStandard } from '@/shared/schemas/jobs';
 import { PickerField } from '@/lib/ui/picker-field';
+import { sameCardSlice } from './card-memo';
 import type { FieldErrors } from './member-input';
 import { MeasureField } from './measure-field';
 import { SourceCard } from './source-card';
@@ -38,7 +39,7 @@ const thermalLabels: Record<RoofThermalCondition, { label: string; description: 
 const thermalChoices = roofThermalConditions.map((value) => ({ value, ...thermalLabels[value] }));
 
 /** The job's load context (shown, overridable here) and the member's load sources. */
-export function LoadsCard({ form, errors, job }: { form: MemberDraftState; errors: FieldErrors; job: Job }) {
+function LoadsCardView({ form, errors, job }: { form: MemberDraftState; errors: FieldErrors; job: Job }) {
   const { draft, set, setFlag } = form;
   const [above, setAbove] = useState(false);
   const editionChoices = [
@@ -114,9 +115,9 @@ export function LoadsCard({ form, errors, job }: { form: MemberDraftState; error
           index={index}
           count={draft.sources.length}
           errors={errors}
-          onChange={(patch) => form.setSource(index, patch)}
-          onMove={(step) => form.moveSource(index, step)}
-          onRemove={() => form.removeSource(index)}
+          setSource={form.setSource}
+          moveSource={form.moveSource}
+          removeSource={form.removeSource}
         />
       ))}
       <FieldMessages messages={errors.sources} />
@@ -141,3 +142,12 @@ const styles = StyleSheet.create({
   cell: { flexGrow: 1, flexBasis: 200 },
   add: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
 });
+
+/** Loads inputs of the member editor; renders again only when its own fields change. */
+export const LoadsCard = memo(
+  LoadsCardView,
+  sameCardSlice(
+    ['edition', 'groundSnow', 'thermal', 'roofPitch', 'sources', 'flags'],
+    ['groundSnow', 'roofPitch', 'sources'],
+  ),
+);

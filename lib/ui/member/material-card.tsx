@@ -1,13 +1,15 @@
+import { memo } from 'react';
 import { Card } from '@/lib/ui/card';
 import { CheckRow } from '@/lib/ui/check-row';
 import { ChoiceGroup } from '@/lib/ui/choice-group';
 import { PickerField } from '@/lib/ui/picker-field';
 import type { MemberDraftState } from '@/lib/hooks/use-member-draft';
 import { familyChoices, familyOf, materialChoices, sizeChoices, type MaterialFamily } from './choices';
+import { sameCardSlice } from './card-memo';
 import type { FieldErrors } from './member-input';
 
 /** Material family, material (species and grade, or class), size and plies. */
-export function MaterialCard({ form, errors }: { form: MemberDraftState; errors: FieldErrors }) {
+function MaterialCardView({ form, errors }: { form: MemberDraftState; errors: FieldErrors }) {
   const { draft, set } = form;
   const family = familyOf(draft.materialId);
   const sizes = sizeChoices(draft.materialId);
@@ -68,3 +70,9 @@ export function MaterialCard({ form, errors }: { form: MemberDraftState; errors:
     </Card>
   );
 }
+
+/** Material inputs of the member editor; renders again only when its own fields change. */
+export const MaterialCard = memo(
+  MaterialCardView,
+  sameCardSlice(['materialId', 'sizeId', 'gradeUnknown', 'selfWeight'], ['materialId', 'sizeId']),
+);

@@ -39,6 +39,7 @@ type MemberEditorProps = {
   justSaved?: boolean;
 };
 
+const NO_ERRORS: FieldErrors = {};
 const savedStatus = { tone: 'success', text: 'Saved. The result shown is the server’s.' } as const;
 
 /** Messages that only say a required field is still empty: held back until the person tries to save. */
@@ -78,6 +79,7 @@ export function MemberEditor({ job, member, kind, storageKey, onSave, justSaved 
   const [busy, setBusy] = useState(false);
   const savedJson = useRef(member ? JSON.stringify(initial) : '');
   const scroll = useRef<ScrollView>(null);
+  const latestDraft = useRef(form.draft);
   const resultY = useRef(0);
   const { width } = useWindowDimensions();
   const contentWidth = width >= layout.wideBreakpoint ? width - layout.sideNavWidth : width;
@@ -139,49 +141,55 @@ export function MemberEditor({ job, member, kind, storageKey, onSave, justSaved 
       <ConditionsCard form={form} errors={errors} />
     </View>
   );
-  const statusNotice = (
-    <>
-      {status ? (
-        <Notice tone={status.tone} testID="save-status">
-          {status.text}
-        </Notice>
-      ) : null}
-      {differs ? <Notice tone="info">{differs}</Notice> : null}
-    </>
-  );
-  const results = (
-    <View
-      style={styles.column}
-      onLayout={(e) => {
-        resultY.current = e.nativeEvent.layout.y;
-      }}
-    >
-      <ResultPane
-        result={result}
-        prescriptive={prescriptive}
-        errors={live.ok ? {} : live.errors}
-        notice={statusNotice}
-        diagrams={result ? <MemberDiagrams result={result} testID="member-diagrams" /> : null}
+  latestDraft.current = form.draft;
+  const { materialId, sizeId, kind: draftKind } = form.draft;
+  // The result column depends on the deferred check only: the keystroke's own render leaves it alone.
+  const results = useMemo(() => {
+    const statusNotice = (
+      <>
+        {status ? (
+          <Notice tone={status.tone} testID="save-status">
+            {status.text}
+          </Notice>
+        ) : null}
+        {differs ? <Notice tone="info">{differs}</Notice> : null}
+      </>
+    );
+    return (
+      <View
+        style={styles.column}
+        onLayout={(e) => {
+          resultY.current = e.nativeEvent.layout.y;
+        }}
       >
-        {live.ok ? (
-          <ShortlistPanel
-            input={live.input}
-            joistDepthIn={live.input.joistDepthIn}
-            chosen={{ materialId: form.draft.materialId, sizeId: form.draft.sizeId }}
-            onChoose={(entry) => {
-              const next = { ...form.draft, materialId: entry.materialId, sizeId: entry.sizeId };
-              form.set('materialId')(entry.materialId);
-              form.set('sizeId')(entry.sizeId);
-              if (member) void save(next);
-            }}
-          />
-        ) : null}
-        {result && form.draft.kind === 'header' ? (
-          <FramingCard result={result} yearBuilt={job.yearBuilt} />
-        ) : null}
-      </ResultPane>
-    </View>
-  );
+        <ResultPane
+          result={result}
+          prescriptive={prescriptive}
+          errors={live.ok ? NO_ERRORS : live.errors}
+          notice={statusNotice}
+          diagrams={result ? <MemberDiagrams result={result} testID="member-diagrams" /> : null}
+        >
+          {live.ok ? (
+            <ShortlistPanel
+              input={live.input}
+              joistDepthIn={live.input.joistDepthIn}
+              chosen={{ materialId, sizeId }}
+              onChoose={(entry) => {
+                const next = { ...latestDraft.current, materialId: entry.materialId, sizeId: entry.sizeId };
+                form.set('materialId')(entry.materialId);
+                form.set('sizeId')(entry.sizeId);
+                if (member) void save(next);
+              }}
+            />
+          ) : null}
+          {result && draftKind === 'header' ? (
+            <FramingCard result={result} yearBuilt={job.yearBuilt} />
+          ) : null}
+        </ResultPane>
+      </View>
+    );
+    // save and form change identity every render but only their latest draft matters (latestDraft).
+  }, [result, prescriptive, live, status, differs, materialId, sizeId, draftKind, job, member]);
   const saveButton = (
     <Button
       label={member ? 'Save changes' : 'Save member'}

@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { useDeferredValue, useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { formatFtIn, formatLb, formatNumber, formatPlf } from '@/lib/format';
 import { colors, spacing } from '@/lib/theme';
@@ -54,7 +54,7 @@ function EntryRow({
           <Text variant="caption" tone="muted">
             {formatNumber(entry.dIn, 3)} in deep · {formatPlf(entry.weightPlf, 1)} · heaviest piece{' '}
             {formatLb(entry.pieceWeightLb)} · {formatNumber(entry.utilization * 100, 0)}% used (
-            {entry.governingCheck}){entry.failing ? ` · fails: ${entry.failing}` : ''}
+            {checkName(entry.governingCheck)}){entry.failing ? ` · fails: ${entry.failing}` : ''}
           </Text>
         </View>
         {entry.failing ? null : (
@@ -78,11 +78,26 @@ export function ShortlistPanel({ input, joistDepthIn, onChoose, chosen }: Shortl
     ...defaultShortlistFilters(),
     maxDepth: joistDepthIn ? String(joistDepthIn) : '',
   }));
-  const run = useMemo(() => runShortlist(input, filters), [input, filters]);
+  const [open, setOpen] = useState(false);
+  // The shortlist checks every size: it follows the typing a beat behind, never holding up the check.
+  const deferredInput = useDeferredValue(input);
+  const run = useMemo(
+    () => (open ? runShortlist(deferredInput, filters) : null),
+    [open, deferredInput, filters],
+  );
   const set =
     <K extends keyof ShortlistFilters>(key: K) =>
     (value: ShortlistFilters[K]) =>
       setFilters((f) => ({ ...f, [key]: value }));
+  if (!run)
+    return (
+      <Card title="Find sizes" testID="shortlist">
+        <Text tone="muted">
+          Every size of every material checked for these loads, filtered by what fits and sorted your way.
+        </Text>
+        <Button label="Find sizes" icon="chevronRight" onPress={() => setOpen(true)} testID="find-sizes" />
+      </Card>
+    );
   const errors = run.ok ? {} : run.errors;
   return (
     <Card title="Find sizes" testID="shortlist">

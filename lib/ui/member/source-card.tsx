@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '@/lib/theme';
 import { Button } from '@/lib/ui/button';
@@ -20,13 +21,24 @@ type SourceCardProps = {
   index: number;
   count: number;
   errors: FieldErrors;
-  onChange: (patch: Partial<SourceDraft>) => void;
-  onMove: (step: -1 | 1) => void;
-  onRemove: () => void;
+  setSource: (index: number, patch: Partial<SourceDraft>) => void;
+  moveSource: (index: number, step: -1 | 1) => void;
+  removeSource: (index: number) => void;
 };
 
 /** One load source: its numbers by kind, where they came from, its flag, and move / remove. */
-export function SourceCard({ source, index, count, errors, onChange, onMove, onRemove }: SourceCardProps) {
+function SourceCardView({
+  source,
+  index,
+  count,
+  errors,
+  setSource,
+  moveSource,
+  removeSource,
+}: SourceCardProps) {
+  const onChange = (patch: Partial<SourceDraft>) => setSource(index, patch);
+  const onMove = (step: -1 | 1) => moveSource(index, step);
+  const onRemove = () => removeSource(index);
   const e = (field: string) => errors[`sources.${index}.${field}`];
   const id = `source-${index}`;
   const area = source.kind === 'roof' || source.kind === 'ceiling' || source.kind === 'floor';
@@ -297,3 +309,17 @@ const styles = StyleSheet.create({
   foot: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm, flexWrap: 'wrap' },
   note: { flex: 1, minWidth: 160 },
 });
+
+const messagesOf = (props: SourceCardProps) =>
+  JSON.stringify(Object.entries(props.errors).filter(([path]) => path.startsWith(`sources.${props.index}.`)));
+
+/** One load source of the member editor; renders again only when this source or its messages change. */
+export const SourceCard = memo(
+  SourceCardView,
+  (a, b) =>
+    a.source === b.source &&
+    a.index === b.index &&
+    a.count === b.count &&
+    a.setSource === b.setSource &&
+    messagesOf(a) === messagesOf(b),
+);

@@ -1,7 +1,9 @@
+import { memo } from 'react';
 import { Card } from '@/lib/ui/card';
 import { ChoiceGroup } from '@/lib/ui/choice-group';
 import type { MemberDraftState } from '@/lib/hooks/use-member-draft';
 import type { MeasuredTo } from './member-draft';
+import { sameCardSlice } from './card-memo';
 import type { FieldErrors } from './member-input';
 import { MeasureField } from './measure-field';
 
@@ -16,7 +18,7 @@ const measuredToChoices = [
 ];
 
 /** The clear span off the tape, what it was measured between, and the bearing at each end. */
-export function SpanCard({ form, errors }: { form: MemberDraftState; errors: FieldErrors }) {
+function SpanCardView({ form, errors }: { form: MemberDraftState; errors: FieldErrors }) {
   const { draft, set, setFlag } = form;
   return (
     <Card title="Span and bearing">
@@ -63,3 +65,12 @@ export function SpanCard({ form, errors }: { form: MemberDraftState; errors: Fie
     </Card>
   );
 }
+
+/** Span inputs of the member editor; renders again only when its own fields change. */
+export const SpanCard = memo(
+  SpanCardView,
+  sameCardSlice(
+    ['clearSpan', 'measuredTo', 'bearingLeft', 'bearingRight', 'flags'],
+    ['clearSpan', 'bearingLeft', 'bearingRight'],
+  ),
+);
