@@ -5,3 +5,4 @@ export { roofAngleDeg, slopeToHorizontalFactor } from '@/lib/calc/loads/roof-slo
 /** Output types of the load takedown (see takedown-line.ts). */
 export type { MemberLoads, TakedownLine } from '@/lib/calc/loads/takedown-line';
 export { LOAD_DEFAULTS, type LoadDefault } from '@/lib/calc/loads/defaults';
+export { liveLoadPatterns, patternFactor, patternedName } from '@/lib/calc/loads/live-patterns';
