@@ -1,6 +1,7 @@
 import type { BeamLoad } from '@/lib/calc/types';
 import { emptySpanState, type SpanState } from './span-state';
-import { splitSpanLoads, type PointPiece, type SpanLoads, type UniformPiece } from './span-loads';
+import { eiSlope, eiYNoConstant, moment, segmentLoad, shearAfter } from './macaulay';
+import { splitSpanLoads } from './span-loads';
 
 /**
  * The breakpoints of a simple span under several load sets: 0, the span, every point load and every end of a
@@ -73,63 +74,4 @@ export function simpleSpanState(
     if (i + 1 < xs.length) state.wPlf[i] = segmentLoad(uniforms, x, xs[i + 1]);
   }
   return state;
-}
-
-function shearAfter(
-  rA: number,
-  points: readonly PointPiece[],
-  uniforms: readonly UniformPiece[],
-  x: number,
-): number {
-  let v = rA;
-  for (const p of points) if (p.aFt <= x) v -= p.pLb;
-  for (const u of uniforms) if (x > u.aFt) v -= u.wPlf * (Math.min(x, u.bFt) - u.aFt);
-  return v;
-}
-
-function segmentLoad(uniforms: readonly UniformPiece[], x0: number, x1: number): number {
-  let w = 0;
-  for (const u of uniforms) if (u.aFt <= x0 && u.bFt >= x1) w += u.wPlf;
-  return w;
-}
-
-function moment(rA: number, { points, uniforms }: SpanLoads, x: number): number {
-  let m = rA * x;
-  for (const p of points) if (x > p.aFt) m -= p.pLb * (x - p.aFt);
-  for (const u of uniforms) {
-    const da = Math.max(0, x - u.aFt);
-    const db = Math.max(0, x - u.bFt);
-    m -= 0.5 * u.wPlf * (da * da - db * db);
-  }
-  return m;
-}
-
-/** E·I·y' without the integration constant, lb·ft². */
-function eiSlope(rA: number, { points, uniforms }: SpanLoads, x: number): number {
-  let s = (rA * x * x) / 2;
-  for (const p of points) {
-    const d = Math.max(0, x - p.aFt);
-    s -= (p.pLb * d * d) / 2;
-  }
-  for (const u of uniforms) {
-    const da = Math.max(0, x - u.aFt);
-    const db = Math.max(0, x - u.bFt);
-    s -= (u.wPlf * (da * da * da - db * db * db)) / 6;
-  }
-  return s;
-}
-
-/** E·I·y without the integration constant term, lb·ft³; y(0) = 0 by construction. */
-function eiYNoConstant(rA: number, { points, uniforms }: SpanLoads, x: number): number {
-  let y = (rA * x * x * x) / 6;
-  for (const p of points) {
-    const d = Math.max(0, x - p.aFt);
-    y -= (p.pLb * d * d * d) / 6;
-  }
-  for (const u of uniforms) {
-    const da = Math.max(0, x - u.aFt);
-    const db = Math.max(0, x - u.bFt);
-    y -= (u.wPlf * (da * da * da * da - db * db * db * db)) / 24;
-  }
-  return y;
 }

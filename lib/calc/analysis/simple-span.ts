@@ -44,7 +44,8 @@ export function createSimpleSpan(input: SimpleSpanInput): SpanModel {
 }
 
 /**
- * Wraps a span state (for instance one load combination built by `combineStates`) as a SpanModel.
+ * Wraps a span state (for instance one load combination built by `combineStates`) as a SpanModel: a simple
+ * span, or a member with overhangs or continuous over a centre post (supportedBeamState).
  * @param state span state (ft, lb, lb·ft, lb·ft², lb·ft³)
  * @param eiLbIn2 E (psi) × I (in⁴), lb·in²
  * @returns a SpanModel: shear lb, moment lb·ft, deflection in (downward positive)
@@ -62,10 +63,7 @@ export function spanModelFromState(state: SpanState, eiLbIn2: number): SpanModel
   let maxDeflection: Extremum | undefined;
   return {
     spanFt: state.spanFt,
-    reactions: () => [
-      { atFt: 0, reactionLb: state.reactionsLb[0] },
-      { atFt: state.spanFt, reactionLb: state.reactionsLb[1] },
-    ],
+    reactions: () => state.supportsFt.map((atFt, i) => ({ atFt, reactionLb: state.reactionsLb[i] })),
     shearLb: (x, side) => stateShearLb(state, x, side),
     momentLbFt: (x) => stateMomentLbFt(state, x),
     deflectionIn: (x) => -stateEiY(state, x) * toIn,

@@ -1,8 +1,8 @@
 /**
  * The boundary every span type implements. Positions along the member are in ft from the left end; shear in lb,
- * moment in lb·ft, deflection in in (positive downward). Today only the simple span exists
- * (`createSimpleSpan`); a two-span continuous beam and a cantilever will implement this same interface, so the
- * member check, the shortlist and the diagrams never need to know which span type they hold.
+ * moment in lb·ft, deflection in in (positive downward). Simple spans (`createSimpleSpan`) and members that
+ * overhang a support or run continuous over a centre post (`createSupportedBeam`) implement this same
+ * interface, so the member check, the shortlist and the diagrams never need to know which they hold.
  *
  * Reference: AWC Design Aid No. 6 (2007), "Beam Design Formulas with Shear and Moment Diagrams" — sign
  * conventions follow its diagrams (shear positive just right of the left support, sagging moment positive).
@@ -41,7 +41,7 @@ export interface DiagramSample {
  * Reference: AWC Design Aid No. 6 (2007); AISC Steel Construction Manual, Table 3-23.
  */
 export interface SpanModel {
-  /** Length between support centres, ft (the design span). */
+  /** Length of the member analysed, ft: the design span of a simple span, end to end with overhangs. */
   readonly spanFt: number;
   /** Support reactions, lb, left to right. */
   reactions(): readonly SupportReaction[];

@@ -10,37 +10,58 @@ import type { Extremum, ShearSide } from './span-model';
  *
  * Units: x in ft, shear lb, moment lb·ft, E·I·slope lb·ft², E·I·y lb·ft³ (y upward, so sagging is negative),
  * w plf. Arrays are indexed by breakpoint (wPlf by segment, one shorter).
+ *
+ * x runs from the member's left end: the left support of a simple span, or the tip of a left overhang. The
+ * supports sit at `supportsFt` (two, or three for a beam continuous over a centre post), each a breakpoint.
  */
 export interface SpanState {
+  /** Length of the member analysed, ft (the design span of a simple span). */
   readonly spanFt: number;
   readonly xs: readonly number[];
+  /** Support positions, ft from the left end, left to right. */
+  readonly supportsFt: readonly number[];
   readonly vAfterLb: number[];
   readonly momentLbFt: number[];
   readonly eiSlope: number[];
   readonly eiY: number[];
   readonly wPlf: number[];
-  /** Left and right support reactions, lb upward. */
+  /** Support reactions, lb upward, one per support, left to right. */
   readonly reactionsLb: number[];
 }
 
 /**
  * A state of zeros on the given breakpoints, to be filled by `combineStates`.
- * @param spanFt design span, ft; xs breakpoints, ft, sorted, xs[0] = 0 and the last = spanFt
+ * @param spanFt member length, ft; xs breakpoints, ft, sorted, xs[0] = 0 and the last = spanFt
+ * @param supportsFt support positions, ft (default the two ends of a simple span)
  * @example const scratch = emptySpanState(12, [0, 12]);
  * Reference: AWC Design Aid No. 6 (2007) — superposition of load cases on a simple beam.
  */
-export function emptySpanState(spanFt: number, xs: readonly number[]): SpanState {
+export function emptySpanState(
+  spanFt: number,
+  xs: readonly number[],
+  supportsFt: readonly number[] = [0, spanFt],
+): SpanState {
   const n = xs.length;
   return {
     spanFt,
     xs,
+    supportsFt,
     vAfterLb: zeros(n),
     momentLbFt: zeros(n),
     eiSlope: zeros(n),
     eiY: zeros(n),
     wPlf: zeros(n - 1),
-    reactionsLb: [0, 0],
+    reactionsLb: zeros(supportsFt.length),
   };
+}
+
+/**
+ * A state of zeros on the same member, breakpoints and supports as `like`.
+ * @example const scratch = blankStateLike(prepared.unitSelfWeight);
+ * Reference: AWC Design Aid No. 6 (2007) — superposition.
+ */
+export function blankStateLike(like: SpanState): SpanState {
+  return emptySpanState(like.spanFt, like.xs, like.supportsFt);
 }
 
 /** n zeros in a packed array (new Array(n).fill(0) stays holey, slower to read and write in V8). */
@@ -73,8 +94,8 @@ export function combineStates(
     eiY[i] = 0;
   }
   for (let i = 0; i + 1 < n; i++) wPlf[i] = 0;
-  reactionsLb[0] = 0;
-  reactionsLb[1] = 0;
+  const supports = reactionsLb.length;
+  for (let r = 0; r < supports; r++) reactionsLb[r] = 0;
   for (let k = 0; k < states.length; k++) {
     const c = coeffs[k];
     if (c === 0) continue;
@@ -86,8 +107,7 @@ export function combineStates(
       eiY[i] += c * src.eiY[i];
     }
     for (let i = 0; i + 1 < n; i++) wPlf[i] += c * src.wPlf[i];
-    reactionsLb[0] += c * src.reactionsLb[0];
-    reactionsLb[1] += c * src.reactionsLb[1];
+    for (let r = 0; r < supports; r++) reactionsLb[r] += c * src.reactionsLb[r];
   }
   return target;
 }
@@ -213,17 +233,34 @@ const MAX_NEWTON_STEPS = 60;
 /**
  * Largest |E·I·deflection| as a downward value (lb·ft³) and where: found where the slope is zero, solved on
  * the segment's cubic by Newton's method kept inside a sign-change bracket (the slope's derivative is the
- * moment, known exactly), to 1e-12 of the span. Divide by E·I in lb·ft² for ft, or take
- * 1728 · value / (E·I in lb·in²) for in.
+ * moment, known exactly), to 1e-12 of the span, or at a free end (the tip of an overhang). Divide by E·I in
+ * lb·ft² for ft, or take 1728 · value / (E·I in lb·in²) for in.
  * @example 1728 * stateMaxEiDeflection(state).value / eiLbIn2; // in
- * Reference: AWC Design Aid No. 6 (2007) — maximum deflection where the slope is zero.
+ * Reference: AWC Design Aid No. 6 (2007) — maximum deflection where the slope is zero, or at a free end.
  */
 export function stateMaxEiDeflection(s: SpanState): Extremum {
+  return stateMaxEiDeflectionBetween(s, 0, s.xs.length - 1);
+}
+
+/**
+ * Largest |E·I·deflection| (downward value, lb·ft³) and where, between breakpoints xs[from] and xs[to]
+ * (for one span or one overhang: its ends are supports or a free end): where the slope is zero inside, or
+ * at either end.
+ * @param from index of the first breakpoint; to index of the last
+ * @example stateMaxEiDeflectionBetween(state, 0, 3).value;
+ * Reference: AWC Design Aid No. 6 (2007) — maximum deflection where the slope is zero, or at a free end.
+ */
+export function stateMaxEiDeflectionBetween(s: SpanState, from: number, to: number): Extremum {
   const { xs } = s;
   const tol = 1e-12 * s.spanFt;
-  let bestValue = 0;
-  let bestAt = s.spanFt / 2;
-  for (let i = 0; i + 1 < xs.length; i++) {
+  let bestValue = -s.eiY[from];
+  let bestAt = xs[from];
+  if (Math.abs(s.eiY[to]) > Math.abs(bestValue)) {
+    bestValue = -s.eiY[to];
+    bestAt = xs[to];
+  }
+  if (bestValue === 0) bestAt = 0.5 * (xs[from] + xs[to]);
+  for (let i = from; i < to; i++) {
     const h = xs[i + 1] - xs[i];
     const steps = momentKeepsSign(s, i, h) ? 1 : SLOPE_SCAN_STEPS;
     let tLo = 0;

@@ -1,8 +1,9 @@
-import { sampleDiagram, spanModelFromState, combineStates, emptySpanState } from '@/lib/calc/analysis';
+import { blankStateLike, combineStates, sampleDiagram, spanModelFromState } from '@/lib/calc/analysis';
+import { formatNumber } from '@/lib/format';
 import { checkColumn, PRESUMPTIVE_SOIL_BEARING_PSF, sizeFootingPad } from '@/lib/calc/columns';
 import { getMaterial, getSize, sizeIdentity } from '@/lib/calc/materials';
 import { CAUTION_TEXT } from '@/lib/calc/prescriptive/caution';
-import { LOAD_TYPES, type LoadType } from '@/lib/calc/types';
+import { LOAD_TYPES } from '@/lib/calc/types';
 import type {
   CombinationDemands,
   MemberCheckInput,
@@ -11,7 +12,7 @@ import type {
   MemberLoadingInput,
 } from '@/shared/schemas/calc/member';
 import { jackStuds } from './bearing-jacks';
-import { combinationDemands } from './combination-demands';
+import { combinationDemands, supportNames } from './combination-demands';
 import { DEFLECTION_PRESETS } from './deflection-presets';
 import { describeChecks } from './describe-checks';
 import { echoInputs } from './echo-inputs';
@@ -92,15 +93,18 @@ function baseSources(prepared: PreparedMember, materialSource: string): string[]
 function postsFor(prepared: PreparedMember, evaluation: SizeEvaluation): MemberCheckResult['posts'] {
   const posts = prepared.input.posts;
   if (!posts) return undefined;
-  const ends = ['left', 'right'] as const;
+  const ends = supportNames(prepared.geometry.supportsFt.length);
+  const unitReactions = prepared.unitSelfWeight.reactionsLb;
   return ends.map((end, e) => {
     let best = { ratio: -1, pass: true, combination: '', loadLb: 0 };
     let maxLoadLb = 0;
     for (const prep of prepared.combinations) {
       if (prep.skipped) continue;
-      const loadLb =
+      const loadLb = Math.max(
+        0,
         prep.state.reactionsLb[e] +
-        (prep.combination.factors.D ?? 0) * evaluation.selfWeightPlf * (prepared.spans.designSpanFt / 2);
+          (prep.combination.factors.D ?? 0) * evaluation.selfWeightPlf * unitReactions[e],
+      );
       maxLoadLb = Math.max(maxLoadLb, loadLb);
       const check = checkColumn({
         materialId: posts.materialId,
@@ -131,6 +135,28 @@ function postsFor(prepared: PreparedMember, evaluation: SizeEvaluation): MemberC
       soilBearingPsf: pad.soilBearingPsf,
     };
   });
+}
+
+/** What the user should know about an overhanging or continuous member's model. */
+function spanModelWarnings(prepared: PreparedMember, input: MemberCheckInput): string[] {
+  if (prepared.geometry.simple) return [];
+  const warnings: string[] = [];
+  if (prepared.combinations.some((c) => c.loadedRegions !== null)) {
+    warnings.push(
+      'Variable loads are also placed span by span (ASCE 7 §4.3.3 partial loading; snow at half on the other spans, §7.5): a combination naming where its variable load is comes from that.',
+    );
+  }
+  if (input.unbracedLengthFt === undefined) {
+    warnings.push(
+      'Over a centre post and along an overhang the bottom edge is in compression: brace it there (blocking, a ceiling fastened to it) or give the unbraced length.',
+    );
+  }
+  if (input.secondClearSpanFt !== undefined) {
+    warnings.push(
+      'Continuous over the centre post: the member must be one piece (or spliced as an engineer designs) over it, and the post carries the largest reaction down to a footing.',
+    );
+  }
+  return warnings;
 }
 
 /** Per support, the largest and least reaction of any combination with the combination that gives each. */
@@ -185,7 +211,12 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
   const resolved = resolveMember(input);
   const { material, size } = resolved;
   const prepared = prepareMember(input);
-  const section = sectionFactors(material.id, size, prepared.spans.designSpanFt, serviceConditions(input));
+  const section = sectionFactors(
+    material.id,
+    size,
+    prepared.geometry.longestSpanFt,
+    serviceConditions(input),
+  );
   const support = supportSpec(input);
   const evaluation = evaluateSize(prepared, section, size.selfWeightPlf, support.spec);
   const checks = describeChecks(prepared, section, evaluation);
@@ -212,13 +243,16 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
       wPlf: evaluation.selfWeightPlf,
     });
   }
-  const swHalfLb = evaluation.selfWeightPlf * (prepared.spans.designSpanFt / 2);
-  const byType = {} as Record<LoadType, { leftLb: number; rightLb: number }>;
+  const unitReactions = prepared.unitSelfWeight.reactionsLb;
+  const last = unitReactions.length - 1;
+  const byType = {} as MemberCheckResult['reactions']['byType'];
   for (const t of LOAD_TYPES) {
-    const [leftLb, rightLb] = prepared.reactionsByType[t];
-    const sw = t === 'D' ? swHalfLb : 0;
-    byType[t] = { leftLb: leftLb + sw, rightLb: rightLb + sw };
+    const r = prepared.reactionsByType[t];
+    const sw = t === 'D' ? evaluation.selfWeightPlf : 0;
+    byType[t] = { leftLb: r[0] + sw * unitReactions[0], rightLb: r[last] + sw * unitReactions[last] };
+    if (last === 2) byType[t].centreLb = r[1] + sw * unitReactions[1];
   }
+  warnings.push(...spanModelWarnings(prepared, input));
   const governingCheck = checks.find((c) => c.id === evaluation.governing.id) ?? checks[0];
   const byCombination = combinationDemands(
     prepared,
@@ -228,6 +262,14 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
   );
   const governingDemands =
     byCombination.find((d) => d.combination === governingCheck.combination) ?? byCombination[0];
+  const bySupport = reactionsBySupport(byCombination);
+  for (const r of bySupport) {
+    if (r.leastLb < 0) {
+      warnings.push(
+        `Uplift at the ${r.support} support: up to ${formatNumber(-r.leastLb, 0)} lb (${r.leastCombination}). Hold the member down there (a strap or hold-down to framing that can take it); the bearing check does not cover it.`,
+      );
+    }
+  }
   const posts = postsFor(prepared, evaluation);
   if (posts?.some((p) => !p.pass)) {
     warnings.push('A post under the member fails its check: choose a larger post or brace it.');
@@ -284,7 +326,7 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
       rightLb: evaluation.bearing.rightLb,
       combination: prepared.combinations[evaluation.bearing.combinationIndex].combination.name,
       byType,
-      bySupport: reactionsBySupport(byCombination),
+      bySupport,
     },
     bearing: {
       requiredLengthIn: evaluation.bearing.requiredLengthIn,
@@ -305,7 +347,7 @@ export function checkMember(input: MemberCheckInput, options: MemberCheckOptions
     const index = prepared.combinations.findIndex((c) => c.combination.name === governingCheck.combination);
     const prep = prepared.combinations[Math.max(0, index)];
     const state = combineStates(
-      emptySpanState(prepared.spans.designSpanFt, prep.state.xs),
+      blankStateLike(prep.state),
       [prep.state, prepared.unitSelfWeight],
       [1, (prep.combination.factors.D ?? 0) * evaluation.selfWeightPlf],
     );

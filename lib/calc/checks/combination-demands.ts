@@ -1,12 +1,11 @@
 import { IN3_PER_FT3 } from '@/lib/calc/analysis/simple-span';
 import {
+  blankStateLike,
   combineStates,
-  emptySpanState,
   stateMaxEiDeflection,
   stateMaxMoment,
   stateMaxShear,
 } from '@/lib/calc/analysis/span-state';
-import { LOAD_TYPES } from '@/lib/calc/types';
 import type { CombinationDemands, SupportName } from '@/shared/schemas/calc/member';
 import { endShearsFor, type PreparedMember } from './prepare-member';
 
@@ -22,8 +21,9 @@ export function supportNames(count: number): SupportName[] {
  * combination, the largest moment and shear with their positions, the design shear (at d from the supports
  * when asked, NDS 3.4.3.1) with the support it is next to, the variable-load (live) deflection, the plain
  * elastic total deflection and the total with creep (NDS 3.5.2), each with the position of its largest
- * value. Self-weight is included as dead load. Positions are ft along the design span from the left
- * support's centre; deflections in in, downward positive.
+ * value. Self-weight is included as dead load. Positions are ft from the member's left end (the left
+ * support's centre, or the tip of a left overhang); deflections in in, downward positive (an overhang's tip
+ * may rise: negative).
  *
  * @param prepared from prepareMember; selfWeightPlf the size's self-weight (plf, 0 when not included)
  * @param eiLbIn2 E'·I of the size (lb·in²); dIn its depth for shear at d (in)
@@ -38,34 +38,32 @@ export function combinationDemands(
   eiLbIn2: number,
   dIn: number,
 ): CombinationDemands[] {
-  const L = prepared.spans.designSpanFt;
   const toIn = IN3_PER_FT3 / eiLbIn2;
-  const extra = prepared.creepKcr - 1;
   const dFt = (prepared.input.shearAtD ?? true) ? dIn / IN_PER_FT : 0;
   const shears = endShearsFor(prepared, dFt);
-  const names = supportNames(2);
+  const { supportsFt } = prepared.geometry;
+  const names = supportNames(supportsFt.length);
   const out: CombinationDemands[] = [];
+  const elastic = blankStateLike(prepared.unitSelfWeight);
+  const creep = blankStateLike(prepared.unitSelfWeight);
   for (const prep of prepared.combinations) {
     if (prep.skipped) continue;
     const { factors, name, CD } = prep.combination;
     const sw = selfWeightPlf * (factors.D ?? 0);
-    const elastic = combineStates(
-      emptySpanState(L, prep.state.xs),
-      [prep.state, prepared.unitSelfWeight],
-      [1, sw],
-    );
-    const creep = combineStates(
-      emptySpanState(L, prep.state.xs),
-      [prep.state, prepared.deadState, prepared.liveState, prepared.unitSelfWeight],
-      [1, extra, extra * prep.sustainedLiveFactor, sw * prepared.creepKcr],
-    );
-    const vEnds = [shears.unitSelfWeight[0] * sw, shears.unitSelfWeight[1] * sw];
-    for (const t of LOAD_TYPES) {
-      const f = factors[t] ?? 0;
-      vEnds[0] += f * shears.byType[t][0];
-      vEnds[1] += f * shears.byType[t][1];
+    combineStates(elastic, [prep.state, prepared.unitSelfWeight], [1, sw]);
+    const creepCoeffs = prep.creepCoeffs;
+    creepCoeffs[creepCoeffs.length - 1] = sw * prepared.creepKcr;
+    combineStates(creep, prepared.groupAndUnitStates, creepCoeffs);
+    let designShearLb = 0;
+    let designSide = 0;
+    for (let i = 0; i < shears.unitSelfWeight.length; i++) {
+      let v = shears.unitSelfWeight[i] * sw;
+      for (let g = 0; g < shears.byGroup.length; g++) v += prep.coeffs[g] * shears.byGroup[g][i];
+      if (Math.abs(v) > designShearLb) {
+        designShearLb = Math.abs(v);
+        designSide = i;
+      }
     }
-    const shearEnd = vEnds[1] > vEnds[0] ? 1 : 0;
     const moment = stateMaxMoment(elastic);
     const shear = stateMaxShear(elastic);
     const total = stateMaxEiDeflection(elastic);
@@ -73,16 +71,12 @@ export function combinationDemands(
     out.push({
       combination: name,
       CD,
-      reactions: names.map((support, i) => ({
-        support,
-        atFt: i === 0 ? 0 : L,
-        lb: elastic.reactionsLb[i],
-      })),
+      reactions: names.map((support, i) => ({ support, atFt: supportsFt[i], lb: elastic.reactionsLb[i] })),
       maxMoment: { lbFt: moment.value, atFt: moment.atFt },
       maxShear: { lb: shear.value, atFt: shear.atFt },
       designShear: {
-        lb: vEnds[shearEnd],
-        support: names[shearEnd],
+        lb: designShearLb,
+        support: names[shears.sideSupport[designSide]],
         atD: dFt > 0,
       },
       deflectionLive: { in: prep.eiVariableDeflection.value * toIn, atFt: prep.eiVariableDeflection.atFt },

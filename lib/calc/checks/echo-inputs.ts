@@ -65,6 +65,14 @@ export function echoInputs(
   echo.add('clearSpanFt', 'Clear span', spans.clearSpanFt, 'ft');
   echo.add('bearingLeftIn', 'Bearing length, left', spans.bearingLeftIn, 'in');
   echo.add('bearingRightIn', 'Bearing length, right', spans.bearingRightIn, 'in');
+  if (spans.secondClearSpanFt !== undefined) {
+    echo.add('secondClearSpanFt', 'Second clear span (continuous)', spans.secondClearSpanFt, 'ft');
+    echo.add('centreBearingIn', 'Bearing length, centre post', spans.centreBearingIn ?? 0, 'in');
+  }
+  if (spans.overhangLeftFt !== undefined)
+    echo.add('overhangLeftFt', 'Overhang past the left support', spans.overhangLeftFt, 'ft');
+  if (spans.overhangRightFt !== undefined)
+    echo.add('overhangRightFt', 'Overhang past the right support', spans.overhangRightFt, 'ft');
   echo.add('materialId', 'Material', used.materialLabel);
   echo.add('sizeId', 'Size', used.sizeLabel);
   echo.add('gradeUnknown', 'Grade unknown', input.gradeUnknown ?? false);

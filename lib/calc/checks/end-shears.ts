@@ -1,3 +1,5 @@
+import { stateShearLb } from '@/lib/calc/analysis/span-state';
+import { supportedBeamState, type SupportedBeam } from '@/lib/calc/analysis/supported-beam-state';
 import type { BeamLoad } from '@/lib/calc/types';
 
 /**
@@ -41,4 +43,72 @@ export function endShearsAtD(spanFt: number, loads: readonly BeamLoad[], dFt: nu
     rB += (total * centroid) / L;
   }
   return [rA, rB];
+}
+
+/** A point load within d of a support counts x/d of itself, x its distance to the nearest support (NDS 3.4.3.1). */
+function reducedForShear(beam: SupportedBeam, loads: readonly BeamLoad[], dFt: number): BeamLoad[] {
+  if (dFt <= 0) return [...loads];
+  const out: BeamLoad[] = [];
+  const windows = beam.supportsFt.map((s): [number, number] => [
+    Math.max(0, s - dFt),
+    Math.min(beam.lengthFt, s + dFt),
+  ]);
+  for (const load of loads) {
+    if (load.kind === 'point') {
+      let near = Infinity;
+      for (const s of beam.supportsFt) near = Math.min(near, Math.abs(load.atFt - s));
+      if (near <= 0) continue;
+      out.push(near >= dFt ? load : { ...load, pLb: (load.pLb * near) / dFt });
+      continue;
+    }
+    let pieces: [number, number][] = [[load.startFt ?? 0, load.endFt ?? beam.lengthFt]];
+    for (const [lo, hi] of windows) {
+      pieces = pieces.flatMap(([a, b]): [number, number][] =>
+        hi <= a || lo >= b
+          ? [[a, b]]
+          : (
+              [
+                [a, Math.min(b, lo)],
+                [Math.max(a, hi), b],
+              ] as [number, number][]
+            ).filter(([x, y]) => y > x),
+      );
+    }
+    for (const [a, b] of pieces) out.push({ kind: 'uniform', wPlf: load.wPlf, startFt: a, endFt: b });
+  }
+  return out;
+}
+
+/**
+ * Design shears next to the supports of a member that overhangs a support or runs continuous over a centre
+ * post, per NDS 3.4.3.1 as for a simple span (endShearsAtD): uniform loads within d of a support are left
+ * out and point loads within d are taken at x/d; the member is analysed under the loads so reduced and the
+ * shear is read just beside each support, on each side where the member goes on. Point loads on a support
+ * go straight into it.
+ *
+ * @param beam length and supports, ft; loads non-negative loads from the left end (ft, plf, lb)
+ * @param dFt member depth, ft (0 for shear at the supports)
+ * @returns signed shears (lb) per support side, left to right, and the support index of each side
+ * @example supportSideShears({ lengthFt: 20, supportsFt: [0, 10, 20] }, [{ kind: 'uniform', wPlf: 100 }], 0).shearsLb; // [375, -625, 625, -375]
+ * Reference: NDS 2018 §3.4.3.1; AWC Design Aid No. 6 (2007) two equal spans (shears 3wl/8 and 5wl/8).
+ */
+export function supportSideShears(
+  beam: SupportedBeam,
+  loads: readonly BeamLoad[],
+  dFt: number,
+): { shearsLb: number[]; sideSupport: number[] } {
+  const state = supportedBeamState(beam, reducedForShear(beam, loads, dFt));
+  const shearsLb: number[] = [];
+  const sideSupport: number[] = [];
+  beam.supportsFt.forEach((s, i) => {
+    if (s > 0) {
+      shearsLb.push(stateShearLb(state, s, 'before'));
+      sideSupport.push(i);
+    }
+    if (s < beam.lengthFt) {
+      shearsLb.push(stateShearLb(state, s, 'after'));
+      sideSupport.push(i);
+    }
+  });
+  return { shearsLb, sideSupport };
 }

@@ -1,7 +1,7 @@
 import { IN3_PER_FT3 } from '@/lib/calc/analysis/simple-span';
-import { combineStates, stateMaxEiDeflection, stateMaxMoment } from '@/lib/calc/analysis/span-state';
+import { combineStates, stateMaxEiDeflectionBetween, stateMaxMoment } from '@/lib/calc/analysis/span-state';
 import { beamStabilityFactor, type BeamStability } from '@/lib/calc/factors';
-import { CalcInputError, LOAD_TYPES } from '@/lib/calc/types';
+import { CalcInputError } from '@/lib/calc/types';
 import type { CheckId } from '@/shared/schemas/calc/member';
 import { DEFLECTION_PRESETS } from './deflection-presets';
 import { endShearsFor, type PreparedMember } from './prepare-member';
@@ -41,9 +41,22 @@ export interface BendingNumbers extends CheckNumbers {
 export interface BearingNumbers extends CheckNumbers {
   leftLb: number;
   rightLb: number;
-  /** Bearing length needed at the more heavily loaded end, in. */
+  /** Largest reaction at each support, lb, left to right (a centre post between the ends). */
+  reactionsLb: number[];
+  /** Bearing length needed at each support, in. */
+  requiredLengthsIn: number[];
+  /** Bearing length needed at the more heavily loaded end, in (the jack studs' count). */
   requiredLengthIn: number;
+  /** The support whose bearing governs (index into reactionsLb). */
+  supportIndex: number;
   governedBy: 'member' | 'plate';
+}
+
+/** A deflection check's numbers: the limit of the span or overhang that governs, and which one it is. */
+export interface DeflectionNumbers extends CheckNumbers {
+  limitIn: number;
+  /** Index into prepared.geometry.regions. */
+  regionIndex: number;
 }
 
 /** A size's result in numbers only (the shortlist keeps these; the member check describes them). */
@@ -51,29 +64,25 @@ export interface SizeEvaluation {
   selfWeightPlf: number;
   eiLbIn2: number;
   bending: BendingNumbers;
-  shear: CheckNumbers & { shearLb: number; CD: number };
-  deflectionLive: CheckNumbers & { limitIn: number };
-  deflectionTotal: CheckNumbers & { limitIn: number; capGoverns: boolean };
+  /** Shear: the design shear (lb) and the support it is next to. */
+  shear: CheckNumbers & { shearLb: number; CD: number; supportIndex: number };
+  deflectionLive: DeflectionNumbers;
+  deflectionTotal: DeflectionNumbers & { capGoverns: boolean };
   bearing: BearingNumbers;
   governing: CheckNumbers;
   pass: boolean;
 }
 
-/** Largest moment (lb·ft per plf) and E·I·deflection (lb·ft³ per plf) of a 1 plf full-span load: wl²/8, 5wl⁴/384. */
-function unitUniformMaxima(spanFt: number): { momentLbFt: number; eiDeflection: number } {
-  const l2 = spanFt * spanFt;
-  return { momentLbFt: l2 / 8, eiDeflection: (5 * l2 * l2) / 384 };
-}
-
 /**
- * Checks one size against a prepared member, per ASD combination: bending f_b = M/S against
- * F'_b (C_D and C_L per combination), shear f_v = 3V/2A against F'_v (at d from the supports when asked),
- * live deflection (the variable part of each combination) and total deflection with creep
- * (K_cr·Δ_sustained + Δ_short, NDS 3.5.2) against the use's limits and any absolute cap, and bearing on the
- * member and on the plate under the jacks (no C_D: F_c⊥ never takes it). Self-weight is added to every
- * combination by superposition; nothing is re-analysed. A combination is solved exactly for bending or
- * total deflection only when its upper bound (base maximum + self-weight maximum, AWC Design Aid No. 6
- * case 1) could beat the worst exact value so far, so results are exact and cheap.
+ * Checks one size against a prepared member, per ASD combination (and live-load pattern): bending
+ * f_b = M/S against F'_b (C_D and C_L per combination), shear f_v = 3V/2A against F'_v (at d from the
+ * supports when asked), live deflection (the variable part of each combination) and total deflection with
+ * creep (K_cr·Δ_sustained + Δ_short, NDS 3.5.2) against the use's limits and any absolute cap — span by span,
+ * an overhang against twice its length — and bearing at every support on the member and on the plate under
+ * the jacks (no C_D: F_c⊥ never takes it). Self-weight is added to every combination by superposition;
+ * nothing is re-analysed. A combination is solved exactly for bending or total deflection only when its
+ * upper bound (base maximum + self-weight maximum) could beat the worst exact value so far, so results are
+ * exact and cheap.
  *
  * @param prepared from prepareMember
  * @param section from sectionFactors (in, psi)
@@ -81,7 +90,8 @@ function unitUniformMaxima(spanFt: number): { momentLbFt: number; eiDeflection: 
  * @param support bearing support (in, psi)
  * @returns demand/capacity numbers per check and the governing one
  * @example evaluateSize(prepared, section, 3.2, { kind: 'jacks', widthIn: 3.5, plateFcPerpPsi: 425 }).governing.ratio;
- * Reference: NDS 2018 §3.3 (bending), §3.4 (shear), §3.5 (deflection), §3.10 (bearing), Table 2.3.2 (C_D).
+ * Reference: NDS 2018 §3.3 (bending), §3.4 (shear), §3.5 (deflection), §3.10 (bearing), Table 2.3.2 (C_D);
+ * IBC 2018 Table 1604.3 footnote (cantilevers: twice the length, from memory).
  */
 export function evaluateSize(
   prepared: PreparedMember,
@@ -89,23 +99,28 @@ export function evaluateSize(
   selfWeightPlf: number,
   support: SupportSpec,
 ): SizeEvaluation {
-  const { input, spans, combinations, scratch, unitSelfWeight } = prepared;
+  const { input, geometry, combinations, scratch, unitSelfWeight, regionRanges } = prepared;
   const s = prepared.selfWeight ? selfWeightPlf : 0;
-  const L = spans.designSpanFt;
-  const unit = unitUniformMaxima(L);
+  const regions = geometry.regions;
+  const regionCount = regions.length;
+  const unitMoment = prepared.unitSelfWeightMaxima.momentLbFt;
+  const unitEi = prepared.unitSelfWeightMaxima.eiByRegion;
   const eiLbIn2 = section.EPrimePsi * section.ixIn4;
   const unbracedIn = input.unbracedLengthFt === undefined ? null : input.unbracedLengthFt * IN_PER_FT;
   const dFt = (input.shearAtD ?? true) ? section.dIn / IN_PER_FT : 0;
   const shears = endShearsFor(prepared, dFt);
+  const groupShears = shears.byGroup;
+  const sideCount = shears.unitSelfWeight.length;
   const preset = DEFLECTION_PRESETS[input.deflectionUse ?? 'floor'];
-  const liveLimitIn = (L * IN_PER_FT) / preset.liveRatio;
-  const ratioLimitIn = (L * IN_PER_FT) / preset.totalRatio;
   const capIn = input.deflectionCapIn ?? Infinity;
-  const totalLimitIn = Math.min(ratioLimitIn, capIn);
+  const liveLimits = regions.map((r) => (r.limitLengthFt * IN_PER_FT) / preset.liveRatio);
+  const ratioLimits = regions.map((r) => (r.limitLengthFt * IN_PER_FT) / preset.totalRatio);
+  const totalLimits = ratioLimits.map((limit) => Math.min(limit, capIn));
   const toIn = IN3_PER_FT3 / eiLbIn2;
   const lesser = section.volumeLesserOfCL;
   const Kcr = prepared.creepKcr;
   const n = combinations.length;
+  const supportCount = geometry.supportsFt.length;
   const { FbPrime, stabilities, bendBound, totalBound } = prepared.work;
   bendBound.fill(-1);
   totalBound.fill(-1);
@@ -114,13 +129,14 @@ export function evaluateSize(
   const live: SizeEvaluation['deflectionLive'] = {
     id: 'deflection-live',
     demand: 0,
-    capacity: liveLimitIn,
+    capacity: liveLimits[0],
     ratio: 0,
     combinationIndex: 0,
-    limitIn: liveLimitIn,
+    limitIn: liveLimits[0],
+    regionIndex: 0,
   };
-  let leftLb = 0;
-  let rightLb = 0;
+  const reactionsLb = geometry.supportsFt.map(() => 0);
+  let largestReactionLb = 0;
   let reactionIndex = 0;
 
   for (let c = 0; c < n; c++) {
@@ -139,17 +155,24 @@ export function evaluateSize(
     stabilities[c] = stability;
     FbPrime[c] =
       section.FbBasePsi * CD * (lesser ? Math.min(stability.CL, section.sizeFactor.value) : stability.CL);
-    bendBound[c] = ((prep.maxMomentLbFt + swPlf * unit.momentLbFt) * IN_PER_FT) / section.sxIn3 / FbPrime[c];
-    totalBound[c] = (prep.eiTotalDeflection + Kcr * swPlf * unit.eiDeflection) * toIn;
-
-    let vLeft = shears.unitSelfWeight[0] * swPlf;
-    let vRight = shears.unitSelfWeight[1] * swPlf;
-    for (const t of LOAD_TYPES) {
-      const f = factors[t] ?? 0;
-      vLeft += f * shears.byType[t][0];
-      vRight += f * shears.byType[t][1];
+    bendBound[c] = ((prep.maxMomentLbFt + swPlf * unitMoment) * IN_PER_FT) / section.sxIn3 / FbPrime[c];
+    let worstTotal = 0;
+    for (let r = 0; r < regionCount; r++) {
+      const bound = ((prep.eiTotalByRegion[r] + Kcr * swPlf * unitEi[r]) * toIn) / totalLimits[r];
+      if (bound > worstTotal) worstTotal = bound;
     }
-    const shearLb = Math.max(vLeft, vRight);
+    totalBound[c] = worstTotal;
+
+    let shearLb = 0;
+    let shearSide = 0;
+    for (let i = 0; i < sideCount; i++) {
+      let v = shears.unitSelfWeight[i] * swPlf;
+      for (let g = 0; g < groupShears.length; g++) v += prep.coeffs[g] * groupShears[g][i];
+      if (Math.abs(v) > shearLb) {
+        shearLb = Math.abs(v);
+        shearSide = i;
+      }
+    }
     const fv = (1.5 * shearLb) / section.areaIn2;
     const FvPrime = section.FvBasePsi * CD;
     if (!shear || fv / FvPrime > shear.ratio) {
@@ -161,20 +184,32 @@ export function evaluateSize(
         combinationIndex: c,
         shearLb,
         CD,
+        supportIndex: shears.sideSupport[shearSide],
       };
     }
 
-    const rL = prep.state.reactionsLb[0] + (swPlf * L) / 2;
-    const rR = prep.state.reactionsLb[1] + (swPlf * L) / 2;
-    if (Math.max(rL, rR) > Math.max(leftLb, rightLb)) reactionIndex = c;
-    leftLb = Math.max(leftLb, rL);
-    rightLb = Math.max(rightLb, rR);
+    let largestHere = 0;
+    for (let i = 0; i < supportCount; i++) {
+      const reaction = prep.state.reactionsLb[i] + swPlf * unitSelfWeight.reactionsLb[i];
+      if (reaction > largestHere) largestHere = reaction;
+      if (reaction > reactionsLb[i]) reactionsLb[i] = reaction;
+    }
+    if (largestHere > largestReactionLb) {
+      largestReactionLb = largestHere;
+      reactionIndex = c;
+    }
 
-    const liveIn = Math.abs(prep.eiVariableDeflection.value) * toIn;
-    if (liveIn > live.demand) {
-      live.demand = liveIn;
-      live.ratio = liveIn / liveLimitIn;
-      live.combinationIndex = c;
+    for (let r = 0; r < regionCount; r++) {
+      const liveIn = prep.eiVariableByRegion[r] * toIn;
+      const ratio = liveIn / liveLimits[r];
+      if (ratio > live.ratio) {
+        live.demand = liveIn;
+        live.capacity = liveLimits[r];
+        live.limitIn = liveLimits[r];
+        live.ratio = ratio;
+        live.combinationIndex = c;
+        live.regionIndex = r;
+      }
     }
   }
   if (!shear) throw new CalcInputError('sources', 'No load combination carries load: add a load source');
@@ -206,42 +241,37 @@ export function evaluateSize(
   }
 
   let total: SizeEvaluation['deflectionTotal'] | null = null;
-  const extra = Kcr - 1;
   const firstTotal = largestIndex(totalBound);
   for (let k = -1; k < n; k++) {
     const c = k < 0 ? firstTotal : k;
-    if ((k >= 0 && c === firstTotal) || totalBound[c] < 0 || (total && totalBound[c] <= total.demand))
+    if ((k >= 0 && c === firstTotal) || totalBound[c] < 0 || (total && totalBound[c] <= total.ratio))
       continue;
     const prep = combinations[c];
-    combineStates(
-      scratch,
-      [prep.state, prepared.deadState, prepared.liveState, unitSelfWeight],
-      [1, extra, extra * prep.sustainedLiveFactor, s * (prep.combination.factors.D ?? 0) * Kcr],
-    );
-    const totalIn = Math.abs(stateMaxEiDeflection(scratch).value) * toIn;
-    if (!total || totalIn > total.demand) {
-      total = {
-        id: 'deflection-total',
-        demand: totalIn,
-        capacity: totalLimitIn,
-        ratio: totalIn / totalLimitIn,
-        combinationIndex: c,
-        limitIn: totalLimitIn,
-        capGoverns: capIn < ratioLimitIn,
-      };
+    const coeffs = prep.creepCoeffs;
+    coeffs[coeffs.length - 1] = s * (prep.combination.factors.D ?? 0) * Kcr;
+    combineStates(scratch, prepared.groupAndUnitStates, coeffs);
+    for (let r = 0; r < regionCount; r++) {
+      const [from, to] = regionRanges[r];
+      const totalIn = Math.abs(stateMaxEiDeflectionBetween(scratch, from, to).value) * toIn;
+      const ratio = totalIn / totalLimits[r];
+      if (!total || ratio > total.ratio) {
+        total = {
+          id: 'deflection-total',
+          demand: totalIn,
+          capacity: totalLimits[r],
+          ratio,
+          combinationIndex: c,
+          limitIn: totalLimits[r],
+          regionIndex: r,
+          capGoverns: capIn < ratioLimits[r],
+        };
+      }
     }
   }
   if (!bending || !total)
     throw new CalcInputError('sources', 'No load combination carries load: add a load source');
 
-  const bearing = bearingNumbers(
-    section,
-    support,
-    leftLb,
-    rightLb,
-    spans.bearingLeftIn,
-    spans.bearingRightIn,
-  );
+  const bearing = bearingNumbers(section, support, reactionsLb, geometry.bearingsIn);
   bearing.combinationIndex = reactionIndex;
   const checks: CheckNumbers[] = [bending, shear, live, total, bearing];
   let governing = checks[0];
@@ -277,28 +307,30 @@ function largestIndex(bounds: readonly number[]): number {
 function bearingNumbers(
   section: SectionFactors,
   support: SupportSpec,
-  leftLb: number,
-  rightLb: number,
-  bearingLeftIn: number,
-  bearingRightIn: number,
+  reactionsLb: number[],
+  bearingsIn: readonly number[],
 ): BearingNumbers {
   const memberPerInLb = Math.min(section.bIn, support.widthIn) * section.FcPerpPrimePsi;
   const platePerInLb = support.plateFcPerpPsi === null ? Infinity : support.widthIn * support.plateFcPerpPsi;
   const perInLb = Math.min(memberPerInLb, platePerInLb);
-  const leftRequiredIn = leftLb / perInLb;
-  const rightRequiredIn = rightLb / perInLb;
-  const leftWorse = leftRequiredIn / bearingLeftIn >= rightRequiredIn / bearingRightIn;
-  const demand = leftWorse ? leftRequiredIn : rightRequiredIn;
-  const capacity = leftWorse ? bearingLeftIn : bearingRightIn;
+  const requiredLengthsIn = reactionsLb.map((r) => r / perInLb);
+  let worst = 0;
+  for (let i = 1; i < reactionsLb.length; i++) {
+    if (requiredLengthsIn[i] / bearingsIn[i] > requiredLengthsIn[worst] / bearingsIn[worst]) worst = i;
+  }
+  const last = reactionsLb.length - 1;
   return {
     id: 'bearing',
-    demand,
-    capacity,
-    ratio: demand / capacity,
+    demand: requiredLengthsIn[worst],
+    capacity: bearingsIn[worst],
+    ratio: requiredLengthsIn[worst] / bearingsIn[worst],
     combinationIndex: 0,
-    leftLb,
-    rightLb,
-    requiredLengthIn: Math.max(leftRequiredIn, rightRequiredIn),
+    leftLb: reactionsLb[0],
+    rightLb: reactionsLb[last],
+    reactionsLb,
+    requiredLengthsIn,
+    requiredLengthIn: Math.max(requiredLengthsIn[0], requiredLengthsIn[last]),
+    supportIndex: worst,
     governedBy: platePerInLb < memberPerInLb ? 'plate' : 'member',
   };
 }

@@ -13,6 +13,7 @@ export {
   prepareMember,
   endShearsFor,
   DEFAULT_BEARING_IN,
+  type LoadGroup,
   type MemberSpans,
   type PreparedMember,
   type PreparedCombination,
@@ -29,7 +30,13 @@ export { resolveMember, type ResolvedMember } from './resolve-member';
 export { unknownGradeMaterial } from './unknown-grade';
 export { DEFLECTION_PRESETS, type DeflectionPreset } from './deflection-presets';
 export { creepFactor } from './creep';
-export { endShearsAtD } from './end-shears';
+export { endShearsAtD, supportSideShears } from './end-shears';
+export {
+  memberGeometry,
+  DEFAULT_CENTRE_BEARING_IN,
+  type GeometryRegion,
+  type MemberGeometry,
+} from './member-geometry';
 export { jackStuds, JACK_STUD_IN, TWO_JACKS_OVER_FT, type JackStuds } from './bearing-jacks';
 export { combinationDemands, supportNames } from './combination-demands';
 export {

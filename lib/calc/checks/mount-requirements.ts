@@ -26,10 +26,15 @@ export interface MountResult {
   requirements: string[];
 }
 
-/** Joists along the clear span at their spacing (one or both sides): per side and in all. */
+/** Joists along the clear span(s) and overhangs at their spacing (one or both sides): per side and sides. */
 function joistCount(input: MemberLoadingInput): { perSide: number; sides: number; spacingIn: number } {
   const spacingIn = input.joistSpacingIn ?? DEFAULT_JOIST_SPACING_IN;
-  const perSide = Math.max(0, Math.ceil((input.clearSpanFt * 12) / spacingIn - 1e-9) - 1);
+  const clearFt =
+    input.clearSpanFt +
+    (input.secondClearSpanFt ?? 0) +
+    (input.overhangLeftFt ?? 0) +
+    (input.overhangRightFt ?? 0);
+  const perSide = Math.max(0, Math.ceil((clearFt * 12) / spacingIn - 1e-9) - 1);
   const sides = (input.joistsBothSides ?? true) ? 2 : 1;
   return { perSide, sides, spacingIn };
 }

@@ -3,8 +3,6 @@ import type { TakedownLine } from '@/lib/calc/loads';
 import { LOAD_TYPES, type LoadType } from '@/lib/calc/types';
 import { formatNumberTrimmed as n } from '@/lib/format/number';
 
-const IN_PER_FT = 12;
-
 /** A point load on the member: it needs its own shore or post, it is not in the shoring walls' plf. */
 export interface ShoringPointLoad {
   label: string;
@@ -62,7 +60,7 @@ export function shoringLineLoad(prepared: PreparedMember): ShoringLineLoad {
     if (wPlf > best.wPlf) best = { combination: combination.name, wPlf, terms };
   }
 
-  const offsetFt = prepared.spans.bearingLeftIn / 2 / IN_PER_FT;
+  const offsetFt = prepared.geometry.positionOffsetFt;
   const points = new Map<string, ShoringPointLoad>();
   for (const line of prepared.takedown) {
     if (line.pLb === undefined || line.atFt === undefined) continue;

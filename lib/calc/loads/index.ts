@@ -16,3 +16,4 @@ export {
   type RoofCovering,
   type WhatsAbove,
 } from '@/lib/calc/loads/whats-above';
+export { liveLoadPatterns, patternFactor, patternedName } from '@/lib/calc/loads/live-patterns';

@@ -58,6 +58,10 @@ export function envelopeReasons(input: PrescriptiveInput): string[] {
   }
   if (member.mount === 'flush')
     reasons.push('it is flush with the joists (hangers), not a header in the wall');
+  if (member.overhangLeftFt !== undefined || member.overhangRightFt !== undefined)
+    reasons.push('it overhangs a support: header tables are for simple spans');
+  if (member.secondClearSpanFt !== undefined)
+    reasons.push('it is continuous over a centre post: header tables are for simple spans');
   if (member.mount === 'raised')
     reasons.push(
       'it is raised into the attic with the ceiling joists hung from it, not a header in the wall',

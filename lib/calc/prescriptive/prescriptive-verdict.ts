@@ -47,7 +47,7 @@ export function prescriptiveVerdict(input: PrescriptiveInput): PrescriptiveResul
     if (thicknessClass(size) !== 'two-three') continue;
     const evaluation = evaluateSize(
       prepared,
-      sectionFactors(member.materialId, size, prepared.spans.designSpanFt, conditions),
+      sectionFactors(member.materialId, size, prepared.geometry.longestSpanFt, conditions),
       size.selfWeightPlf,
       support,
     );

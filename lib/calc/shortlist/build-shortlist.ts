@@ -143,7 +143,7 @@ export function buildShortlist(input: ShortlistInput): ShortlistResult {
       try {
         evaluation = evaluateSize(
           prepared,
-          sectionFactors(materialId, size, designSpanFt, conditions),
+          sectionFactors(materialId, size, prepared.geometry.longestSpanFt, conditions),
           size.selfWeightPlf,
           support,
         );

@@ -3,18 +3,35 @@ import { creepFactor } from '@/lib/calc/checks/creep';
 import { DEFAULT_BEARING_IN } from '@/lib/calc/checks/prepare-member';
 import { DEFLECTION_PRESETS } from '@/lib/calc/checks/deflection-presets';
 import { sectionFactors } from '@/lib/calc/checks/section-factors';
-import { formatSpanFtIn } from '@/lib/format';
+import { formatNumber, formatSpanFtIn } from '@/lib/format';
 import { asdCombinations } from '@/lib/calc/loads';
 import { getMaterial, listSizes } from '@/lib/calc/materials';
 import { CAUTION_TEXT } from '@/lib/calc/prescriptive/caution';
 import { CalcInputError, type LoadCombination, type LoadType } from '@/lib/calc/types';
 import { CALC_BOUNDS } from '@/shared/schemas/calc/bounds';
-import type { SpanTableInput, SpanTableResult } from '@/shared/schemas/calc/span-table';
+import type { SpanTableInput, SpanTableLayout, SpanTableResult } from '@/shared/schemas/calc/span-table';
+import { patternedLayout, patternedSpanLimits } from './patterned-span-limits';
 import { uniformSpanLimits, type UniformSpanCase } from './uniform-span-limits';
 
 const IN_PER_FT = 12;
+/** Overhang of the 'overhang' layout when none is given: a quarter of the back span (common practice). */
+const DEFAULT_OVERHANG_FRACTION = 0.25;
 /** Span used to look up section factors; only glulam C_V depends on span and it is solved per span. */
 const LOOKUP_SPAN_FT = 21;
+
+function layoutNotes(layout: SpanTableLayout, overhangFraction: number): string[] {
+  if (layout === 'simple') return ['One simple span between two supports.'];
+  const patterned =
+    'Live, roof live and snow loads also placed span by span (ASCE 7 §4.3.3; snow at half elsewhere, §7.5).';
+  if (layout === 'two-span') {
+    return [
+      `Two equal spans continuous over a centre post, each the span shown; the centre post carries about 1.25 × the load of one span (AWC Design Aid No. 6). ${patterned}`,
+    ];
+  }
+  return [
+    `One span with an overhang of ${formatNumber(overhangFraction, 2)} × the span past one support (the span shown is the back span); the overhang's deflection is held to twice its length in the limits. ${patterned}`,
+  ];
+}
 
 /**
  * A span table for the user's own loads: for each size of the chosen materials and each tributary width,
@@ -22,7 +39,9 @@ const LOOKUP_SPAN_FT = 21;
  * the same rules as the member check (ASD combinations of the edition, C_D per combination, bending with
  * C_L = 1.0 for a braced top edge, shear at d, live and total deflection with creep, bearing on the member
  * and the plate), each limit solved in closed form (glulam bending by bisection to 1/16 in). Never a code
- * table: the numbers come from the user's loads. A material or ply count named twice is tabulated once; the
+ * table: the numbers come from the user's loads. Two equal continuous spans or a span with an overhang are
+ * solved the same way from a unit member (patternedSpanLimits). A material or ply count named twice is
+ * tabulated once; the
  * work (sizes × widths × combinations) is capped at CALC_BOUNDS.spanTableWork.
  *
  * @param input parsed spanTableInputSchema (psf, ft, in)
@@ -62,11 +81,15 @@ export function buildSpanTable(input: SpanTableInput): SpanTableResult {
   const materialIds = [...new Set(input.materialIds)];
   let sizeCount = 0;
   for (const materialId of materialIds) sizeCount += listSizes(materialId, { plies }).length;
-  const work = sizeCount * input.tributaryWidthsFt.length * Math.max(1, active.length);
+  const layout = input.layout ?? 'simple';
+  const overhangFraction = input.overhangFraction ?? DEFAULT_OVERHANG_FRACTION;
+  const unit = layout === 'simple' ? null : patternedLayout(layout, overhangFraction, active);
+  const combinationCount = unit ? unit.combinations.length : active.length;
+  const work = sizeCount * input.tributaryWidthsFt.length * Math.max(1, combinationCount);
   if (work > CALC_BOUNDS.spanTableWork) {
     throw new CalcInputError(
       'materialIds',
-      `This span table asks for ${work.toLocaleString('en-US')} checks (${sizeCount} sizes × ${input.tributaryWidthsFt.length} tributary widths × ${active.length} load combinations); at most ${CALC_BOUNDS.spanTableWork.toLocaleString('en-US')} per request: choose fewer materials, ply counts or widths`,
+      `This span table asks for ${work.toLocaleString('en-US')} checks (${sizeCount} sizes × ${input.tributaryWidthsFt.length} tributary widths × ${combinationCount} load combinations); at most ${CALC_BOUNDS.spanTableWork.toLocaleString('en-US')} per request: choose fewer materials, ply counts or widths`,
     );
   }
 
@@ -101,7 +124,9 @@ export function buildSpanTable(input: SpanTableInput): SpanTableResult {
           bearingIn,
           support,
         };
-        const limits = uniformSpanLimits(materialId, size, section, spanCase);
+        const limits = unit
+          ? patternedSpanLimits(materialId, size, section, spanCase, unit)
+          : uniformSpanLimits(materialId, size, section, spanCase);
         const clearSpanFt = Math.max(0, limits.spanFt - bearingIn / IN_PER_FT);
         return {
           tributaryFt,
@@ -120,6 +145,7 @@ export function buildSpanTable(input: SpanTableInput): SpanTableResult {
     caution: CAUTION_TEXT,
     spanBasis,
     spanHeading,
+    layout,
     tributaryWidthsFt: input.tributaryWidthsFt,
     rows,
     notes: [
@@ -129,6 +155,7 @@ export function buildSpanTable(input: SpanTableInput): SpanTableResult {
       'Printed spans are rounded down to the inch.',
       `Top edge braced along its length (C_L = 1.0); bearing ${bearingIn} in at each end; deflection ${preset.label}: L/${preset.liveRatio} variable, L/${preset.totalRatio} total with creep.`,
       'Uniform loads only: point loads and partial loads need a member check.',
+      ...layoutNotes(layout, overhangFraction),
     ],
     warnings,
     sources: [

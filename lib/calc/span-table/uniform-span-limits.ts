@@ -132,12 +132,15 @@ function deflectionSpan(eiLbIn2: number, wPlf: number, ratio: number, capIn: num
 }
 
 /**
- * Largest glulam bending span, ft, in closed form. With C_V = (A/L)^e ≤ 1, A = 21 ft·(12/d)(5.125/b),
+ * Largest glulam bending span, ft, in closed form (any layout whose moment grows as the span squared). With C_V = (A/L)^e ≤ 1, A = 21 ft·(12/d)(5.125/b),
  * e = 1/10 western or 1/20 Southern Pine (NDS 2018 eq. 5.3-1): the span without C_V is L₀ = √(8·S·F_b/w);
  * if L₀ ≤ A then C_V = 1 there and L₀ is the span, else w·L²/(8S) = F_b·(A/L)^e gives
  * L = (L₀²·A^e)^(1/(2 + e)).
+ * @param spanWithoutCvFt the bending span with C_V = 1, ft; size the glulam size (in); exponent e
+ * @example glulamBendingSpan(30, getSize('glulam-24f-v4-df', '5.125x12'), 0.1); // < 30
+ * Reference: NDS 2018 §5.3.6, equation 5.3-1.
  */
-function glulamBendingSpan(spanWithoutCvFt: number, size: MemberSize, exponent: number): number {
+export function glulamBendingSpan(spanWithoutCvFt: number, size: MemberSize, exponent: number): number {
   const ref = GLULAM_VOLUME_REFERENCE;
   const bIn = Math.min(size.bIn, ref.maxWidthIn);
   const aFt = ref.lengthFt * (ref.depthIn / size.dIn) * (ref.widthIn / bIn);

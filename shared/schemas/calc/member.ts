@@ -16,9 +16,16 @@ import {
  * Spans, and which is which:
  * - clear span: the opening between the faces of the supports (what is measured on site);
  * - design span = clear span + half the bearing length at each end (support centre to support centre);
- * - length to buy = clear span + the full bearing length at both ends.
+ * - length to buy = clear span + the full bearing length at both ends (plus any overhang and second span).
  * Load source positions (point loads, extents of partial loads) are measured from the face of the left
- * support, along the clear span.
+ * support, along the member (or from the tip of the left overhang when there is one); a uniform source with
+ * no extent covers the whole member. Positions in the result (demands, diagrams) are ft from the member's
+ * left end: the left support's centre, or the tip of the left overhang.
+ *
+ * A member may overhang one or both supports (overhangLeftFt, overhangRightFt) and may run continuous over
+ * a centre post into a second span (secondClearSpanFt): live, roof live and snow loads are then also placed
+ * span by span (ASCE 7 §4.3.3 partial loading; snow at half on the unloaded spans, ASCE 7 §7.5), and a
+ * support that can lift is reported.
  *
  * Optional fields take the default named beside them; the result echoes each input with the flag
  * `measured`, `assumed` or `default` (a field absent from the input is `default`; a field present is the flag
@@ -86,6 +93,22 @@ export const memberCheckInputSchema = z.object({
   /** Bearing length at each end, in; default 3 (two jack studs, common practice). */
   bearingLeftIn: atLeast('the left bearing length', 0.5, 'in').max(24).optional(),
   bearingRightIn: atLeast('the right bearing length', 0.5, 'in').max(24).optional(),
+  /**
+   * The member runs on past its left support by this much, ft, from the face of the support to the tip (a
+   * cantilevered end). With a left overhang, load positions are measured from its tip. Omitted = none.
+   */
+  overhangLeftFt: positive('the left overhang').max(20, { message: 'Overhang at most 20 ft' }).optional(),
+  /** The member runs on past its right support by this much, ft, from the face of the support to the tip. */
+  overhangRightFt: positive('the right overhang').max(20, { message: 'Overhang at most 20 ft' }).optional(),
+  /**
+   * The member is continuous over a centre post into a second span of this clear span, ft (two spans, equal
+   * or not): clearSpanFt is then the left span, bearingRightIn the far end's bearing. Omitted = one span.
+   */
+  secondClearSpanFt: positive('the second clear span')
+    .max(40, { message: 'Clear span at most 40 ft' })
+    .optional(),
+  /** Bearing length on the centre post of a continuous member, in; default 3.5 (a 4x4 post's face). */
+  centreBearingIn: atLeast('the centre bearing length', 0.5, 'in').max(24).optional(),
   /** Roof slope, rise in 12; default 0. */
   roofPitchIn12: z.number().finite().min(0).max(24).optional(),
   /** Snow on the roof above; omitted = no snow on this member's roof sources. */
@@ -281,10 +304,20 @@ export const memberCheckResultSchema = z.object({
   }),
   spans: z.object({
     clearSpanFt: z.number(),
+    /** Design span of the (first) span between supports, ft. */
     designSpanFt: z.number(),
     lengthToBuyFt: z.number(),
     bearingLeftIn: z.number(),
     bearingRightIn: z.number(),
+    /** Continuous: the second span's clear and design spans (ft) and the centre bearing (in). */
+    secondClearSpanFt: z.number().optional(),
+    secondDesignSpanFt: z.number().optional(),
+    centreBearingIn: z.number().optional(),
+    /** Overhangs as entered (support face to tip), ft. */
+    overhangLeftFt: z.number().optional(),
+    overhangRightFt: z.number().optional(),
+    /** Length analysed, left end to right end (support centres or overhang tips), ft; with overhangs or two spans. */
+    memberLengthFt: z.number().optional(),
   }),
   inputs: listOf(echoedInputSchema, CALC_BOUNDS.echoedInputs, 'echoed inputs'),
   /**
@@ -323,7 +356,10 @@ export const memberCheckResultSchema = z.object({
     rightLb: z.number(),
     combination: z.string(),
     /** Reaction at each end by load type (unfactored), lb. */
-    byType: z.record(loadTypeSchema, z.object({ leftLb: z.number(), rightLb: z.number() })),
+    byType: z.record(
+      loadTypeSchema,
+      z.object({ leftLb: z.number(), rightLb: z.number(), centreLb: z.number().optional() }),
+    ),
     /**
      * Per support: the largest reaction of any combination and that combination, and the least (a negative
      * least is uplift: the member must be held down there) with its combination, lb.
@@ -369,7 +405,8 @@ export const memberCheckResultSchema = z.object({
   posts: z
     .array(
       z.object({
-        end: z.enum(['left', 'right']),
+        /** Which support the post is under (a continuous member's centre post is checked too). */
+        end: supportNameSchema,
         loadLb: z.number(),
         ratio: z.number(),
         pass: z.boolean(),

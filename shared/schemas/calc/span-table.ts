@@ -11,6 +11,15 @@ import { checkIdSchema, deflectionUseSchema, supportKinds } from '@/shared/schem
  * centre) on request; the result says which. Every cell carries both.
  */
 
+/**
+ * How the member is supported: one simple span (default); two equal spans continuous over a centre post
+ * (the span printed is each span); or one span with a cantilevered end of overhangFraction of the span past
+ * the right support (the span printed is the back span). Live loads are placed span by span in the last two.
+ */
+export const spanTableLayouts = ['simple', 'two-span', 'overhang'] as const;
+export const spanTableLayoutSchema = z.enum(spanTableLayouts);
+export type SpanTableLayout = z.infer<typeof spanTableLayoutSchema>;
+
 /** Which span a span table prints: the clear span (default) or the design span. */
 export const spanBases = ['clear', 'design'] as const;
 export const spanBasisSchema = z.enum(spanBases);
@@ -63,6 +72,15 @@ export const spanTableInputSchema = z.object({
   bearingIn: z.number().finite().positive().max(24).optional(),
   /** Print clear spans (default) or design spans. */
   spanBasis: spanBasisSchema.optional(),
+  /** Simple span (default), two equal continuous spans, or a span with an overhang. */
+  layout: spanTableLayoutSchema.optional(),
+  /** Overhang / back span for layout 'overhang'; default 0.25 (a quarter of the back span, common practice). */
+  overhangFraction: z
+    .number()
+    .finite()
+    .min(0.05, { message: 'Overhang at least 0.05 of the span' })
+    .max(0.5, { message: 'Overhang at most half the span' })
+    .optional(),
   supportKind: z.enum(supportKinds).optional(),
   supportWidthIn: z.number().finite().positive().max(12).optional(),
   plateMaterialId: z.string().min(1).optional(),
@@ -95,6 +113,7 @@ export const spanTableResultSchema = z.object({
   caution: z.string(),
   /** Which span spanText prints, and the heading that says so. */
   spanBasis: spanBasisSchema.optional(),
+  layout: spanTableLayoutSchema.optional(),
   spanHeading: z.string().optional(),
   tributaryWidthsFt: z.array(z.number()).max(CALC_BOUNDS.tributaryWidths),
   rows: z.array(spanTableRowSchema).max(CALC_BOUNDS.catalogueSizes),

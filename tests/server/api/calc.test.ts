@@ -333,3 +333,34 @@ describe('bounded work (CALC_BOUNDS)', () => {
     expect(message).toContain('sizes × 12 tributary widths');
   });
 });
+
+describe('overhanging and continuous members through the API', () => {
+  it('checks a beam continuous over a centre post with an overhang, with diagrams of the whole member', async () => {
+    const res = await contractor
+      .post('/api/calc/check')
+      .send({
+        ...header,
+        kind: 'beam',
+        materialId: 'lvl-2.0e',
+        sizeId: '3-ply-1.75x11.875',
+        clearSpanFt: 8,
+        secondClearSpanFt: 10,
+        overhangRightFt: 2,
+        diagrams: true,
+      })
+      .expect(200);
+    const result = memberCheckResultSchema.parse(res.body);
+    expect(result.reactions.bySupport?.map((r) => r.support)).toEqual(['left', 'centre', 'right']);
+    expect(result.posts).toBeUndefined();
+    const samples = result.diagram?.samples ?? [];
+    expectApprox(samples[samples.length - 1].xFt, result.spans.memberLengthFt ?? NaN, { rel: 1e-12 });
+  });
+
+  it('tabulates two continuous spans', async () => {
+    const res = await contractor
+      .post('/api/calc/span-table')
+      .send({ ...spanTableBody, layout: 'two-span' })
+      .expect(200);
+    expect(spanTableResultSchema.parse(res.body).layout).toBe('two-span');
+  });
+});

@@ -149,3 +149,84 @@ describe('printed spans: clear by default, design on request', () => {
     expect(cell?.spanText).toBe(`${Math.floor(designIn / 12)}-${designIn % 12}`);
   });
 });
+
+describe('span tables for two continuous spans and for a span with an overhang', () => {
+  const materials = ['sawn-douglas-fir-larch-no2', 'glulam-24f-v4-df', 'lvl-2.0e'];
+  const bearingIn = 3;
+
+  it.each(['two-span', 'overhang'] as const)(
+    '%s: at the solved span the member check of that geometry governs at 1 (same rules, solved)',
+    (layout) => {
+      fc.assert(
+        fc.property(
+          fc.constantFrom(...materials),
+          fc.nat(),
+          fc.double({ min: 1, max: 16, noNaN: true }),
+          fc.constantFrom('ASCE 7-16' as const, 'ASCE 7-22' as const),
+          (materialId, seed, tributaryFt, edition) => {
+            const table = buildSpanTable(
+              spanTableInputSchema.parse({
+                edition,
+                deadPsf: 15,
+                livePsf: 40,
+                roofSnowPsf: 25,
+                tributaryWidthsFt: [tributaryFt],
+                materialIds: [materialId],
+                plies: materialId.startsWith('glulam') ? [1] : [2],
+                bearingIn,
+                shearAtD: false,
+                layout,
+                overhangFraction: 0.3,
+              }),
+            );
+            const row = table.rows[seed % table.rows.length];
+            const cell = row.cells[0];
+            const spanFt = cell.designSpanFt ?? NaN;
+            // The member check takes clear spans to 40 ft.
+            fc.pre(spanFt < 39);
+            const geometry =
+              layout === 'two-span'
+                ? { secondClearSpanFt: spanFt - bearingIn / 12, centreBearingIn: bearingIn }
+                : { overhangRightFt: 0.3 * spanFt - bearingIn / 24 };
+            const result = checkMember(
+              memberCheckInputSchema.parse({
+                kind: 'beam',
+                edition,
+                clearSpanFt: spanFt - bearingIn / 12,
+                bearingLeftIn: bearingIn,
+                bearingRightIn: bearingIn,
+                ...geometry,
+                shearAtD: false,
+                sources: [
+                  { kind: 'floor', tributaryFt, deadPsf: 15, livePsf: 40 },
+                  { kind: 'roof', tributaryFt, deadPsf: 0, roofLivePsf: 0, snowPsf: 25 },
+                ],
+                materialId,
+                sizeId: row.sizeId,
+              }),
+            );
+            expectApprox(result.governing.ratio, 1, { rel: 1e-9 });
+            expect(result.governing.check).toBe(cell.governedBy);
+          },
+        ),
+        { numRuns: 40 },
+      );
+    },
+  );
+
+  it('says which layout it is and prints the span of each span', () => {
+    const table = buildSpanTable(
+      spanTableInputSchema.parse({
+        edition: 'ASCE 7-16',
+        deadPsf: 10,
+        livePsf: 40,
+        tributaryWidthsFt: [16 / 12],
+        materialIds: ['sawn-spruce-pine-fir-no1-no2'],
+        plies: [1],
+        layout: 'two-span',
+      }),
+    );
+    expect(table.layout).toBe('two-span');
+    expect(table.notes.join(' ')).toContain('Two equal spans continuous');
+  });
+});
