@@ -22,6 +22,13 @@ export type MemberDraft = {
   measuredTo: MeasuredTo;
   bearingLeft: string;
   bearingRight: string;
+  /** Past the left and right supports to the tip, ft (empty: no overhang). */
+  overhangLeft: string;
+  overhangRight: string;
+  /** Continuous over a centre post into a second span. */
+  continuous: boolean;
+  secondSpan: string;
+  centreBearing: string;
   /** null: the job's edition. */
   edition: LoadStandard | null;
   /** Ground snow, psf; prefilled from the job. */
@@ -57,6 +64,10 @@ export const flaggedFields = {
   clearSpan: 'clearSpanFt',
   bearingLeft: 'bearingLeftIn',
   bearingRight: 'bearingRightIn',
+  overhangLeft: 'overhangLeftFt',
+  overhangRight: 'overhangRightFt',
+  secondSpan: 'secondClearSpanFt',
+  centreBearing: 'centreBearingIn',
   groundSnow: 'snow.groundSnowPsf',
   roofPitch: 'roofPitchIn12',
   materialId: 'materialId',
@@ -76,6 +87,10 @@ const tapeFields: ReadonlySet<FlaggedField> = new Set([
   'clearSpan',
   'bearingLeft',
   'bearingRight',
+  'overhangLeft',
+  'overhangRight',
+  'secondSpan',
+  'centreBearing',
   'joistDepth',
   'underJoistsHeight',
   'atticClearance',
@@ -104,6 +119,11 @@ export function emptyMemberDraft(kind: MemberKind, job: Job): MemberDraft {
     measuredTo: 'framing',
     bearingLeft: '3',
     bearingRight: '3',
+    overhangLeft: '',
+    overhangRight: '',
+    continuous: false,
+    secondSpan: '',
+    centreBearing: '3-1/2',
     edition: null,
     groundSnow: String(job.groundSnowPsf),
     thermal: 'vented-attic-insulated-ceiling',

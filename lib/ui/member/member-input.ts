@@ -157,6 +157,14 @@ export function readMemberDraft(draft: MemberDraft, job: Job): DraftReading {
     clearSpanFt: clearSpanFt as number,
     bearingLeftIn: r.inches('bearingLeft', draft.bearingLeft, 'left bearing length'),
     bearingRightIn: r.inches('bearingRight', draft.bearingRight, 'right bearing length'),
+    overhangLeftFt: r.feet('overhangLeft', draft.overhangLeft, 'left overhang'),
+    overhangRightFt: r.feet('overhangRight', draft.overhangRight, 'right overhang'),
+    secondClearSpanFt: draft.continuous
+      ? r.feet('secondSpan', draft.secondSpan, 'second clear span', true)
+      : undefined,
+    centreBearingIn: draft.continuous
+      ? r.inches('centreBearing', draft.centreBearing, 'centre bearing length')
+      : undefined,
     roofPitchIn12: r.number('roofPitch', draft.roofPitch, 'roof slope'),
     snow:
       groundSnowPsf > 0
@@ -201,6 +209,10 @@ const inputToDraft: Record<string, string> = {
   clearSpanFt: 'clearSpan',
   bearingLeftIn: 'bearingLeft',
   bearingRightIn: 'bearingRight',
+  overhangLeftFt: 'overhangLeft',
+  overhangRightFt: 'overhangRight',
+  secondClearSpanFt: 'secondSpan',
+  centreBearingIn: 'centreBearing',
   roofPitchIn12: 'roofPitch',
   'snow.groundSnowPsf': 'groundSnow',
   temperatureF: 'temperature',

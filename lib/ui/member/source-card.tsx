@@ -85,7 +85,7 @@ function SourceCardView({
           />
           <MeasureField
             label="Position from the left support"
-            hint="Measured from the face of the left support."
+            hint="Measured from the face of the left support (from the tip of a left overhang)."
             unit="ft"
             tape
             value={source.at}

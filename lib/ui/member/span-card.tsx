@@ -1,5 +1,6 @@
 import { memo } from 'react';
 import { Card } from '@/lib/ui/card';
+import { CheckRow } from '@/lib/ui/check-row';
 import { ChoiceGroup } from '@/lib/ui/choice-group';
 import type { MemberDraftState } from '@/lib/hooks/use-member-draft';
 import type { MeasuredTo } from './member-draft';
@@ -62,6 +63,60 @@ function SpanCardView({ form, errors }: { form: MemberDraftState; errors: FieldE
         onFlag={(f) => setFlag('bearingRight', f)}
         testID="bearing-right"
       />
+      <CheckRow
+        label="Continuous over a centre post (two spans)"
+        hint="The clear span above is then the left span; the right bearing is at the far end."
+        value={draft.continuous}
+        onChange={set('continuous')}
+        testID="continuous"
+      />
+      {draft.continuous ? (
+        <>
+          <MeasureField
+            label="Second clear span"
+            unit="ft"
+            tape
+            value={draft.secondSpan}
+            onChangeText={set('secondSpan')}
+            errors={errors.secondSpan}
+            flag={draft.flags.secondSpan ?? 'default'}
+            onFlag={(f) => setFlag('secondSpan', f)}
+            testID="second-span"
+          />
+          <MeasureField
+            label="Bearing on the centre post"
+            hint="3-1/2 in is a 4x4 post's face."
+            unit="in"
+            value={draft.centreBearing}
+            onChangeText={set('centreBearing')}
+            errors={errors.centreBearing}
+            flag={draft.flags.centreBearing ?? 'default'}
+            onFlag={(f) => setFlag('centreBearing', f)}
+            testID="centre-bearing"
+          />
+        </>
+      ) : null}
+      <MeasureField
+        label="Overhang past the left support (optional)"
+        hint="From the support's face to the tip. Load positions are then measured from the tip."
+        unit="ft"
+        value={draft.overhangLeft}
+        onChangeText={set('overhangLeft')}
+        errors={errors.overhangLeft}
+        flag={draft.flags.overhangLeft ?? 'default'}
+        onFlag={(f) => setFlag('overhangLeft', f)}
+        testID="overhang-left"
+      />
+      <MeasureField
+        label="Overhang past the right support (optional)"
+        unit="ft"
+        value={draft.overhangRight}
+        onChangeText={set('overhangRight')}
+        errors={errors.overhangRight}
+        flag={draft.flags.overhangRight ?? 'default'}
+        onFlag={(f) => setFlag('overhangRight', f)}
+        testID="overhang-right"
+      />
     </Card>
   );
 }
@@ -70,7 +125,26 @@ function SpanCardView({ form, errors }: { form: MemberDraftState; errors: FieldE
 export const SpanCard = memo(
   SpanCardView,
   sameCardSlice(
-    ['clearSpan', 'measuredTo', 'bearingLeft', 'bearingRight', 'flags'],
-    ['clearSpan', 'bearingLeft', 'bearingRight'],
+    [
+      'clearSpan',
+      'measuredTo',
+      'bearingLeft',
+      'bearingRight',
+      'overhangLeft',
+      'overhangRight',
+      'continuous',
+      'secondSpan',
+      'centreBearing',
+      'flags',
+    ],
+    [
+      'clearSpan',
+      'bearingLeft',
+      'bearingRight',
+      'overhangLeft',
+      'overhangRight',
+      'secondSpan',
+      'centreBearing',
+    ],
   ),
 );

@@ -135,3 +135,27 @@ describe('flags and sources', () => {
     expect(moveSource(list, 0, -1).map((s) => s.kind)).toEqual(['roof', 'floor', 'point']);
   });
 });
+
+describe('two spans and overhangs', () => {
+  it('reads a continuous member and its overhangs into the engine input, and back', () => {
+    const draft = {
+      ...beamDraft(),
+      continuous: true,
+      secondSpan: '10-6',
+      centreBearing: '5-1/2',
+      overhangRight: '1-6',
+    };
+    const { input, errors } = readMemberDraft(draft, job);
+    expect(errors).toEqual({});
+    expect(input).toMatchObject({ secondClearSpanFt: 10.5, centreBearingIn: 5.5, overhangRightFt: 1.5 });
+    const parsed = memberCheckInputSchema.parse(input);
+    expect(memberCheckInputSchema.parse(readMemberDraft(draftFromInput(parsed, job), job).input)).toEqual(
+      parsed,
+    );
+  });
+
+  it('asks for the second span when the member is continuous', () => {
+    const { errors } = readMemberDraft({ ...beamDraft(), continuous: true, secondSpan: '' }, job);
+    expect(errors.secondSpan?.[0]).toMatch(/second clear span/);
+  });
+});
