@@ -1,4 +1,4 @@
-import { unit } from 'mathjs';
+import { unit } from '@/lib/calc/units/unit-math';
 import { CalcInputError } from '@/lib/calc/types';
 import type { LoadKind } from '@/shared/schemas/calc/units';
 import { DECIMAL, normalizeEntry, shown } from '@/lib/calc/units/number-text';
