@@ -21,8 +21,11 @@ export interface AppOptions {
   production?: boolean;
   sessionDays?: number;
   signInLimit?: RateLimitOptions;
-  /** Mount GET /api/dev/mail (never in production). */
-  devMail?: boolean;
+  /**
+   * Key that opens GET /api/dev/mail (captured mail, from this machine only); without one, or in
+   * production, the route is not mounted.
+   */
+  devMailKey?: string;
   /** Folder of the exported web app; served with an SPA fallback when it holds an index.html. */
   webDir?: string;
   /** Request and error log; silent when omitted. */
@@ -59,7 +62,7 @@ export function createApp(options: AppOptions): Express {
       sessions,
       appOrigin: options.appOrigin,
       signInLimit: options.signInLimit ?? DEFAULT_SIGN_IN_LIMIT,
-      devMail: !production && (options.devMail ?? true),
+      devMailKey: production ? undefined : options.devMailKey,
     }),
   );
 

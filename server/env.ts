@@ -14,11 +14,14 @@ const envSchema = z
     APP_ORIGIN: z.url().optional(),
     SESSION_DAYS: z.coerce.number().int().min(1).max(365).default(30),
     WEB_DIR: z.string().min(1).default('dist'),
-    SEED_DEMO: z.string().default('1'),
+    SEED_DEMO: z.enum(['0', '1'], { message: 'Use 1 or 0' }).optional(),
+    DEV_MAIL_KEY: z.string().min(16, { message: 'Use at least 16 characters' }).max(200).optional(),
   })
   .transform((env) => ({
     ...env,
     APP_ORIGIN: (env.APP_ORIGIN ?? `http://${env.HOST}:${env.PORT}`).replace(/\/$/, ''),
+    // The demo firms share a published password: a production start adds them only when asked by name.
+    SEED_DEMO: env.SEED_DEMO === undefined ? env.NODE_ENV !== 'production' : env.SEED_DEMO === '1',
   }));
 
 export type Env = z.infer<typeof envSchema>;

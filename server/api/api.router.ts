@@ -27,7 +27,8 @@ export interface ApiOptions {
   sessions: Sessions;
   appOrigin: string;
   signInLimit: RateLimitOptions;
-  devMail: boolean;
+  /** Key of GET /api/dev/mail; the route is mounted only when there is one. */
+  devMailKey?: string;
 }
 
 /** Everything under /api; unknown paths end in a JSON 404. */
@@ -48,7 +49,7 @@ export function apiRouter(options: ApiOptions): Router {
   router.use('/members', membersRouter(members));
   router.use('/jobs', jobsRouter({ db, jobs: createJobsService(db) }));
   router.use('/calc', calcRouter({ calc: createCalcService() }));
-  if (options.devMail) router.use('/dev/mail', devMailRouter({ db }));
+  if (options.devMailKey) router.use('/dev/mail', devMailRouter({ db, key: options.devMailKey }));
   router.use(() => {
     throw new AppError('not_found', 'No such API route');
   });

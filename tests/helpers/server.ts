@@ -10,6 +10,9 @@ import type { CapturedMail } from '@/shared/schemas/mail';
 import type { SignUpInput } from '@/shared/schemas/auth';
 
 export const TEST_APP_ORIGIN = 'http://tributary.test';
+/** Key of the test server's GET /api/dev/mail. */
+export const TEST_DEV_MAIL_KEY = 'test-dev-mail-key-0123456789';
+export const DEV_MAIL_PATH = `/api/dev/mail?key=${TEST_DEV_MAIL_KEY}`;
 
 export interface TestServer {
   app: Express;
@@ -34,7 +37,13 @@ export async function createTestServer(options: Partial<AppOptions> = {}): Promi
     port: smtp.port,
     from: 'test@tributary.test',
   });
-  const app = createApp({ db: database.db, mailer, appOrigin: TEST_APP_ORIGIN, ...options });
+  const app = createApp({
+    db: database.db,
+    mailer,
+    appOrigin: TEST_APP_ORIGIN,
+    devMailKey: TEST_DEV_MAIL_KEY,
+    ...options,
+  });
   return {
     app,
     db: database.db,

@@ -7,6 +7,7 @@ import { meSchema } from '@/shared/schemas/auth';
 import { invitationPreviewSchema, invitationRowSchema, membersResponseSchema } from '@/shared/schemas/orgs';
 import { capturedMailListSchema } from '@/shared/schemas/mail';
 import {
+  DEV_MAIL_PATH,
   TEST_APP_ORIGIN,
   createTestServer,
   signUpBody,
@@ -41,7 +42,7 @@ describe('invitations', () => {
     expectApprox(days, 7, { abs: 1 / 86_400 });
 
     const mailList = capturedMailListSchema.parse(
-      (await request(server.app).get('/api/dev/mail').expect(200)).body,
+      (await request(server.app).get(DEV_MAIL_PATH).expect(200)).body,
     );
     expect(mailList.messages).toHaveLength(1);
     expect(mailList.messages[0].subject).toBe(

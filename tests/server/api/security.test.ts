@@ -5,6 +5,7 @@ import nodemailer from 'nodemailer';
 import request from 'supertest';
 import { afterEach, describe, expect, it } from 'vitest';
 import {
+  DEV_MAIL_PATH,
   TEST_APP_ORIGIN,
   createTestServer,
   signUpBody,
@@ -38,7 +39,7 @@ describe('security headers', () => {
     expect(res.headers['strict-transport-security']).toMatch(/max-age=\d+/);
     expect(String(res.headers['content-security-policy'])).toContain('upgrade-insecure-requests');
     expect(String(res.headers['set-cookie'])).toMatch(/; Secure/);
-    const mail = await request(server.app).get('/api/dev/mail').expect(404);
+    const mail = await request(server.app).get(DEV_MAIL_PATH).expect(404);
     expect(mail.body.error.code).toBe('not_found');
   });
 });
@@ -116,7 +117,7 @@ describe('routing', () => {
       text: 'Raw',
     });
     outside.close();
-    const res = await request(server.app).get('/api/dev/mail').expect(200);
+    const res = await request(server.app).get(DEV_MAIL_PATH).expect(200);
     expect(res.body.messages).toEqual([
       {
         id: expect.any(String),
