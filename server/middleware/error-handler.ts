@@ -13,8 +13,34 @@ const STATUS: Record<ApiErrorCode, number> = {
   internal: 500,
 };
 
-function isBodyParserError(error: unknown): error is { type: string; status: number } {
-  return typeof error === 'object' && error !== null && 'type' in error && 'status' in error;
+/** An error raised while reading the request (body-parser, the router's path decoding) with a 4xx status. */
+interface RequestReadError {
+  status: number;
+  type?: string;
+}
+
+function requestReadError(error: unknown): RequestReadError | undefined {
+  if (typeof error !== 'object' || error === null || !('status' in error)) return undefined;
+  const status = Number(error.status);
+  if (!Number.isInteger(status) || status < 400 || status > 499) return undefined;
+  return { status, type: 'type' in error && typeof error.type === 'string' ? error.type : undefined };
+}
+
+/** What the client is told for each kind of unreadable request; the status comes from the error. */
+const READ_MESSAGES: Record<string, string> = {
+  'entity.parse.failed': 'The request body is not valid JSON',
+  'entity.too.large': 'The request body is too large',
+  'charset.unsupported': 'Send the JSON body in UTF-8',
+  'encoding.unsupported': 'Send the body uncompressed or with Content-Encoding gzip, deflate or br',
+};
+
+function readErrorMessage(error: unknown, read: RequestReadError): string {
+  if (read.type && READ_MESSAGES[read.type]) return READ_MESSAGES[read.type];
+  if (error instanceof URIError) return 'The request path has a broken percent-encoding';
+  if (typeof error === 'object' && error !== null && 'code' in error && String(error.code).startsWith('Z_')) {
+    return 'The compressed request body is broken';
+  }
+  return 'The request could not be read';
 }
 
 /** Drizzle wraps driver errors (`DrizzleQueryError`), so the SQLite code may sit on a `cause`. */
@@ -35,12 +61,8 @@ function describe(error: unknown): { status: number; body: ApiErrorBody } {
   if (error instanceof AppError) return body(error.code, error.message, error.fields);
   if (error instanceof CalcInputError)
     return body('bad_request', error.message, { [error.field]: [error.message] });
-  if (isBodyParserError(error) && error.type === 'entity.parse.failed') {
-    return body('bad_request', 'The request body is not valid JSON');
-  }
-  if (isBodyParserError(error) && error.type === 'entity.too.large') {
-    return { ...body('bad_request', 'The request body is too large'), status: 413 };
-  }
+  const read = requestReadError(error);
+  if (read) return { ...body('bad_request', readErrorMessage(error, read)), status: read.status };
   if (isUniqueViolation(error)) return body('conflict', 'That already exists');
   return body('internal', 'Something went wrong on our side');
 }
