@@ -103,8 +103,8 @@ export const glulamSizeSetSchema = z
   .object({
     speciesGroup: z.enum(['western', 'southern-pine']),
     laminationIn: z.number().positive(),
-    widthsIn: z.array(z.number().positive().max(12)).min(1),
-    depthsIn: z.array(z.number().positive().max(48)).min(1),
+    widthsIn: z.array(z.number().positive().max(12)).min(1).max(20),
+    depthsIn: z.array(z.number().positive().max(48)).min(1).max(60),
   })
   .refine(
     (set) =>

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { boundedRecord } from '@/shared/schemas/bounded-record';
 import { loadStandardSchema } from '@/shared/schemas/jobs';
 import {
   inputFlagSchema,
@@ -125,7 +126,11 @@ export const memberCheckInputSchema = z.object({
   minHeadroomIn: positive('the headroom').max(200).optional(),
   posts: memberPostsSchema.optional(),
   /** How each input was obtained, by field name ("clearSpanFt": "measured"). */
-  flags: z.record(z.string(), inputFlagSchema).optional(),
+  flags: boundedRecord(inputFlagSchema, {
+    maxEntries: 100,
+    maxKeyLength: 80,
+    message: 'At most 100 input flags',
+  }).optional(),
 });
 export type MemberCheckInput = z.infer<typeof memberCheckInputSchema>;
 /** The loading, support and use of a member without its material and size (shared with the shortlist). */

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { boundedRecord } from '@/shared/schemas/bounded-record';
 import { memberCheckInputSchema, sizeIdentitySchema } from '@/shared/schemas/calc/member';
 
 /**
@@ -14,7 +15,11 @@ export const shortlistInputSchema = memberCheckInputSchema
   .extend({
     materialIds: z.array(z.string().min(1)).min(1, { message: 'Choose at least one material' }).max(40),
     /** Ply counts to consider; default 1 to 4. */
-    plies: z.array(z.number().int().min(1).max(4)).min(1).optional(),
+    plies: z
+      .array(z.number().int().min(1).max(4))
+      .min(1)
+      .max(4, { message: 'At most 4 ply counts' })
+      .optional(),
     /** Deepest member that fits, in; default the joist depth (flush) or the headroom limit (dropped). */
     maxDepthIn: z.number().finite().positive().max(48).optional(),
     /** Widest member that fits the wall, in (a 2x4 wall 3.5, a 2x6 wall 5.5). */
@@ -25,7 +30,11 @@ export const shortlistInputSchema = memberCheckInputSchema
     maxPieceLengthFt: z.number().finite().positive().max(80).optional(),
     sortBy: z.enum(shortlistSorts).optional(),
     /** Price per linear foot of the whole member, by "materialId/sizeId" or by sizeId alone. */
-    pricePerFt: z.record(z.string(), z.number().finite().min(0)).optional(),
+    pricePerFt: boundedRecord(z.number().finite().min(0), {
+      maxEntries: 4000,
+      maxKeyLength: 160,
+      message: 'At most 4,000 prices',
+    }).optional(),
     /** Most passing sizes to return; default 25. */
     limit: z.number().int().min(1).max(500).optional(),
   });

@@ -28,7 +28,11 @@ export const spanTableInputSchema = z.object({
     .min(1, { message: 'Give at least one tributary width' })
     .max(12, { message: 'At most 12 tributary widths' }),
   materialIds: z.array(z.string().min(1)).min(1, { message: 'Choose at least one material' }).max(40),
-  plies: z.array(z.number().int().min(1).max(4)).min(1).optional(),
+  plies: z
+    .array(z.number().int().min(1).max(4))
+    .min(1)
+    .max(4, { message: 'At most 4 ply counts' })
+    .optional(),
   selfWeight: z.boolean().optional(),
   repetitive: z.boolean().optional(),
   wetService: z.boolean().optional(),
