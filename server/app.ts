@@ -9,7 +9,11 @@ import { errorHandler } from './middleware/error-handler';
 import { originCheck } from './middleware/origin-check';
 import { requestLog } from './middleware/request-log';
 import { securityHeaders } from './middleware/security-headers';
-import { DEFAULT_SIGN_IN_LIMIT, type RateLimitOptions } from './middleware/sign-in-limit';
+import {
+  DEFAULT_SIGN_IN_LIMIT,
+  DEFAULT_SIGN_UP_LIMIT,
+  type RateLimitOptions,
+} from './middleware/auth-limits';
 import type { Mailer } from './services/mail/mailer';
 import { createSessions } from './services/sessions';
 
@@ -21,6 +25,12 @@ export interface AppOptions {
   production?: boolean;
   sessionDays?: number;
   signInLimit?: RateLimitOptions;
+  signUpLimit?: RateLimitOptions;
+  /**
+   * Express `trust proxy`: the proxy in front whose X-Forwarded-For names the client (a hop count, or
+   * addresses, subnets and `loopback`). Off by default: the socket's address is the client's.
+   */
+  trustProxy?: number | string;
   /**
    * Key that opens GET /api/dev/mail (captured mail, from this machine only); without one, or in
    * production, the route is not mounted.
@@ -49,7 +59,7 @@ export function createApp(options: AppOptions): Express {
   });
 
   const app = express();
-  app.set('trust proxy', 'loopback');
+  app.set('trust proxy', options.trustProxy ?? false);
   if (options.log) app.use(requestLog(options.log));
   app.use(securityHeaders(production));
   app.use(compression());
@@ -62,6 +72,7 @@ export function createApp(options: AppOptions): Express {
       sessions,
       appOrigin: options.appOrigin,
       signInLimit: options.signInLimit ?? DEFAULT_SIGN_IN_LIMIT,
+      signUpLimit: options.signUpLimit ?? DEFAULT_SIGN_UP_LIMIT,
       devMailKey: production ? undefined : options.devMailKey,
     }),
   );

@@ -43,6 +43,7 @@ async function main(): Promise<void> {
     appOrigin: env.APP_ORIGIN,
     production,
     sessionDays: env.SESSION_DAYS,
+    trustProxy: env.TRUST_PROXY,
     devMailKey,
     webDir: env.WEB_DIR,
     log: env.NODE_ENV === 'test' ? undefined : log,

@@ -52,4 +52,16 @@ describe('loadEnv', () => {
     expect(loadEnv({ ...production, SEED_DEMO: '1' }).SEED_DEMO).toBe(true);
     expect(() => loadEnv({ SEED_DEMO: 'yes' })).toThrow(/SEED_DEMO/);
   });
+
+  it('trusts no proxy unless TRUST_PROXY names one (a hop count, or loopback, addresses and subnets)', () => {
+    expect(loadEnv({}).TRUST_PROXY).toBeUndefined();
+    expect(loadEnv({ TRUST_PROXY: '1' }).TRUST_PROXY).toBe(1);
+    expect(loadEnv({ TRUST_PROXY: 'loopback' }).TRUST_PROXY).toBe('loopback');
+    expect(loadEnv({ TRUST_PROXY: 'loopback, 10.0.0.0/8, fd00::1' }).TRUST_PROXY).toBe(
+      'loopback, 10.0.0.0/8, fd00::1',
+    );
+    for (const bad of ['true', '*', 'everyone', '10.0.0.0/33', '10.0.0.1/8/2', '']) {
+      expect(() => loadEnv({ TRUST_PROXY: bad }), bad).toThrow(/TRUST_PROXY/);
+    }
+  });
 });

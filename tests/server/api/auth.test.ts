@@ -5,7 +5,7 @@ import { sessions, users } from '@/db/schema';
 import { meSchema } from '@/shared/schemas/auth';
 import { apiErrorBodySchema } from '@/shared/errors';
 import { createTestServer, signUpBody, signedUpAgent, type TestServer } from '@/tests/helpers/server';
-import { ADDRESS_LIMIT_MULTIPLE } from '@/server/middleware/sign-in-limit';
+import { ADDRESS_LIMIT_MULTIPLE } from '@/server/middleware/auth-limits';
 
 let server: TestServer;
 beforeEach(async () => {
