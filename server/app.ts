@@ -1,7 +1,7 @@
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import compression from 'compression';
-import express, { type Express, type Response } from 'express';
+import express, { type Express, type RequestHandler, type Response } from 'express';
 import type { Db } from '@/db/client';
 import { apiRouter } from './api/api.router';
 import { readSession } from './middleware/auth';
@@ -45,6 +45,12 @@ export interface AppOptions {
 /** Exported bundles, fonts and images carry a content hash in their path: cache them for good. */
 const HASHED_PATH = /[\\/](_expo[\\/]static|assets)[\\/]/;
 
+/** API answers carry personal data (and errors name e-mails): no browser or proxy may keep a copy. */
+const noStore: RequestHandler = (_req, res, next) => {
+  res.setHeader('Cache-Control', 'no-store');
+  next();
+};
+
 function cacheHeaders(res: Response, path: string): void {
   res.setHeader('Cache-Control', HASHED_PATH.test(path) ? 'public, max-age=31536000, immutable' : 'no-cache');
 }
@@ -63,7 +69,13 @@ export function createApp(options: AppOptions): Express {
   if (options.log) app.use(requestLog(options.log));
   app.use(securityHeaders(production));
   app.use(compression());
-  app.use('/api', express.json({ limit: '200kb' }), readSession(sessions), originCheck([options.appOrigin]));
+  app.use(
+    '/api',
+    noStore,
+    express.json({ limit: '200kb' }),
+    readSession(sessions),
+    originCheck([options.appOrigin]),
+  );
   app.use(
     '/api',
     apiRouter({

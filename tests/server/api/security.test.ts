@@ -61,14 +61,51 @@ describe('origin check', () => {
     expect(list.body.jobs.map((j: { name: string }) => j.name)).toEqual(['From the app']);
   });
 
-  it('accepts an Origin equal to the Host the request came to', async () => {
+  it('compares scheme, host and port with APP_ORIGIN, never with the Host the request brought', async () => {
     server = await createTestServer();
-    const res = await request(server.app)
-      .post('/api/auth/sign-up')
-      .set('Host', 'tributary.local:8080')
-      .set('Origin', 'http://tributary.local:8080')
-      .send(signUpBody());
-    expect(res.status).toBe(201);
+    const refused = [
+      ['http://tributary.local:8080', 'tributary.local:8080'],
+      ['https://tributary.test', 'tributary.test'],
+      ['http://tributary.test:8080', 'tributary.test'],
+      ['http://tributary.test.evil.example', 'tributary.test'],
+      ['http://sub.tributary.test', 'tributary.test'],
+      ['null', 'tributary.test'],
+      ['not a url', 'tributary.test'],
+    ];
+    for (const [origin, host] of refused) {
+      const res = await request(server.app)
+        .post('/api/auth/sign-up')
+        .set('Host', host)
+        .set('Origin', origin)
+        .send(signUpBody());
+      expect([origin, res.status]).toEqual([origin, 403]);
+    }
+    for (const origin of ['http://tributary.test', 'http://TRIBUTARY.test:80']) {
+      const res = await request(server.app)
+        .post('/api/auth/sign-up')
+        .set('Origin', origin)
+        .send(signUpBody());
+      expect([origin, res.status]).toEqual([origin, 201]);
+    }
+  });
+});
+
+describe('caching', () => {
+  it('every API answer, success or error, says Cache-Control: no-store', async () => {
+    server = await createTestServer();
+    const { agent } = await signedUpAgent(server.app);
+    const job = await agent.post('/api/jobs').send({ name: 'Private' }).expect(201);
+    const answers = [
+      job,
+      await agent.get('/api/me').expect(200),
+      await agent.get('/api/jobs').expect(200),
+      await agent.get(`/api/jobs/${job.body.id}`).expect(200),
+      await agent.get('/api/orgs/current/members').expect(200),
+      await request(server.app).get('/api/me').expect(401),
+      await request(server.app).get('/api/invitations/unknown').expect(404),
+      await request(server.app).get('/api/nope').expect(404),
+    ];
+    for (const res of answers) expect(res.headers['cache-control']).toBe('no-store');
   });
 });
 
