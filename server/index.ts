@@ -27,13 +27,17 @@ async function main(): Promise<void> {
     fakeSmtp = await startFakeSmtp(database.db);
     log(`Fake SMTP server capturing mail on ${fakeSmtp.host}:${fakeSmtp.port}`);
   }
-  const mailer = createSmtpMailer(database.db, {
-    host: env.SMTP_HOST ?? fakeSmtp?.host ?? '127.0.0.1',
-    port: env.SMTP_PORT ?? fakeSmtp?.port ?? 25,
-    user: env.SMTP_USER,
-    pass: env.SMTP_PASS,
-    from: env.MAIL_FROM,
-  });
+  const mailer = createSmtpMailer(
+    database.db,
+    {
+      host: env.SMTP_HOST ?? fakeSmtp?.host ?? '127.0.0.1',
+      port: env.SMTP_PORT ?? fakeSmtp?.port ?? 25,
+      user: env.SMTP_USER,
+      pass: env.SMTP_PASS,
+      from: env.MAIL_FROM,
+    },
+    { log },
+  );
 
   const devMailKey =
     fakeSmtp && !production ? (env.DEV_MAIL_KEY ?? randomBytes(24).toString('base64url')) : undefined;
@@ -64,7 +68,7 @@ async function main(): Promise<void> {
     log(`${signal} received, shutting down`);
     setTimeout(() => process.exit(1), 10_000);
     server.close(async () => {
-      mailer.close();
+      await mailer.close();
       await fakeSmtp?.close();
       database.close();
       process.exit(0);

@@ -30,7 +30,7 @@ const header = {
 
 async function inviteAndAccept(owner: Agent, email: string, role: Role): Promise<Agent> {
   await owner.post('/api/orgs/current/invitations').send({ email, role }).expect(201);
-  const mail = server.capturedMail().find((m) => m.to === email);
+  const mail = (await server.capturedMail()).find((m) => m.to === email);
   const token = mail?.text.match(/\/invite\/([A-Za-z0-9_-]+)/)?.[1];
   const agent = request.agent(server.app);
   await agent

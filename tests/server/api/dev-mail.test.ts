@@ -23,6 +23,7 @@ const NOT_THERE = { error: { code: 'not_found', message: 'No such API route' } }
 async function mailAnInvitation(): Promise<void> {
   const { agent } = await signedUpAgent(server.app);
   await agent.post('/api/orgs/current/invitations').send({ email: 'new@example.test', role: 'owner' });
+  await server.mailer.idle();
 }
 
 describe('GET /api/dev/mail', () => {

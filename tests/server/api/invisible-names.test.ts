@@ -68,7 +68,7 @@ describe('a name made only of invisible characters is refused like an empty one,
     await owner
       .post('/api/orgs/current/invitations')
       .send({ email: 'blank.name@example.test', role: 'estimator' });
-    const token = server.capturedMail()[0].text.match(/\/invite\/([\w-]+)/)?.[1];
+    const token = (await server.capturedMail())[0].text.match(/\/invite\/([\w-]+)/)?.[1];
     const before = databaseDump(server.db);
     const res = await request(server.app)
       .post(`/api/invitations/${token}/accept`)

@@ -3,6 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import nodemailer from 'nodemailer';
 import request from 'supertest';
+import { enqueueMail } from '@/server/services/mail/outbox.repository';
 import { afterEach, describe, expect, it } from 'vitest';
 import {
   DEV_MAIL_PATH,
@@ -145,7 +146,9 @@ describe('routing', () => {
 
   it('lists captured mail in development, including mail that did not come through the app', async () => {
     server = await createTestServer();
-    await server.mailer.send({ to: 'someone@example.test', subject: 'Hello', text: 'Body text' });
+    enqueueMail(server.db, { to: 'someone@example.test', subject: 'Hello', text: 'Body text' });
+    server.mailer.wake();
+    await server.mailer.idle();
     const outside = nodemailer.createTransport({ host: server.smtp.host, port: server.smtp.port });
     await outside.sendMail({
       from: 'x@example.test',
