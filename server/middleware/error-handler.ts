@@ -32,6 +32,7 @@ const READ_MESSAGES: Record<string, string> = {
   'entity.too.large': 'The request body is too large',
   'charset.unsupported': 'Send the JSON body in UTF-8',
   'encoding.unsupported': 'Send the body uncompressed or with Content-Encoding gzip, deflate or br',
+  'content-type.unsupported': 'Send the body as JSON (Content-Type: application/json)',
 };
 
 function readErrorMessage(error: unknown, read: RequestReadError): string {

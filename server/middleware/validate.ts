@@ -1,3 +1,4 @@
+import type { IncomingHttpHeaders } from 'node:http';
 import type { RequestHandler } from 'express';
 import type { ParamsDictionary } from 'express-serve-static-core';
 import type { ParsedQs } from 'qs';
@@ -12,6 +13,9 @@ interface Schemas<B, Q, P> {
   query?: Q;
   params?: P;
 }
+
+const hasBody = (headers: IncomingHttpHeaders) =>
+  headers['transfer-encoding'] !== undefined || Number(headers['content-length'] ?? 0) > 0;
 
 /** What `validate` checks, kept on the middleware so a listing of the routes can read each route's schemas. */
 export interface ValidatedSchemas {
@@ -40,6 +44,10 @@ export function validate<
     Parsed<B, unknown>,
     Parsed<Q, ParsedQs>
   > = (req, _res, next) => {
+    if (schemas.body && hasBody(req.headers) && !req.is('application/json')) {
+      // express.json leaves other types unread: a form or text body would be judged as an empty one.
+      throw Object.assign(new Error('Not a JSON body'), { status: 415, type: 'content-type.unsupported' });
+    }
     const issues: z.core.$ZodIssue[] = [];
     const parse = (schema: z.ZodType | undefined, value: unknown) => {
       if (!schema) return value;
