@@ -7,7 +7,7 @@ import { apiRouter } from './api/api.router';
 import { readSession } from './middleware/auth';
 import { errorHandler } from './middleware/error-handler';
 import { originCheck } from './middleware/origin-check';
-import { requestLog } from './middleware/request-log';
+import { requestId, requestLog } from './middleware/request-log';
 import { securityHeaders } from './middleware/security-headers';
 import {
   DEFAULT_SIGN_IN_LIMIT,
@@ -66,6 +66,7 @@ export function createApp(options: AppOptions): Express {
 
   const app = express();
   app.set('trust proxy', options.trustProxy ?? false);
+  app.use(requestId);
   if (options.log) app.use(requestLog(options.log));
   app.use(securityHeaders(production));
   app.use(compression());

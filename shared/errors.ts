@@ -14,6 +14,8 @@ export const apiErrorBodySchema = z.object({
     ]),
     message: z.string(),
     fields: z.record(z.string(), z.array(z.string())).optional(),
+    /** The server's id of the request (also in the log and the X-Request-Id header): quote it to support. */
+    requestId: z.string().optional(),
   }),
 });
 export type ApiErrorBody = z.infer<typeof apiErrorBodySchema>;

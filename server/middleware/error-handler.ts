@@ -2,6 +2,7 @@ import type { ErrorRequestHandler } from 'express';
 import { AppError } from '@/server/app-error';
 import { CalcInputError } from '@/lib/calc/types';
 import type { ApiErrorBody, ApiErrorCode } from '@/shared/errors';
+import { logLine, loggedPath } from './request-log';
 
 const STATUS: Record<ApiErrorCode, number> = {
   bad_request: 400,
@@ -68,13 +69,19 @@ function describe(error: unknown): { status: number; body: ApiErrorBody } {
   return body('internal', 'Something went wrong on our side');
 }
 
-/** Last handler: answers every error with the shared error body; stack traces go to the log only. */
+/**
+ * Last handler: answers every error with the shared error body, which names the request id; stack traces
+ * of 5xx errors go to the log only, as one JSON line with the same id.
+ */
 export function errorHandler(log: (message: string) => void): ErrorRequestHandler {
   return (error, req, res, next) => {
     if (res.headersSent) return next(error);
     const { status, body } = describe(error);
-    if (status >= 500)
-      log(`${req.method} ${req.path} failed: ${error instanceof Error ? error.stack : String(error)}`);
-    res.status(status).json(body);
+    const requestId: string | undefined = res.locals.requestId;
+    if (status >= 500) {
+      const stack = error instanceof Error ? error.stack : String(error);
+      log(logLine('error', requestId ?? '', { method: req.method, path: loggedPath(req), error: stack }));
+    }
+    res.status(status).json(requestId ? { error: { ...body.error, requestId } } : body);
   };
 }

@@ -74,6 +74,7 @@ describe('sign-up throttle', () => {
     expect(res.body.error).toEqual({
       code: 'rate_limited',
       message: 'Too many sign-ups from this address. Try again in 1 minute.',
+      requestId: expect.any(String),
     });
     await request(app)
       .post('/api/auth/sign-up')

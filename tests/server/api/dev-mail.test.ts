@@ -17,7 +17,9 @@ beforeEach(async () => {
 });
 afterEach(() => server.close());
 
-const NOT_THERE = { error: { code: 'not_found', message: 'No such API route' } };
+const NOT_THERE = {
+  error: { code: 'not_found', message: 'No such API route', requestId: expect.any(String) },
+};
 
 /** An owner invites someone, so the captured mail holds a link into the firm. */
 async function mailAnInvitation(): Promise<void> {

@@ -51,7 +51,9 @@ describe('origin check', () => {
     const { agent } = await signedUpAgent(server.app);
     const evil = await agent.post('/api/jobs').set('Origin', 'https://evil.example').send({ name: 'CSRF' });
     expect(evil.status).toBe(403);
-    expect(evil.body).toEqual({ error: { code: 'forbidden', message: 'Cross-site request refused' } });
+    expect(evil.body).toEqual({
+      error: { code: 'forbidden', message: 'Cross-site request refused', requestId: expect.any(String) },
+    });
     const signIn = await request(server.app)
       .post('/api/auth/sign-in')
       .set('Origin', 'null')
@@ -114,7 +116,9 @@ describe('routing', () => {
   it('answers unknown /api paths with a JSON 404', async () => {
     server = await createTestServer();
     const res = await request(server.app).get('/api/nope').expect(404);
-    expect(res.body).toEqual({ error: { code: 'not_found', message: 'No such API route' } });
+    expect(res.body).toEqual({
+      error: { code: 'not_found', message: 'No such API route', requestId: expect.any(String) },
+    });
     await request(server.app).post('/api/nope/deeper').send({}).expect(404);
   });
 

@@ -42,9 +42,9 @@ async function expectRefused(send: () => request.Test, status: number, message: 
   const before = databaseDump(server.db);
   const res = await send();
   expect(res.status).toBe(status);
-  expect(res.body).toEqual({ error: { code: 'bad_request', message } });
+  expect(res.body).toEqual({ error: { code: 'bad_request', message, requestId: expect.any(String) } });
   expect(databaseDump(server.db)).toEqual(before);
-  expect(logged.filter((line) => line.includes('failed:'))).toEqual([]);
+  expect(logged.filter((line) => line.includes('"level":"error"'))).toEqual([]);
 }
 
 describe('a malformed percent-encoding in the path', () => {
@@ -88,11 +88,14 @@ describe('a JSON body that cannot be read', () => {
     for (const broken of [Buffer.from('this is not gzip'), whole.subarray(0, whole.length - 12)]) {
       const before = databaseDump(server.db);
       const res = await rawPost('/api/auth/sign-in', gzip, broken);
-      expect(res).toEqual({ status: 400, body: { error: { code: 'bad_request', message } } });
+      expect(res).toEqual({
+        status: 400,
+        body: { error: { code: 'bad_request', message, requestId: expect.any(String) } },
+      });
       expect(databaseDump(server.db)).toEqual(before);
     }
     const read = await rawPost('/api/auth/sign-in', gzip, whole);
     expect(read.status).toBe(401);
-    expect(logged.filter((line) => line.includes('failed:'))).toEqual([]);
+    expect(logged.filter((line) => line.includes('"level":"error"'))).toEqual([]);
   });
 });
