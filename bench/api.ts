@@ -15,10 +15,11 @@ const SHORTLIST_REQUESTS = 200;
 const SPAN_TABLE_REQUESTS = 50;
 const WARM_UP_REQUESTS = 50;
 
-/** Signing up sends no e-mail, and nothing else the benchmark does should. */
+/** Mail the benchmark queues stays in the outbox: nothing delivers it. */
 const noMail: Mailer = {
-  send: () => Promise.reject(new Error('The API benchmark sends no e-mail')),
-  close: () => undefined,
+  wake: () => undefined,
+  idle: () => Promise.resolve(),
+  close: () => Promise.resolve(),
 };
 
 interface Answer {

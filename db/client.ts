@@ -4,7 +4,8 @@ import Database from 'better-sqlite3';
 import { drizzle, type BetterSQLite3Database } from 'drizzle-orm/better-sqlite3';
 import * as schema from './schema';
 
-export type Db = BetterSQLite3Database<typeof schema>;
+/** Drizzle over better-sqlite3; `$client` is the driver's handle (pragmas, backups, integrity checks). */
+export type Db = BetterSQLite3Database<typeof schema> & { $client: Database.Database };
 
 export interface OpenedDatabase {
   db: Db;

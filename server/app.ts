@@ -1,15 +1,19 @@
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import compression from 'compression';
-import express, { type Express, type Response } from 'express';
+import express, { type Express, type RequestHandler, type Response } from 'express';
 import type { Db } from '@/db/client';
 import { apiRouter } from './api/api.router';
 import { readSession } from './middleware/auth';
 import { errorHandler } from './middleware/error-handler';
 import { originCheck } from './middleware/origin-check';
-import { requestLog } from './middleware/request-log';
+import { requestId, requestLog } from './middleware/request-log';
 import { securityHeaders } from './middleware/security-headers';
-import { DEFAULT_SIGN_IN_LIMIT, type RateLimitOptions } from './middleware/sign-in-limit';
+import {
+  DEFAULT_SIGN_IN_LIMIT,
+  DEFAULT_SIGN_UP_LIMIT,
+  type RateLimitOptions,
+} from './middleware/auth-limits';
 import type { Mailer } from './services/mail/mailer';
 import { createSessions } from './services/sessions';
 
@@ -21,8 +25,17 @@ export interface AppOptions {
   production?: boolean;
   sessionDays?: number;
   signInLimit?: RateLimitOptions;
-  /** Mount GET /api/dev/mail (never in production). */
-  devMail?: boolean;
+  signUpLimit?: RateLimitOptions;
+  /**
+   * Express `trust proxy`: the proxy in front whose X-Forwarded-For names the client (a hop count, or
+   * addresses, subnets and `loopback`). Off by default: the socket's address is the client's.
+   */
+  trustProxy?: number | string;
+  /**
+   * Key that opens GET /api/dev/mail (captured mail, from this machine only); without one, or in
+   * production, the route is not mounted.
+   */
+  devMailKey?: string;
   /** Folder of the exported web app; served with an SPA fallback when it holds an index.html. */
   webDir?: string;
   /** Request and error log; silent when omitted. */
@@ -31,6 +44,12 @@ export interface AppOptions {
 
 /** Exported bundles, fonts and images carry a content hash in their path: cache them for good. */
 const HASHED_PATH = /[\\/](_expo[\\/]static|assets)[\\/]/;
+
+/** API answers carry personal data (and errors name e-mails): no browser or proxy may keep a copy. */
+const noStore: RequestHandler = (_req, res, next) => {
+  res.setHeader('Cache-Control', 'no-store');
+  next();
+};
 
 function cacheHeaders(res: Response, path: string): void {
   res.setHeader('Cache-Control', HASHED_PATH.test(path) ? 'public, max-age=31536000, immutable' : 'no-cache');
@@ -46,11 +65,18 @@ export function createApp(options: AppOptions): Express {
   });
 
   const app = express();
-  app.set('trust proxy', 'loopback');
+  app.set('trust proxy', options.trustProxy ?? false);
+  app.use(requestId);
   if (options.log) app.use(requestLog(options.log));
   app.use(securityHeaders(production));
   app.use(compression());
-  app.use('/api', express.json({ limit: '200kb' }), readSession(sessions), originCheck([options.appOrigin]));
+  app.use(
+    '/api',
+    noStore,
+    express.json({ limit: '200kb' }),
+    readSession(sessions),
+    originCheck([options.appOrigin]),
+  );
   app.use(
     '/api',
     apiRouter({
@@ -59,7 +85,8 @@ export function createApp(options: AppOptions): Express {
       sessions,
       appOrigin: options.appOrigin,
       signInLimit: options.signInLimit ?? DEFAULT_SIGN_IN_LIMIT,
-      devMail: !production && (options.devMail ?? true),
+      signUpLimit: options.signUpLimit ?? DEFAULT_SIGN_UP_LIMIT,
+      devMailKey: production ? undefined : options.devMailKey,
     }),
   );
 

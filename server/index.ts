@@ -1,8 +1,10 @@
+import { randomBytes } from 'node:crypto';
 import { createServer } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { openDatabase } from '@/db/client';
 import { migrateDatabase } from '@/db/migrate';
 import { insertDemoData } from '@/db/seed';
+import { devMailPageUrl } from './api/dev-mail/dev-mail.router';
 import { createApp } from './app';
 import { loadEnv } from './env';
 import { startFakeSmtp, type FakeSmtp } from './services/fake-smtp';
@@ -16,7 +18,7 @@ async function main(): Promise<void> {
 
   const database = openDatabase(env.DATABASE_URL);
   migrateDatabase(database.db);
-  if (env.SEED_DEMO !== '0' && (await insertDemoData(database.db, hashPassword))) {
+  if (env.SEED_DEMO && (await insertDemoData(database.db, hashPassword))) {
     log('Demo firms, people and jobs added (password tributary-demo)');
   }
 
@@ -25,21 +27,28 @@ async function main(): Promise<void> {
     fakeSmtp = await startFakeSmtp(database.db);
     log(`Fake SMTP server capturing mail on ${fakeSmtp.host}:${fakeSmtp.port}`);
   }
-  const mailer = createSmtpMailer(database.db, {
-    host: env.SMTP_HOST ?? fakeSmtp?.host ?? '127.0.0.1',
-    port: env.SMTP_PORT ?? fakeSmtp?.port ?? 25,
-    user: env.SMTP_USER,
-    pass: env.SMTP_PASS,
-    from: env.MAIL_FROM,
-  });
+  const mailer = createSmtpMailer(
+    database.db,
+    {
+      host: env.SMTP_HOST ?? fakeSmtp?.host ?? '127.0.0.1',
+      port: env.SMTP_PORT ?? fakeSmtp?.port ?? 25,
+      user: env.SMTP_USER,
+      pass: env.SMTP_PASS,
+      from: env.MAIL_FROM,
+    },
+    { log },
+  );
 
+  const devMailKey =
+    fakeSmtp && !production ? (env.DEV_MAIL_KEY ?? randomBytes(24).toString('base64url')) : undefined;
   const app = createApp({
     db: database.db,
     mailer,
     appOrigin: env.APP_ORIGIN,
     production,
     sessionDays: env.SESSION_DAYS,
-    devMail: !production,
+    trustProxy: env.TRUST_PROXY,
+    devMailKey,
     webDir: env.WEB_DIR,
     log: env.NODE_ENV === 'test' ? undefined : log,
   });
@@ -47,6 +56,8 @@ async function main(): Promise<void> {
   const server = createServer(app);
   server.listen(env.PORT, env.HOST, () => {
     const { port } = server.address() as AddressInfo;
+    if (devMailKey)
+      log(`Captured mail, from this machine only: ${devMailPageUrl(env.APP_ORIGIN, port, devMailKey)}`);
     log(`Tributary listening on http://${env.HOST}:${port}`);
   });
 
@@ -57,7 +68,7 @@ async function main(): Promise<void> {
     log(`${signal} received, shutting down`);
     setTimeout(() => process.exit(1), 10_000);
     server.close(async () => {
-      mailer.close();
+      await mailer.close();
       await fakeSmtp?.close();
       database.close();
       process.exit(0);

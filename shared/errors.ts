@@ -14,15 +14,24 @@ export const apiErrorBodySchema = z.object({
     ]),
     message: z.string(),
     fields: z.record(z.string(), z.array(z.string())).optional(),
+    /** The server's id of the request (also in the log and the X-Request-Id header): quote it to support. */
+    requestId: z.string().optional(),
   }),
 });
 export type ApiErrorBody = z.infer<typeof apiErrorBodySchema>;
 export type ApiErrorCode = ApiErrorBody['error']['code'];
 
-/** Flattens a zod error into the `fields` map of an API error body. */
-export function fieldErrors(error: z.ZodError): Record<string, string[]> {
+/** Most field messages one error body carries; a body with thousands of bad entries gets the first ones. */
+export const MAX_FIELD_MESSAGES = 30;
+
+/**
+ * Flattens a zod error (or its issues) into the `fields` map of an API error body, keeping the first
+ * MAX_FIELD_MESSAGES messages.
+ */
+export function fieldErrors(error: z.ZodError | readonly z.core.$ZodIssue[]): Record<string, string[]> {
   const fields: Record<string, string[]> = {};
-  for (const issue of error.issues) {
+  const issues = 'issues' in error ? error.issues : error;
+  for (const issue of issues.slice(0, MAX_FIELD_MESSAGES)) {
     const key = issue.path.length ? issue.path.join('.') : '_';
     (fields[key] ??= []).push(issue.message);
   }

@@ -9,14 +9,15 @@ import { LoadingView } from './loading-view';
 import { Notice } from './notice';
 import { Text } from './text';
 
-/** Mail the local fake SMTP server captured, newest first as the API gives it. */
-export function MailList() {
-  const { data: messages, error, mutate } = useDevMail();
+/** Mail the local fake SMTP server captured, newest first as the API gives it; `mailKey` opens it. */
+export function MailList({ mailKey }: { mailKey: string }) {
+  const { data: messages, error, mutate } = useDevMail(mailKey);
 
   if (error instanceof ApiError && error.status === 404) {
     return (
       <Notice tone="info" title="Not available here">
-        Captured mail is only kept when the server runs for development or tests.
+        Captured mail is kept only when the server runs for development or tests, and it opens only on the
+        machine that runs the server, through the link (with its key) the server printed when it started.
       </Notice>
     );
   }

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import type { Db } from '@/db/client';
 import { AppError } from '@/server/app-error';
-import type { RateLimitOptions } from '@/server/middleware/sign-in-limit';
+import type { RateLimitOptions } from '@/server/middleware/auth-limits';
 import type { Mailer } from '@/server/services/mail/mailer';
 import type { Sessions } from '@/server/services/sessions';
 import { authRouter } from './auth/auth.router';
@@ -27,7 +27,9 @@ export interface ApiOptions {
   sessions: Sessions;
   appOrigin: string;
   signInLimit: RateLimitOptions;
-  devMail: boolean;
+  signUpLimit: RateLimitOptions;
+  /** Key of GET /api/dev/mail; the route is mounted only when there is one. */
+  devMailKey?: string;
 }
 
 /** Everything under /api; unknown paths end in a JSON 404. */
@@ -38,7 +40,13 @@ export function apiRouter(options: ApiOptions): Router {
   router.use('/health', healthRouter());
   router.use(
     '/auth',
-    authRouter({ auth: createAuthService(db), me, sessions, signInLimit: options.signInLimit }),
+    authRouter({
+      auth: createAuthService(db),
+      me,
+      sessions,
+      signInLimit: options.signInLimit,
+      signUpLimit: options.signUpLimit,
+    }),
   );
   router.use('/me', meRouter({ me }));
   router.use('/orgs', orgsRouter({ db, orgs: createOrgsService(options) }));
@@ -48,7 +56,7 @@ export function apiRouter(options: ApiOptions): Router {
   router.use('/members', membersRouter(members));
   router.use('/jobs', jobsRouter({ db, jobs: createJobsService(db) }));
   router.use('/calc', calcRouter({ calc: createCalcService() }));
-  if (options.devMail) router.use('/dev/mail', devMailRouter({ db }));
+  if (options.devMailKey) router.use('/dev/mail', devMailRouter({ db, key: options.devMailKey }));
   router.use(() => {
     throw new AppError('not_found', 'No such API route');
   });

@@ -2,6 +2,7 @@ import type { ErrorRequestHandler } from 'express';
 import { AppError } from '@/server/app-error';
 import { CalcInputError } from '@/lib/calc/types';
 import type { ApiErrorBody, ApiErrorCode } from '@/shared/errors';
+import { logLine, loggedPath } from './request-log';
 
 const STATUS: Record<ApiErrorCode, number> = {
   bad_request: 400,
@@ -13,8 +14,35 @@ const STATUS: Record<ApiErrorCode, number> = {
   internal: 500,
 };
 
-function isBodyParserError(error: unknown): error is { type: string; status: number } {
-  return typeof error === 'object' && error !== null && 'type' in error && 'status' in error;
+/** An error raised while reading the request (body-parser, the router's path decoding) with a 4xx status. */
+interface RequestReadError {
+  status: number;
+  type?: string;
+}
+
+function requestReadError(error: unknown): RequestReadError | undefined {
+  if (typeof error !== 'object' || error === null || !('status' in error)) return undefined;
+  const status = Number(error.status);
+  if (!Number.isInteger(status) || status < 400 || status > 499) return undefined;
+  return { status, type: 'type' in error && typeof error.type === 'string' ? error.type : undefined };
+}
+
+/** What the client is told for each kind of unreadable request; the status comes from the error. */
+const READ_MESSAGES: Record<string, string> = {
+  'entity.parse.failed': 'The request body is not valid JSON',
+  'entity.too.large': 'The request body is too large',
+  'charset.unsupported': 'Send the JSON body in UTF-8',
+  'encoding.unsupported': 'Send the body uncompressed or with Content-Encoding gzip, deflate or br',
+  'content-type.unsupported': 'Send the body as JSON (Content-Type: application/json)',
+};
+
+function readErrorMessage(error: unknown, read: RequestReadError): string {
+  if (read.type && READ_MESSAGES[read.type]) return READ_MESSAGES[read.type];
+  if (error instanceof URIError) return 'The request path has a broken percent-encoding';
+  if (typeof error === 'object' && error !== null && 'code' in error && String(error.code).startsWith('Z_')) {
+    return 'The compressed request body is broken';
+  }
+  return 'The request could not be read';
 }
 
 /** Drizzle wraps driver errors (`DrizzleQueryError`), so the SQLite code may sit on a `cause`. */
@@ -35,23 +63,25 @@ function describe(error: unknown): { status: number; body: ApiErrorBody } {
   if (error instanceof AppError) return body(error.code, error.message, error.fields);
   if (error instanceof CalcInputError)
     return body('bad_request', error.message, { [error.field]: [error.message] });
-  if (isBodyParserError(error) && error.type === 'entity.parse.failed') {
-    return body('bad_request', 'The request body is not valid JSON');
-  }
-  if (isBodyParserError(error) && error.type === 'entity.too.large') {
-    return { ...body('bad_request', 'The request body is too large'), status: 413 };
-  }
+  const read = requestReadError(error);
+  if (read) return { ...body('bad_request', readErrorMessage(error, read)), status: read.status };
   if (isUniqueViolation(error)) return body('conflict', 'That already exists');
   return body('internal', 'Something went wrong on our side');
 }
 
-/** Last handler: answers every error with the shared error body; stack traces go to the log only. */
+/**
+ * Last handler: answers every error with the shared error body, which names the request id; stack traces
+ * of 5xx errors go to the log only, as one JSON line with the same id.
+ */
 export function errorHandler(log: (message: string) => void): ErrorRequestHandler {
   return (error, req, res, next) => {
     if (res.headersSent) return next(error);
     const { status, body } = describe(error);
-    if (status >= 500)
-      log(`${req.method} ${req.path} failed: ${error instanceof Error ? error.stack : String(error)}`);
-    res.status(status).json(body);
+    const requestId: string | undefined = res.locals.requestId;
+    if (status >= 500) {
+      const stack = error instanceof Error ? error.stack : String(error);
+      log(logLine('error', requestId ?? '', { method: req.method, path: loggedPath(req), error: stack }));
+    }
+    res.status(status).json(requestId ? { error: { ...body.error, requestId } } : body);
   };
 }

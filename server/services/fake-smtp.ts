@@ -50,6 +50,8 @@ export function startFakeSmtp(db: Db, options: { host?: string; port?: number } 
                 html: typeof parsed.html === 'string' ? parsed.html : null,
                 createdAt: new Date().toISOString(),
                 captured: true,
+                // Mail from elsewhere was delivered by its sender: the outbox must not send it again.
+                status: 'sent',
               })
               .run();
           }

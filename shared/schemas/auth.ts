@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { visibleTextSchema } from './visible-text';
 
 export const roles = ['owner', 'contractor', 'estimator', 'engineer'] as const;
 export const roleSchema = z.enum(roles);
@@ -17,7 +18,7 @@ export const passwordSchema = z
   .string()
   .min(10, { message: 'Use at least 10 characters' })
   .max(200, { message: 'Use at most 200 characters' });
-export const personNameSchema = z.string().trim().min(1, { message: 'Enter your name' }).max(120);
+export const personNameSchema = visibleTextSchema('Enter your name', 120);
 
 /**
  * Sign-up creates a user and a new firm. A contracting firm makes the user its `owner`; an engineering
@@ -27,7 +28,7 @@ export const signUpSchema = z.object({
   name: personNameSchema,
   email: emailSchema,
   password: passwordSchema,
-  firmName: z.string().trim().min(1, { message: 'Enter your firm’s name' }).max(160),
+  firmName: visibleTextSchema('Enter your firm’s name', 160),
   firmKind: orgKindSchema.default('contracting'),
 });
 export type SignUpInput = z.input<typeof signUpSchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { visibleTextSchema } from './visible-text';
 
 export const loadStandardEditions = ['ASCE 7-16', 'ASCE 7-22'] as const;
 export const loadStandardSchema = z.enum(loadStandardEditions);
@@ -34,7 +35,7 @@ const currentYear = new Date().getFullYear();
 
 /** Fields a person enters for a job. Lengths in ft, slope as rise per 12 in of run, ground snow in psf. */
 export const jobInputSchema = z.object({
-  name: z.string().trim().min(1, { message: 'Give the job a name' }).max(160),
+  name: visibleTextSchema('Give the job a name', 160),
   address: z.string().trim().max(300).default(''),
   yearBuilt: z
     .number()

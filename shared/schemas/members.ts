@@ -6,6 +6,7 @@ import {
   memberKinds,
   prescriptiveResultSchema,
 } from '@/shared/schemas/calc/member';
+import { visibleTextSchema } from './visible-text';
 
 /**
  * A member saved on a job (DESIGN.md §3 "Member"): its check input (validated by the engine's own schema, with
@@ -13,11 +14,7 @@ import {
  * server computed when it was saved. The client's own live result is never stored.
  */
 
-const label = z
-  .string()
-  .trim()
-  .min(1, { message: 'Give the member a label' })
-  .max(80, { message: 'At most 80 characters' });
+const label = visibleTextSchema('Give the member a label', 80);
 const wall = z.string().trim().max(80, { message: 'At most 80 characters' });
 
 /** `POST /api/jobs/:jobId/members`. The kind and label inside `input` follow the member's own. */

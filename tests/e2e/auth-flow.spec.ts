@@ -3,6 +3,7 @@ import type { Page } from 'playwright-core';
 import { openBrowser, snap, viewports, type ViewportName } from './browser';
 
 const baseUrl = inject('baseUrl');
+const devMailUrl = inject('devMailUrl');
 
 async function signIn(page: Page, email: string, password: string): Promise<void> {
   await page.goto(`${baseUrl}/sign-in`);
@@ -126,7 +127,7 @@ describe('invitation by e-mail (phone)', () => {
       await owner.page.getByTestId('invite-submit').click();
       await owner.page.getByText(email).first().waitFor();
 
-      await invitee.page.goto(`${baseUrl}/dev/mail`);
+      await invitee.page.goto(devMailUrl);
       const link = invitee.page.getByRole('link', { name: /\/invite\// }).first();
       await link.waitFor();
       const href = (await link.getAttribute('href')) ?? '';

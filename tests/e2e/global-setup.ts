@@ -4,6 +4,7 @@ import { startServer, type RunningServer } from '@/tests/helpers/start-server';
 declare module 'vitest' {
   export interface ProvidedContext {
     baseUrl: string;
+    devMailUrl: string;
   }
 }
 
@@ -13,6 +14,7 @@ let server: RunningServer | undefined;
 export async function setup(project: TestProject): Promise<void> {
   server = await startServer();
   project.provide('baseUrl', server.baseUrl);
+  project.provide('devMailUrl', server.devMailUrl);
 }
 
 export async function teardown(): Promise<void> {

@@ -5,19 +5,24 @@ import { migrateDatabase } from '@/db/migrate';
 import { createApp, type AppOptions } from '@/server/app';
 import { listCapturedMail } from '@/server/api/dev-mail/dev-mail.repository';
 import { startFakeSmtp, type FakeSmtp } from '@/server/services/fake-smtp';
-import { createSmtpMailer, type Mailer } from '@/server/services/mail/mailer';
+import { createSmtpMailer, type Mailer, type RetryPolicy } from '@/server/services/mail/mailer';
 import type { CapturedMail } from '@/shared/schemas/mail';
 import type { SignUpInput } from '@/shared/schemas/auth';
 
 export const TEST_APP_ORIGIN = 'http://tributary.test';
+/** Key of the test server's GET /api/dev/mail. */
+export const TEST_DEV_MAIL_KEY = 'test-dev-mail-key-0123456789';
+export const DEV_MAIL_PATH = `/api/dev/mail?key=${TEST_DEV_MAIL_KEY}`;
+/** Mail retries within a test's patience: 50 ms, 100 ms, 200 ms, then failed after the fourth attempt. */
+export const TEST_RETRY: RetryPolicy = { firstWaitMs: 50, maxWaitMs: 200, maxAttempts: 4 };
 
 export interface TestServer {
   app: Express;
   db: Db;
   smtp: FakeSmtp;
   mailer: Mailer;
-  /** What the fake SMTP server received, newest first. */
-  capturedMail(): CapturedMail[];
+  /** What the fake SMTP server received, newest first, once the outbox has nothing left to deliver now. */
+  capturedMail(): Promise<CapturedMail[]>;
   close(): Promise<void>;
 }
 
@@ -29,20 +34,31 @@ export async function createTestServer(options: Partial<AppOptions> = {}): Promi
   const database = openDatabase(':memory:');
   migrateDatabase(database.db);
   const smtp = await startFakeSmtp(database.db);
-  const mailer = createSmtpMailer(database.db, {
-    host: smtp.host,
-    port: smtp.port,
-    from: 'test@tributary.test',
+  const mailer = createSmtpMailer(
+    database.db,
+    { host: smtp.host, port: smtp.port, from: 'test@tributary.test' },
+    { retry: TEST_RETRY, pollMs: 25, log: options.log },
+  );
+  const app = createApp({
+    db: database.db,
+    mailer,
+    appOrigin: TEST_APP_ORIGIN,
+    devMailKey: TEST_DEV_MAIL_KEY,
+    // Suites sign up many people from one address; the sign-up limit has its own tests.
+    signUpLimit: { windowMs: 60_000, limit: 10_000 },
+    ...options,
   });
-  const app = createApp({ db: database.db, mailer, appOrigin: TEST_APP_ORIGIN, ...options });
   return {
     app,
     db: database.db,
     smtp,
     mailer,
-    capturedMail: () => listCapturedMail(database.db, 1000),
+    async capturedMail() {
+      await mailer.idle();
+      return listCapturedMail(database.db, 1000);
+    },
     async close() {
-      mailer.close();
+      await mailer.close();
       await smtp.close();
       database.close();
     },

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { ORG_HEADER, startSession } from '@/server/middleware/auth';
-import { signInLimit, type RateLimitOptions } from '@/server/middleware/sign-in-limit';
+import { signInLimit, signUpLimit, type RateLimitOptions } from '@/server/middleware/auth-limits';
 import { validate } from '@/server/middleware/validate';
 import type { Sessions } from '@/server/services/sessions';
 import { signInSchema, signUpSchema } from '@/shared/schemas/auth';
@@ -12,14 +12,20 @@ export function authRouter(deps: {
   me: MeService;
   sessions: Sessions;
   signInLimit: RateLimitOptions;
+  signUpLimit: RateLimitOptions;
 }): Router {
   const router = Router();
 
-  router.post('/sign-up', validate({ body: signUpSchema }), async (req, res) => {
-    const { userId, orgId } = await deps.auth.signUp(req.body);
-    await startSession(deps.sessions, res, userId);
-    res.status(201).json(deps.me.describe(userId, orgId));
-  });
+  router.post(
+    '/sign-up',
+    signUpLimit(deps.signUpLimit),
+    validate({ body: signUpSchema }),
+    async (req, res) => {
+      const { userId, orgId } = await deps.auth.signUp(req.body);
+      await startSession(deps.sessions, res, userId);
+      res.status(201).json(deps.me.describe(userId, orgId));
+    },
+  );
 
   router.post(
     '/sign-in',

@@ -17,9 +17,9 @@ export function orgsRouter(deps: { db: Db; orgs: OrgsService }): Router {
     res.json(deps.orgs.members(res.locals.member.orgId));
   });
 
-  router.post('/current/invitations', validate({ body: createInvitationSchema }), async (req, res) => {
+  router.post('/current/invitations', validate({ body: createInvitationSchema }), (req, res) => {
     const actor = { userId: signedInUser(res).id, orgId: res.locals.member.orgId };
-    res.status(201).json(await deps.orgs.invite(actor, req.body));
+    res.status(201).json(deps.orgs.invite(actor, req.body));
   });
 
   router.delete('/current/invitations/:invitationId', validate({ params: invitationParams }), (req, res) => {

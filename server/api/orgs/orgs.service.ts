@@ -5,6 +5,7 @@ import { findUser } from '@/server/api/me/me.repository';
 import { INVITATION_DAYS, newInvitationToken } from '@/server/services/invitation-token';
 import { invitationMail } from '@/server/services/mail/invitation-mail';
 import type { Mailer } from '@/server/services/mail/mailer';
+import { enqueueMail } from '@/server/services/mail/outbox.repository';
 import type { CreateInvitationInput, InvitationRow, MembersResponse } from '@/shared/schemas/orgs';
 import {
   deletePendingInvitation,
@@ -25,8 +26,11 @@ export function createOrgsService(deps: { db: Db; mailer: Mailer; appOrigin: str
       return { members: listMembers(db, orgId), invitations: listPendingInvitations(db, orgId) };
     },
 
-    /** Replaces any earlier pending invitation for the same e-mail, then mails the link. */
-    async invite(actor: Actor, input: CreateInvitationInput): Promise<InvitationRow> {
+    /**
+     * Replaces any earlier pending invitation for the same e-mail and queues the link's e-mail in the same
+     * transaction: the invitation exists exactly when its mail does, whether or not SMTP is up right now.
+     */
+    invite(actor: Actor, input: CreateInvitationInput): InvitationRow {
       const org = findOrganization(db, actor.orgId);
       const inviter = findUser(db, actor.userId);
       if (!org || !inviter) throw notFound('Firm');
@@ -52,18 +56,20 @@ export function createOrgsService(deps: { db: Db; mailer: Mailer; appOrigin: str
           subject: created.id,
           detail: { email: input.email, role: input.role },
         });
+        enqueueMail(
+          tx,
+          invitationMail({
+            to: input.email,
+            orgName: org.name,
+            inviterName: inviter.name,
+            role: input.role,
+            link: `${deps.appOrigin}/invite/${token}`,
+            expiresAt,
+          }),
+        );
         return created;
       });
-      await deps.mailer.send(
-        invitationMail({
-          to: input.email,
-          orgName: org.name,
-          inviterName: inviter.name,
-          role: input.role,
-          link: `${deps.appOrigin}/invite/${token}`,
-          expiresAt,
-        }),
-      );
+      deps.mailer.wake();
       return row;
     },
 

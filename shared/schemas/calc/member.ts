@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { CALC_BOUNDS } from '@/shared/schemas/calc/bounds';
+import { boundedRecord } from '@/shared/schemas/bounded-record';
 import { loadStandardSchema } from '@/shared/schemas/jobs';
 import {
   inputFlagSchema,
@@ -175,12 +176,11 @@ export const memberCheckInputSchema = z.object({
   minHeadroomIn: positive('the headroom').max(200).optional(),
   posts: memberPostsSchema.optional(),
   /** How each input was obtained, by field name ("clearSpanFt": "measured"). */
-  flags: z
-    .record(z.string().max(80), inputFlagSchema)
-    .refine((flags) => Object.keys(flags).length <= CALC_BOUNDS.flags, {
-      message: `At most ${CALC_BOUNDS.flags} flags`,
-    })
-    .optional(),
+  flags: boundedRecord(inputFlagSchema, {
+    maxEntries: CALC_BOUNDS.flags,
+    maxKeyLength: 80,
+    message: `At most ${CALC_BOUNDS.flags} input flags`,
+  }).optional(),
 });
 export type MemberCheckInput = z.infer<typeof memberCheckInputSchema>;
 /** The loading, support and use of a member without its material and size (shared with the shortlist). */

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { CALC_BOUNDS } from '@/shared/schemas/calc/bounds';
+import { boundedRecord } from '@/shared/schemas/bounded-record';
 import { memberCheckInputSchema, sizeIdentitySchema } from '@/shared/schemas/calc/member';
 
 /**
@@ -37,12 +38,11 @@ export const shortlistInputSchema = memberCheckInputSchema
     maxPieceLengthFt: z.number().finite().positive().max(80).optional(),
     sortBy: z.enum(shortlistSorts).optional(),
     /** Price per linear foot of the whole member, by "materialId/sizeId" or by sizeId alone. */
-    pricePerFt: z
-      .record(z.string().max(160), z.number().finite().min(0).max(1_000_000))
-      .refine((prices) => Object.keys(prices).length <= CALC_BOUNDS.prices, {
-        message: `At most ${CALC_BOUNDS.prices} prices`,
-      })
-      .optional(),
+    pricePerFt: boundedRecord(z.number().finite().min(0).max(1_000_000), {
+      maxEntries: CALC_BOUNDS.prices,
+      maxKeyLength: 160,
+      message: `At most ${CALC_BOUNDS.prices} prices`,
+    }).optional(),
     /** Most passing sizes to return; default 25. */
     limit: z.number().int().min(1).max(500).optional(),
   });

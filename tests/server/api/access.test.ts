@@ -30,7 +30,7 @@ const header = {
 
 async function inviteAndAccept(owner: Agent, email: string, role: Role): Promise<Agent> {
   await owner.post('/api/orgs/current/invitations').send({ email, role }).expect(201);
-  const mail = server.capturedMail().find((m) => m.to === email);
+  const mail = (await server.capturedMail()).find((m) => m.to === email);
   const token = mail?.text.match(/\/invite\/([A-Za-z0-9_-]+)/)?.[1];
   const agent = request.agent(server.app);
   await agent
@@ -84,7 +84,9 @@ describe('organization isolation', () => {
       ];
       for (const res of responses) {
         expect(res.status).toBe(404);
-        expect(res.body).toEqual({ error: { code: 'not_found', message: 'Job not found' } });
+        expect(res.body).toEqual({
+          error: { code: 'not_found', message: 'Job not found', requestId: expect.any(String) },
+        });
       }
       const stillB = await people['b-owner'].get(`/api/jobs/${jobOfB}`).expect(200);
       expect(stillB.body).toMatchObject({ name: 'B job', archivedAt: null });
@@ -116,7 +118,9 @@ describe('organization isolation', () => {
       ];
       for (const res of memberResponses) {
         expect(res.status).toBe(404);
-        expect(res.body).toEqual({ error: { code: 'not_found', message: 'Member not found' } });
+        expect(res.body).toEqual({
+          error: { code: 'not_found', message: 'Member not found', requestId: expect.any(String) },
+        });
       }
       const jobResponses = [
         await people[who].get(`/api/jobs/${jobOfB}/members`),
@@ -124,7 +128,9 @@ describe('organization isolation', () => {
       ];
       for (const res of jobResponses) {
         expect(res.status).toBe(404);
-        expect(res.body).toEqual({ error: { code: 'not_found', message: 'Job not found' } });
+        expect(res.body).toEqual({
+          error: { code: 'not_found', message: 'Job not found', requestId: expect.any(String) },
+        });
       }
       const stillB = await people['b-owner'].get(`/api/members/${memberOfB}`).expect(200);
       expect(stillB.body).toMatchObject({ label: 'Hall header', jobId: jobOfB });

@@ -5,7 +5,7 @@ import { sessions, users } from '@/db/schema';
 import { meSchema } from '@/shared/schemas/auth';
 import { apiErrorBodySchema } from '@/shared/errors';
 import { createTestServer, signUpBody, signedUpAgent, type TestServer } from '@/tests/helpers/server';
-import { ADDRESS_LIMIT_MULTIPLE } from '@/server/middleware/sign-in-limit';
+import { ADDRESS_LIMIT_MULTIPLE } from '@/server/middleware/auth-limits';
 
 let server: TestServer;
 beforeEach(async () => {
@@ -97,8 +97,10 @@ describe('POST /api/auth/sign-in', () => {
       .post('/api/auth/sign-in')
       .send({ email: 'nobody@example.test', password: 'not the password' })
       .expect(401);
-    expect(wrong.body).toEqual({ error: { code: 'unauthorized', message: 'E-mail or password is wrong' } });
-    expect(unknown.body).toEqual(wrong.body);
+    expect(wrong.body).toEqual({
+      error: { code: 'unauthorized', message: 'E-mail or password is wrong', requestId: expect.any(String) },
+    });
+    expect(unknown.body).toEqual({ error: { ...wrong.body.error, requestId: unknown.body.error.requestId } });
     expect(cookieOf(wrong)).toBe('');
   });
 

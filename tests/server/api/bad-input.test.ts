@@ -73,7 +73,11 @@ describe('bad input changes nothing', () => {
     const res = await owner.post('/api/jobs').set('Content-Type', 'application/json').send('{"name": ');
     expect(res.status).toBe(400);
     expect(res.body).toEqual({
-      error: { code: 'bad_request', message: 'The request body is not valid JSON' },
+      error: {
+        code: 'bad_request',
+        message: 'The request body is not valid JSON',
+        requestId: expect.any(String),
+      },
     });
     expect(rowCounts()).toEqual(before);
   });

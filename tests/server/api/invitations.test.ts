@@ -7,6 +7,7 @@ import { meSchema } from '@/shared/schemas/auth';
 import { invitationPreviewSchema, invitationRowSchema, membersResponseSchema } from '@/shared/schemas/orgs';
 import { capturedMailListSchema } from '@/shared/schemas/mail';
 import {
+  DEV_MAIL_PATH,
   TEST_APP_ORIGIN,
   createTestServer,
   signUpBody,
@@ -21,8 +22,8 @@ beforeEach(async () => {
 afterEach(() => server.close());
 
 /** The token in the newest captured e-mail to `to`. */
-function tokenMailedTo(to: string): string {
-  const mail = server.capturedMail().find((m) => m.to === to);
+async function tokenMailedTo(to: string): Promise<string> {
+  const mail = (await server.capturedMail()).find((m) => m.to === to);
   const match = mail?.text.match(new RegExp(`${TEST_APP_ORIGIN}/invite/([A-Za-z0-9_-]+)`));
   if (!match) throw new Error(`no invitation mail to ${to}`);
   return match[1];
@@ -40,14 +41,15 @@ describe('invitations', () => {
     const days = (Date.parse(row.expiresAt) - Date.parse(row.createdAt)) / 86_400_000;
     expectApprox(days, 7, { abs: 1 / 86_400 });
 
+    await server.mailer.idle();
     const mailList = capturedMailListSchema.parse(
-      (await request(server.app).get('/api/dev/mail').expect(200)).body,
+      (await request(server.app).get(DEV_MAIL_PATH).expect(200)).body,
     );
     expect(mailList.messages).toHaveLength(1);
     expect(mailList.messages[0].subject).toBe(
       `${ownerBody.name} invited you to ${ownerBody.firmName} on Tributary`,
     );
-    const token = tokenMailedTo('new.hire@example.test');
+    const token = await tokenMailedTo('new.hire@example.test');
     const stored = server.db.select().from(invitations).where(eq(invitations.id, row.id)).get();
     expect(stored?.tokenHash).toMatch(/^[0-9a-f]{64}$/);
     expect(stored?.tokenHash).not.toContain(token);
@@ -92,7 +94,7 @@ describe('invitations', () => {
     await owner
       .post('/api/orgs/current/invitations')
       .send({ email: 'once@example.test', role: 'contractor' });
-    const token = tokenMailedTo('once@example.test');
+    const token = await tokenMailedTo('once@example.test');
     await request(server.app)
       .post(`/api/invitations/${token}/accept`)
       .send({ name: 'Once', password: 'a long enough password' })
@@ -107,7 +109,7 @@ describe('invitations', () => {
     await owner
       .post('/api/orgs/current/invitations')
       .send({ email: 'late@example.test', role: 'contractor' });
-    const lateToken = tokenMailedTo('late@example.test');
+    const lateToken = await tokenMailedTo('late@example.test');
     server.db
       .update(invitations)
       .set({ expiresAt: new Date(Date.now() - 1000).toISOString() })
@@ -123,7 +125,7 @@ describe('invitations', () => {
       .post('/api/orgs/current/invitations')
       .send({ email: 'blank@example.test', role: 'contractor' });
     const res = await request(server.app)
-      .post(`/api/invitations/${tokenMailedTo('blank@example.test')}/accept`)
+      .post(`/api/invitations/${await tokenMailedTo('blank@example.test')}/accept`)
       .send({})
       .expect(400);
     expect(res.body.error.fields).toEqual({ name: ['Enter your name'], password: ['Choose a password'] });
@@ -134,7 +136,7 @@ describe('invitations', () => {
     const { agent: existing, body: existingBody } = await signedUpAgent(server.app);
     const { agent: stranger } = await signedUpAgent(server.app);
     await owner.post('/api/orgs/current/invitations').send({ email: existingBody.email, role: 'contractor' });
-    const token = tokenMailedTo(existingBody.email);
+    const token = await tokenMailedTo(existingBody.email);
     const preview = await request(server.app).get(`/api/invitations/${token}`).expect(200);
     expect(preview.body.hasAccount).toBe(true);
 
@@ -160,7 +162,7 @@ describe('invitations', () => {
       .send({ email: 'crew@example.test', role: 'contractor' });
     const crew = request.agent(server.app);
     await crew
-      .post(`/api/invitations/${tokenMailedTo('crew@example.test')}/accept`)
+      .post(`/api/invitations/${await tokenMailedTo('crew@example.test')}/accept`)
       .send({ name: 'Crew Lead', password: 'a long enough password' })
       .expect(201);
     const res = await crew
@@ -174,7 +176,7 @@ describe('invitations', () => {
       .post('/api/orgs/current/invitations')
       .send({ email: 'x@example.test', role: 'owner' })
       .expect(403);
-    expect(server.capturedMail().map((m) => m.to)).toEqual(['crew@example.test']);
+    expect((await server.capturedMail()).map((m) => m.to)).toEqual(['crew@example.test']);
   });
 
   it('inviting an existing member is a 409; engineers cannot be invited into a contracting firm', async () => {
@@ -195,7 +197,7 @@ describe('invitations', () => {
     await owner
       .post('/api/orgs/current/invitations')
       .send({ email: 'twice@example.test', role: 'contractor' });
-    const firstToken = tokenMailedTo('twice@example.test');
+    const firstToken = await tokenMailedTo('twice@example.test');
     const second = await owner
       .post('/api/orgs/current/invitations')
       .send({ email: 'twice@example.test', role: 'estimator' })
@@ -209,7 +211,7 @@ describe('invitations', () => {
     await owner.delete(`/api/orgs/current/invitations/${second.body.id}`).expect(204);
     await owner.delete(`/api/orgs/current/invitations/${second.body.id}`).expect(404);
     await request(server.app)
-      .get(`/api/invitations/${tokenMailedTo('twice@example.test')}`)
+      .get(`/api/invitations/${await tokenMailedTo('twice@example.test')}`)
       .expect(404);
   });
 });
@@ -223,7 +225,7 @@ describe('sign-up e-mail normalisation meets invitations', () => {
       .post('/api/orgs/current/invitations')
       .send({ email: 'MIXED.Case@example.test', role: 'contractor' });
     const preview = await request(server.app).get(
-      `/api/invitations/${tokenMailedTo('mixed.case@example.test')}`,
+      `/api/invitations/${await tokenMailedTo('mixed.case@example.test')}`,
     );
     expect(preview.body.hasAccount).toBe(true);
   });

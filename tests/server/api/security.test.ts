@@ -3,8 +3,10 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import nodemailer from 'nodemailer';
 import request from 'supertest';
+import { enqueueMail } from '@/server/services/mail/outbox.repository';
 import { afterEach, describe, expect, it } from 'vitest';
 import {
+  DEV_MAIL_PATH,
   TEST_APP_ORIGIN,
   createTestServer,
   signUpBody,
@@ -38,7 +40,7 @@ describe('security headers', () => {
     expect(res.headers['strict-transport-security']).toMatch(/max-age=\d+/);
     expect(String(res.headers['content-security-policy'])).toContain('upgrade-insecure-requests');
     expect(String(res.headers['set-cookie'])).toMatch(/; Secure/);
-    const mail = await request(server.app).get('/api/dev/mail').expect(404);
+    const mail = await request(server.app).get(DEV_MAIL_PATH).expect(404);
     expect(mail.body.error.code).toBe('not_found');
   });
 });
@@ -49,7 +51,9 @@ describe('origin check', () => {
     const { agent } = await signedUpAgent(server.app);
     const evil = await agent.post('/api/jobs').set('Origin', 'https://evil.example').send({ name: 'CSRF' });
     expect(evil.status).toBe(403);
-    expect(evil.body).toEqual({ error: { code: 'forbidden', message: 'Cross-site request refused' } });
+    expect(evil.body).toEqual({
+      error: { code: 'forbidden', message: 'Cross-site request refused', requestId: expect.any(String) },
+    });
     const signIn = await request(server.app)
       .post('/api/auth/sign-in')
       .set('Origin', 'null')
@@ -60,14 +64,51 @@ describe('origin check', () => {
     expect(list.body.jobs.map((j: { name: string }) => j.name)).toEqual(['From the app']);
   });
 
-  it('accepts an Origin equal to the Host the request came to', async () => {
+  it('compares scheme, host and port with APP_ORIGIN, never with the Host the request brought', async () => {
     server = await createTestServer();
-    const res = await request(server.app)
-      .post('/api/auth/sign-up')
-      .set('Host', 'tributary.local:8080')
-      .set('Origin', 'http://tributary.local:8080')
-      .send(signUpBody());
-    expect(res.status).toBe(201);
+    const refused = [
+      ['http://tributary.local:8080', 'tributary.local:8080'],
+      ['https://tributary.test', 'tributary.test'],
+      ['http://tributary.test:8080', 'tributary.test'],
+      ['http://tributary.test.evil.example', 'tributary.test'],
+      ['http://sub.tributary.test', 'tributary.test'],
+      ['null', 'tributary.test'],
+      ['not a url', 'tributary.test'],
+    ];
+    for (const [origin, host] of refused) {
+      const res = await request(server.app)
+        .post('/api/auth/sign-up')
+        .set('Host', host)
+        .set('Origin', origin)
+        .send(signUpBody());
+      expect([origin, res.status]).toEqual([origin, 403]);
+    }
+    for (const origin of ['http://tributary.test', 'http://TRIBUTARY.test:80']) {
+      const res = await request(server.app)
+        .post('/api/auth/sign-up')
+        .set('Origin', origin)
+        .send(signUpBody());
+      expect([origin, res.status]).toEqual([origin, 201]);
+    }
+  });
+});
+
+describe('caching', () => {
+  it('every API answer, success or error, says Cache-Control: no-store', async () => {
+    server = await createTestServer();
+    const { agent } = await signedUpAgent(server.app);
+    const job = await agent.post('/api/jobs').send({ name: 'Private' }).expect(201);
+    const answers = [
+      job,
+      await agent.get('/api/me').expect(200),
+      await agent.get('/api/jobs').expect(200),
+      await agent.get(`/api/jobs/${job.body.id}`).expect(200),
+      await agent.get('/api/orgs/current/members').expect(200),
+      await request(server.app).get('/api/me').expect(401),
+      await request(server.app).get('/api/invitations/unknown').expect(404),
+      await request(server.app).get('/api/nope').expect(404),
+    ];
+    for (const res of answers) expect(res.headers['cache-control']).toBe('no-store');
   });
 });
 
@@ -75,7 +116,9 @@ describe('routing', () => {
   it('answers unknown /api paths with a JSON 404', async () => {
     server = await createTestServer();
     const res = await request(server.app).get('/api/nope').expect(404);
-    expect(res.body).toEqual({ error: { code: 'not_found', message: 'No such API route' } });
+    expect(res.body).toEqual({
+      error: { code: 'not_found', message: 'No such API route', requestId: expect.any(String) },
+    });
     await request(server.app).post('/api/nope/deeper').send({}).expect(404);
   });
 
@@ -107,7 +150,9 @@ describe('routing', () => {
 
   it('lists captured mail in development, including mail that did not come through the app', async () => {
     server = await createTestServer();
-    await server.mailer.send({ to: 'someone@example.test', subject: 'Hello', text: 'Body text' });
+    enqueueMail(server.db, { to: 'someone@example.test', subject: 'Hello', text: 'Body text' });
+    server.mailer.wake();
+    await server.mailer.idle();
     const outside = nodemailer.createTransport({ host: server.smtp.host, port: server.smtp.port });
     await outside.sendMail({
       from: 'x@example.test',
@@ -116,7 +161,7 @@ describe('routing', () => {
       text: 'Raw',
     });
     outside.close();
-    const res = await request(server.app).get('/api/dev/mail').expect(200);
+    const res = await request(server.app).get(DEV_MAIL_PATH).expect(200);
     expect(res.body.messages).toEqual([
       {
         id: expect.any(String),

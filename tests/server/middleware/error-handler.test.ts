@@ -57,4 +57,22 @@ describe('error handler', () => {
     expect(res.status).toBe(409);
     expect(res.text).not.toContain('users.email');
   });
+
+  it('answers a 4xx error from reading the request with its status and a message, and logs no stack', async () => {
+    const logged: string[] = [];
+    const notAllowed = Object.assign(new Error('internal detail'), { status: 405, expose: true });
+    const res = await request(appThrowing(notAllowed, logged)).get('/boom');
+    expect(res.status).toBe(405);
+    expect(res.body).toEqual({ error: { code: 'bad_request', message: 'The request could not be read' } });
+    expect(logged).toEqual([]);
+  });
+
+  it('keeps a 5xx error with a status a bare 500 and logs it', async () => {
+    const logged: string[] = [];
+    const broken = Object.assign(new Error('stream.encoding.set'), { status: 500 });
+    const res = await request(appThrowing(broken, logged)).get('/boom');
+    expect(res.status).toBe(500);
+    expect(res.body.error.code).toBe('internal');
+    expect(logged.join('\n')).toContain('stream.encoding.set');
+  });
 });

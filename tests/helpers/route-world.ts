@@ -1,0 +1,158 @@
+import request from 'supertest';
+import { openDatabase } from '@/db/client';
+import { createApp } from '@/server/app';
+import type { Mailer } from '@/server/services/mail/mailer';
+import type { Role } from '@/shared/schemas/auth';
+import { listApiRoutes, routeParams, type ApiRoute } from './api-routes';
+import { sampleBody } from './sample-bodies';
+import { signUpBody, type TestServer } from './server';
+
+const noMail: Mailer = {
+  wake: () => undefined,
+  idle: () => Promise.resolve(),
+  close: () => Promise.resolve(),
+};
+
+/** Every /api route of an app built as the server builds it (with the dev mail route mounted). */
+export const API_ROUTES = listApiRoutes(
+  createApp({ db: openDatabase(':memory:').db, mailer: noMail, appOrigin: 'http://x.test', devMailKey: 'k' }),
+);
+
+export const routeLabel = (route: ApiRoute) => `${route.method.toUpperCase()} ${route.path}`;
+
+export interface Person {
+  name: string;
+  role: Role;
+  firm: 'A' | 'B' | 'E';
+  email: string;
+  password: string;
+  /** `tributary_session=…` of a session of this person. */
+  cookie: string;
+}
+
+const sessionCookie = (res: request.Response) =>
+  ((res.headers['set-cookie'] as unknown as string[] | undefined) ?? [])
+    .map((c) => c.split(';')[0])
+    .find((c) => c.startsWith('tributary_session=') && c !== 'tributary_session=') ?? '';
+
+/**
+ * Firm A (an owner, a contractor, an estimator), an engineering firm E (an engineer) and firm B (an owner),
+ * with a way to make a fresh value for any route parameter in a firm and to call any route.
+ */
+export async function createRouteWorld(server: TestServer) {
+  const people: Record<'owner' | 'contractor' | 'estimator' | 'engineer' | 'ownerOfB', Person> = {} as never;
+  /** Strings only firm B's rows hold: none may show up in an answer to anyone else. */
+  const firmBMarkers: string[] = [];
+  let firmBOrgId = '';
+  let tokenCount = 0;
+
+  const mailedToken = async (email: string) => {
+    const mail = (await server.capturedMail()).find((m) => m.to === email);
+    const token = mail?.text.match(/\/invite\/([\w-]+)/)?.[1];
+    if (!token) throw new Error(`no invitation mailed to ${email}`);
+    return token;
+  };
+
+  const invite = (owner: Person, email: string, role: Role) =>
+    request(server.app)
+      .post('/api/orgs/current/invitations')
+      .set('Cookie', owner.cookie)
+      .send({ email, role })
+      .expect(201);
+
+  /** Calls `route` with its parameters filled in and `body` (default: its sample body). */
+  function send(
+    route: ApiRoute,
+    params: Record<string, string>,
+    options: { cookie?: string; orgId?: string; body?: unknown } = {},
+  ) {
+    const path = route.path.replace(/:(\w+)/g, (_, name: string) => encodeURIComponent(params[name]));
+    const req = request(server.app)[route.method](path);
+    if (options.cookie) req.set('Cookie', options.cookie);
+    if (options.orgId) req.set('X-Org-Id', options.orgId);
+    const body =
+      'body' in options
+        ? options.body
+        : route.schemas.body && sampleBody(route.schemas.body, routeLabel(route));
+    if (body === undefined) return req;
+    // superagent sends objects and arrays as JSON itself; any other JSON value goes as its text.
+    return typeof body === 'object' && body !== null
+      ? req.send(body)
+      : req.set('Content-Type', 'application/json').send(JSON.stringify(body));
+  }
+
+  /**
+   * A fresh value for the route parameter `name`, owned by `owner`'s firm: `token` is an invitation link's
+   * token; `<thing>Id` is the id the route `POST …/<thing>s` answers, made with its sample body (its own
+   * parameters made the same way). A parameter that fits neither needs a line here.
+   */
+  async function makeParam(name: string, owner: Person): Promise<string> {
+    if (name === 'token') {
+      const email = `world-token-${(tokenCount += 1)}-${owner.firm.toLowerCase()}@example.test`;
+      await invite(owner, email, 'estimator');
+      return mailedToken(email);
+    }
+    const stem = name.match(/^(\w+)Id$/)?.[1];
+    const create = API_ROUTES.find((r) => r.method === 'post' && stem && r.path.endsWith(`/${stem}s`));
+    if (!create)
+      throw new Error(`No way to make :${name}: add one to makeParam in tests/helpers/route-world.ts`);
+    const res = await send(create, await makeParams(create, owner), { cookie: owner.cookie });
+    if (res.status !== 201) throw new Error(`${routeLabel(create)} answered ${res.status}: ${res.text}`);
+    if (owner.firm === 'B') {
+      for (const key of ['id', 'name', 'label', 'email']) {
+        if (typeof res.body[key] === 'string') firmBMarkers.push(res.body[key]);
+      }
+    }
+    return res.body.id;
+  }
+
+  async function makeParams(route: ApiRoute, owner: Person): Promise<Record<string, string>> {
+    const params: Record<string, string> = {};
+    for (const name of routeParams(route.path)) params[name] = await makeParam(name, owner);
+    return params;
+  }
+
+  async function join(owner: Person, name: string, role: Role): Promise<Person> {
+    const email = `${name}@example.test`;
+    await invite(owner, email, role);
+    const password = 'a long enough password';
+    const res = await request(server.app)
+      .post(`/api/invitations/${await mailedToken(email)}/accept`)
+      .send({ name, password })
+      .expect(201);
+    return { name, role, firm: owner.firm, email, password, cookie: sessionCookie(res) };
+  }
+
+  async function founder(name: string, firm: Person['firm']): Promise<Person> {
+    const body = signUpBody({
+      firmKind: firm === 'E' ? 'engineering' : 'contracting',
+      firmName: `Firm ${firm}`,
+    });
+    const res = await request(server.app).post('/api/auth/sign-up').send(body).expect(201);
+    if (firm === 'B') firmBOrgId = res.body.activeOrgId;
+    const role: Role = firm === 'E' ? 'engineer' : 'owner';
+    return { name, role, firm, email: body.email, password: body.password, cookie: sessionCookie(res) };
+  }
+
+  /** A new session of `person` (for routes that start or end one). */
+  async function signIn(person: Person): Promise<string> {
+    const res = await request(server.app)
+      .post('/api/auth/sign-in')
+      .send({ email: person.email, password: person.password })
+      .expect(200);
+    return sessionCookie(res);
+  }
+
+  people.owner = await founder('owner', 'A');
+  people.contractor = await join(people.owner, 'contractor', 'contractor');
+  people.estimator = await join(people.owner, 'estimator', 'estimator');
+  people.engineer = await founder('engineer', 'E');
+  people.ownerOfB = await founder('ownerOfB', 'B');
+  firmBMarkers.push(people.ownerOfB.email, firmBOrgId);
+  // One row of every kind a route names for firm B, so every answer can be searched for them.
+  for (const route of API_ROUTES) await makeParams(route, people.ownerOfB);
+
+  return { people, firmBMarkers, firmBOrgId, send, makeParams, signIn };
+}
+
+export type RouteWorld = Awaited<ReturnType<typeof createRouteWorld>>;

@@ -1,0 +1,70 @@
+import type { z } from 'zod';
+import { signInSchema, signUpSchema } from '@/shared/schemas/auth';
+import type { MemberCheckInputBody } from '@/shared/schemas/calc/member';
+import { memberCheckRequestSchema } from '@/shared/schemas/calc/requests';
+import { shortlistInputSchema } from '@/shared/schemas/calc/shortlist';
+import { spanTableInputSchema } from '@/shared/schemas/calc/span-table';
+import { jobInputSchema, jobPatchSchema } from '@/shared/schemas/jobs';
+import { memberCreateSchema, memberPatchSchema } from '@/shared/schemas/members';
+import { acceptInvitationSchema, createInvitationSchema } from '@/shared/schemas/orgs';
+import { signUpBody } from './server';
+
+/** Invented demo header: 2-ply 2x10 Douglas Fir-Larch No.2 over 6 ft, under 13 ft of roof and 6 ft of ceiling. */
+export const SAMPLE_HEADER: MemberCheckInputBody = {
+  kind: 'header',
+  edition: 'ASCE 7-22',
+  clearSpanFt: 6,
+  sources: [
+    { kind: 'roof', tributaryFt: 13, deadPsf: 15, roofLivePsf: 20 },
+    { kind: 'ceiling', tributaryFt: 6, deadPsf: 10, livePsf: 10 },
+  ],
+  materialId: 'sawn-douglas-fir-larch-no2',
+  sizeId: '2-ply-2x10',
+};
+
+let counter = 0;
+const unique = () => `${Date.now()}-${(counter += 1)}`;
+
+/**
+ * A valid body for each request schema a route validates, made fresh on each call. A route whose body
+ * schema is missing here cannot be tried by the access matrix or the hostile-body tests: add one.
+ */
+export const SAMPLE_BODIES = new Map<z.ZodType, () => unknown>([
+  [signUpSchema, () => signUpBody()],
+  [signInSchema, () => ({ email: `nobody-${unique()}@example.test`, password: 'not the password' })],
+  [createInvitationSchema, () => ({ email: `invitee-${unique()}@example.test`, role: 'estimator' })],
+  [acceptInvitationSchema, () => ({ name: 'Invited Person', password: 'a long enough password' })],
+  [jobInputSchema, () => ({ name: `Sample job ${unique()}`, stories: 2 })],
+  [jobPatchSchema, () => ({ notes: `Patched ${unique()}` })],
+  [memberCreateSchema, () => ({ label: `Sample member ${unique()}`, input: SAMPLE_HEADER })],
+  [memberPatchSchema, () => ({ wall: `Wall ${unique()}` })],
+  [memberCheckRequestSchema, () => ({ ...SAMPLE_HEADER, diagrams: false })],
+  [
+    shortlistInputSchema,
+    () => ({
+      kind: 'header',
+      edition: 'ASCE 7-22',
+      clearSpanFt: 6,
+      sources: SAMPLE_HEADER.sources,
+      materialIds: ['sawn-douglas-fir-larch-no2'],
+    }),
+  ],
+  [
+    spanTableInputSchema,
+    () => ({
+      edition: 'ASCE 7-22',
+      deadPsf: 12,
+      livePsf: 40,
+      tributaryWidthsFt: [4, 8],
+      materialIds: ['sawn-douglas-fir-larch-no2'],
+      plies: [2],
+    }),
+  ],
+]);
+
+/** A fresh valid body for `schema`; throws naming `where` when there is no sample for it. */
+export function sampleBody(schema: z.ZodType, where: string): unknown {
+  const make = SAMPLE_BODIES.get(schema);
+  if (!make) throw new Error(`No sample body for ${where}: add one to tests/helpers/sample-bodies.ts`);
+  return make();
+}

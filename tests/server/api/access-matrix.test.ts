@@ -1,0 +1,132 @@
+import type request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Role } from '@/shared/schemas/auth';
+import { routeParams, type ApiRoute } from '@/tests/helpers/api-routes';
+import { API_ROUTES, createRouteWorld, routeLabel, type RouteWorld } from '@/tests/helpers/route-world';
+import { sampleBody } from '@/tests/helpers/sample-bodies';
+import { createTestServer, type TestServer } from '@/tests/helpers/server';
+
+/**
+ * Every /api route, read from the router itself, tried signed out, as each role, and with another firm's
+ * ids. A route gets its expectations from ACCESS below: a route added without a rule there fails.
+ */
+
+type Rule =
+  { kind: 'public' } | { kind: 'signed-in' } | { kind: 'firm'; roles: Role[] } | { kind: 'dev-mail-key' };
+
+const CONTRACTING: Role[] = ['owner', 'contractor', 'estimator'];
+
+/** Routes anyone may call, by exact method and path: each one is a decision, never a default. */
+const PUBLIC = new Set([
+  'GET /api/health',
+  'POST /api/auth/sign-up',
+  'POST /api/auth/sign-in',
+  'POST /api/auth/sign-out',
+  'GET /api/invitations/:token',
+  'POST /api/invitations/:token/accept',
+]);
+
+/** Areas by path: a route is in an area when its path is the area's or lies below it. */
+const AREAS: [area: string, rule: Rule][] = [
+  ['/api/me', { kind: 'signed-in' }],
+  ['/api/calc', { kind: 'signed-in' }],
+  ['/api/orgs/current', { kind: 'firm', roles: ['owner'] }],
+  ['/api/jobs', { kind: 'firm', roles: CONTRACTING }],
+  ['/api/members', { kind: 'firm', roles: CONTRACTING }],
+  ['/api/dev/mail', { kind: 'dev-mail-key' }],
+];
+
+function ruleFor(route: ApiRoute): Rule | undefined {
+  if (PUBLIC.has(`${route.method.toUpperCase()} ${route.path}`)) return { kind: 'public' };
+  return AREAS.find(([area]) => route.path === area || route.path.startsWith(`${area}/`))?.[1];
+}
+
+const routes = API_ROUTES;
+const label = routeLabel;
+
+let server: TestServer;
+let world: RouteWorld;
+beforeAll(async () => {
+  server = await createTestServer();
+  world = await createRouteWorld(server);
+});
+afterAll(() => server.close());
+
+const firmA = ['owner', 'contractor', 'estimator'] as const;
+
+/** Checks every answer shares: never a 5xx, never cacheable, never a word of firm B's. */
+function expectSafe(res: request.Response, what: string) {
+  expect(res.status, `${what}: ${res.text}`).toBeLessThan(500);
+  expect(res.headers['cache-control'], what).toBe('no-store');
+  for (const marker of world.firmBMarkers)
+    expect(res.text, `${what} leaks firm B's ${marker}`).not.toContain(marker);
+}
+
+describe('the route list comes from the router', () => {
+  it('finds the known routes and gives every one an access rule', () => {
+    expect(routes.length).toBeGreaterThanOrEqual(20);
+    expect(routes.map(label)).toEqual(
+      expect.arrayContaining(['GET /api/jobs/:jobId', 'POST /api/auth/sign-up']),
+    );
+    expect(routes.filter((route) => !ruleFor(route)).map(label)).toEqual([]);
+  });
+
+  it('has a valid sample body for every route that takes one', () => {
+    for (const route of routes.filter((r) => r.schemas.body)) {
+      const schema = route.schemas.body!;
+      const parsed = schema.safeParse(sampleBody(schema, label(route)));
+      expect(parsed.error?.issues ?? [], label(route)).toEqual([]);
+    }
+  });
+});
+
+describe.each(routes.map((route) => [label(route), route] as const))('%s', (_label, route) => {
+  const rule: Rule | { kind: 'missing' } = ruleFor(route) ?? { kind: 'missing' };
+
+  it('signed out', async () => {
+    const params = await world.makeParams(route, world.people.owner);
+    const res = await world.send(route, params);
+    expectSafe(res, 'signed out');
+    if (rule.kind === 'signed-in' || rule.kind === 'firm') expect(res.status).toBe(401);
+    if (rule.kind === 'dev-mail-key') expect(res.status).toBe(404);
+  });
+
+  it.each([...firmA, 'engineer'] as const)('as the %s', async (who) => {
+    const person = world.people[who];
+    // Public routes may start or end a session: each try gets a session of its own.
+    const cookie = rule.kind === 'public' ? await world.signIn(person) : person.cookie;
+    const params = await world.makeParams(route, world.people.owner);
+    const res = await world.send(route, params, { cookie });
+    expectSafe(res, who);
+    if (rule.kind === 'signed-in') expect(res.status, res.text).toBeLessThan(300);
+    if (rule.kind === 'dev-mail-key') expect(res.status).toBe(404);
+    if (rule.kind === 'firm') {
+      if (rule.roles.includes(person.role)) expect(res.status, res.text).toBeLessThan(300);
+      else expect(res.status, res.text).toBe(403);
+    }
+  });
+
+  if (rule.kind !== 'firm') return;
+  const hasIds = routeParams(route.path).length > 0;
+
+  it.each(firmA)("as firm A's %s naming firm B in X-Org-Id: its own firm, never B's", async (who) => {
+    const person = world.people[who];
+    const res = await world.send(route, await world.makeParams(route, world.people.owner), {
+      cookie: person.cookie,
+      orgId: world.firmBOrgId,
+    });
+    expectSafe(res, `${who} naming firm B`);
+    if (rule.roles.includes(person.role)) expect(res.status, res.text).toBeLessThan(300);
+    else expect(res.status, res.text).toBe(403);
+  });
+
+  if (!hasIds) return;
+  it.each(firmA)("as firm A's %s with firm B's ids: 404 (403 for a role the route refuses)", async (who) => {
+    const person = world.people[who];
+    const res = await world.send(route, await world.makeParams(route, world.people.ownerOfB), {
+      cookie: person.cookie,
+    });
+    expectSafe(res, `${who} with firm B's ids`);
+    expect(res.status, res.text).toBe(rule.roles.includes(person.role) ? 404 : 403);
+  });
+});
