@@ -1,3 +1,4 @@
+import { CALC_BOUNDS } from '@/shared/schemas/calc/bounds';
 import { z } from 'zod';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { MAX_FIELD_MESSAGES } from '@/shared/errors';
@@ -82,27 +83,31 @@ describe('a huge bad body gets a short answer', () => {
     const pricePerFt = Object.fromEntries(Array.from({ length: 15_000 }, (_, i) => [`p${i}`, -1]));
     const res = await owner.post('/api/calc/shortlist').send({ ...shortlistBody, pricePerFt });
     expectShortRefusal(res);
-    expect(res.body.error.fields).toEqual({ pricePerFt: ['At most 4,000 prices'] });
+    expect(res.body.error.fields).toEqual({ pricePerFt: [`At most ${CALC_BOUNDS.prices} prices`] });
   });
 
-  it('4,000 negative prices: the first MAX_FIELD_MESSAGES messages and how many there were', async () => {
-    const pricePerFt = Object.fromEntries(Array.from({ length: 4000 }, (_, i) => [`p${i}`, -1]));
+  it('as many negative prices as allowed: the first MAX_FIELD_MESSAGES messages and how many there were', async () => {
+    const pricePerFt = Object.fromEntries(
+      Array.from({ length: CALC_BOUNDS.prices }, (_, i) => [`p${i}`, -1]),
+    );
     const res = await owner.post('/api/calc/shortlist').send({ ...shortlistBody, pricePerFt });
     expectShortRefusal(res);
     expect(res.body.error.message).toBe(
-      `Some fields need attention (the first ${MAX_FIELD_MESSAGES} of 4000 problems are listed)`,
+      `Some fields need attention (the first ${MAX_FIELD_MESSAGES} of ${CALC_BOUNDS.prices} problems are listed)`,
     );
   });
 
-  it('4,000 good prices pass the size limit; 4,001 do not', async () => {
+  it('as many good prices as allowed pass the size limit; one more does not', async () => {
     const prices = (n: number) => Object.fromEntries(Array.from({ length: n }, (_, i) => [`size-${i}`, 1]));
     await owner
       .post('/api/calc/shortlist')
-      .send({ ...shortlistBody, pricePerFt: prices(4000) })
+      .send({ ...shortlistBody, pricePerFt: prices(CALC_BOUNDS.prices) })
       .expect(200);
-    const res = await owner.post('/api/calc/shortlist').send({ ...shortlistBody, pricePerFt: prices(4001) });
+    const res = await owner
+      .post('/api/calc/shortlist')
+      .send({ ...shortlistBody, pricePerFt: prices(CALC_BOUNDS.prices + 1) });
     expectShortRefusal(res);
-    expect(res.body.error.fields).toEqual({ pricePerFt: ['At most 4,000 prices'] });
+    expect(res.body.error.fields).toEqual({ pricePerFt: [`At most ${CALC_BOUNDS.prices} prices`] });
   });
 
   it('40 load sources, every field wrong: at most MAX_FIELD_MESSAGES messages', async () => {
