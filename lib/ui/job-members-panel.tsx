@@ -33,7 +33,7 @@ function MemberRow({ member }: { member: MemberListItem }) {
               <Text variant="caption" tone="muted">
                 {member.kind === 'header' ? 'Header' : 'Beam'}
                 {member.wall ? ` · ${member.wall}` : ''} · {member.summary.sizeLabel}{' '}
-                {member.summary.materialLabel} · {member.summary.governingCheck} at{' '}
+                {member.summary.materialLabel} · {checkNames[member.summary.governingCheck]} at{' '}
                 {formatNumber(member.summary.governingRatio, 2)}
                 {member.summary.warningsCount ? ` · ${member.summary.warningsCount} warnings` : ''}
               </Text>
