@@ -41,7 +41,7 @@ export function CheckTable({ result }: { result: MemberCheckResult }) {
           <View style={styles.head}>
             <Icon name={post.pass ? 'check' : 'error'} color={post.pass ? colors.success : colors.danger} />
             <Text variant="bodyStrong" style={styles.label}>
-              Post, {post.end} end
+              {post.end === 'centre' ? 'Centre post' : `Post, ${post.end} end`}
             </Text>
             <Text variant="label" tone={post.pass ? 'ink' : 'danger'}>
               {checkVerdictText(post)}
