@@ -14,14 +14,8 @@ import {
   type SupportedBeam,
 } from '@/lib/calc/analysis/supported-beam-state';
 import type { BeamStability, BeamStabilityCase } from '@/lib/calc/factors';
-import {
-  asdCombinations,
-  buildMemberLoads,
-  liveLoadPatterns,
-  patternedName,
-  patternFactor,
-  type TakedownLine,
-} from '@/lib/calc/loads';
+import { asdCombinations, buildMemberLoads, type TakedownLine } from '@/lib/calc/loads';
+import { liveLoadPatterns, patternedName, patternFactor } from '@/lib/calc/loads/live-patterns';
 import { roofSnowLoad, type RoofSnow } from '@/lib/calc/snow';
 import { LOAD_TYPES, type BeamLoad, type LoadCombination, type LoadType } from '@/lib/calc/types';
 import type { LoadSource } from '@/shared/schemas/calc/loads';
@@ -291,8 +285,8 @@ function prepareCombination(
   for (let i = 0; i < groups.length; i++) {
     const g = groups[i];
     const f = factors[g.type] ?? 0;
-    const loaded = pattern === null || g.region === null || pattern.includes(g.region);
-    const c = f * patternFactor(g.type, loaded);
+    const c =
+      pattern === null || g.region === null ? f : f * patternFactor(g.type, pattern.includes(g.region));
     coeffs.push(c);
     variableCoeffs.push(g.type === 'D' ? 0 : c);
     if (g.type !== 'D' && c !== 0) anyVariable = true;
