@@ -1,8 +1,14 @@
 import { CalcInputError, type BeamLoad } from '@/lib/calc/types';
-import { eiSlope, eiYNoConstant, moment, segmentLoad, shearAfter } from './macaulay';
+import {
+  eiSlope,
+  eiYNoConstant,
+  moment,
+  segmentLoad,
+  shearAfter,
+  simpleSpanBreakpoints,
+} from './simple-span-state';
 import { emptySpanState, type SpanState } from './span-state';
 import { splitSpanLoads, type PointPiece, type SpanLoads } from './span-loads';
-import { simpleSpanBreakpoints } from './simple-span-state';
 
 /**
  * A member on pinned supports: its length and where the supports are, ft from the left end. Two supports

@@ -251,8 +251,8 @@ export function evaluateSize(
     coeffs[coeffs.length - 1] = s * (prep.combination.factors.D ?? 0) * Kcr;
     combineStates(scratch, prepared.groupAndUnitStates, coeffs);
     for (let r = 0; r < regionCount; r++) {
-      const [from, to] = regionRanges[r];
-      const totalIn = Math.abs(stateMaxEiDeflectionBetween(scratch, from, to).value) * toIn;
+      const range = regionRanges[r];
+      const totalIn = Math.abs(stateMaxEiDeflectionBetween(scratch, range[0], range[1]).value) * toIn;
       const ratio = totalIn / totalLimits[r];
       if (!total || ratio > total.ratio) {
         total = {

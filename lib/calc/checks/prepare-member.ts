@@ -14,14 +14,8 @@ import {
   type SupportedBeam,
 } from '@/lib/calc/analysis/supported-beam-state';
 import type { BeamStability, BeamStabilityCase } from '@/lib/calc/factors';
-import {
-  asdCombinations,
-  buildMemberLoads,
-  liveLoadPatterns,
-  patternedName,
-  patternFactor,
-  type TakedownLine,
-} from '@/lib/calc/loads';
+import { asdCombinations, buildMemberLoads, type TakedownLine } from '@/lib/calc/loads';
+import { liveLoadPatterns, patternedName, patternFactor } from '@/lib/calc/loads/live-patterns';
 import { roofSnowLoad, type RoofSnow } from '@/lib/calc/snow';
 import { LOAD_TYPES, type BeamLoad, type LoadCombination, type LoadType } from '@/lib/calc/types';
 import type { LoadSource } from '@/shared/schemas/calc/loads';
@@ -255,7 +249,11 @@ interface CombinationContext {
 }
 
 function regionMaxima(state: SpanState, ranges: readonly [number, number][]): number[] {
-  return ranges.map(([from, to]) => Math.abs(stateMaxEiDeflectionBetween(state, from, to).value));
+  const out: number[] = [];
+  for (let r = 0; r < ranges.length; r++) {
+    out.push(Math.abs(stateMaxEiDeflectionBetween(state, ranges[r][0], ranges[r][1]).value));
+  }
+  return out;
 }
 
 /**
@@ -284,20 +282,25 @@ function prepareCombination(
   const creepCoeffs: number[] = [];
   const extra = creepKcr - 1;
   let anyVariable = false;
-  for (const g of groups) {
+  for (let i = 0; i < groups.length; i++) {
+    const g = groups[i];
     const f = factors[g.type] ?? 0;
-    const loaded = pattern === null || g.region === null || pattern.includes(g.region);
-    const c = f * patternFactor(g.type, loaded);
+    const c =
+      pattern === null || g.region === null ? f : f * patternFactor(g.type, pattern.includes(g.region));
     coeffs.push(c);
     variableCoeffs.push(g.type === 'D' ? 0 : c);
     if (g.type !== 'D' && c !== 0) anyVariable = true;
     const sustained = g.type === 'D' ? 1 : g.type === 'L' && c > 0 ? sustainedLiveFactor : 0;
     creepCoeffs.push(c + extra * sustained);
   }
+  // The last slot is the unit self-weight's, set by whoever combines with groupAndUnitStates.
+  const creepWithUnit = creepCoeffs.slice();
+  creepWithUnit.push(0);
   const combination =
     names === null ? basis : Object.freeze({ name: patternedName(basis, names), factors, CD: basis.CD });
   const state = combineStates(blankStateLike(scratch), groupStates, coeffs);
-  const zeros = regionRanges.map(() => 0);
+  const zeros: number[] = [];
+  for (let r = 0; r < regionRanges.length; r++) zeros.push(0);
   if (skipped) {
     return {
       combination,
@@ -305,7 +308,7 @@ function prepareCombination(
       skipped,
       coeffs,
       state,
-      creepCoeffs: [...creepCoeffs, 0],
+      creepCoeffs: creepWithUnit,
       eiVariableDeflection: { value: 0, atFt: scratch.spanFt / 2 },
       eiVariableByRegion: zeros,
       sustainedLiveFactor: 0,
@@ -331,7 +334,7 @@ function prepareCombination(
     skipped,
     coeffs,
     state,
-    creepCoeffs: [...creepCoeffs, 0],
+    creepCoeffs: creepWithUnit,
     eiVariableDeflection,
     eiVariableByRegion,
     sustainedLiveFactor,
@@ -404,8 +407,13 @@ export function prepareMember(input: MemberLoadingInput): PreparedMember {
   const xs = geometry.simple ? simpleSpanBreakpoints(L, loadSets) : supportedBeamBreakpoints(beam, loadSets);
   const analyse = (loads: readonly BeamLoad[]) =>
     geometry.simple ? simpleSpanState(L, loads, xs) : supportedBeamState(beam, loads, xs);
-  const groups: LoadGroup[] = groupLoads.map((g) => ({ ...g, state: analyse(g.loads) }));
-  const groupStates = groups.map((g) => g.state);
+  const groups: LoadGroup[] = [];
+  const groupStates: SpanState[] = [];
+  for (const g of groupLoads) {
+    const state = analyse(g.loads);
+    groups.push({ type: g.type, region: g.region, loads: g.loads, state });
+    groupStates.push(state);
+  }
   const unitSelfWeight = analyse([{ kind: 'uniform', wPlf: 1 }]);
   const regionRanges = geometry.regions.map((r): [number, number] => [
     xs.indexOf(r.startFt),
