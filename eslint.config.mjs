@@ -10,6 +10,7 @@ export default tseslint.config(
       '.expo/**',
       'data/**',
       'storage/**',
+      'backups/**',
       'screenshots/**',
     ],
   },

@@ -40,6 +40,7 @@ const envSchema = z
     APP_ORIGIN: z.url().optional(),
     SESSION_DAYS: z.coerce.number().int().min(1).max(365).default(30),
     WEB_DIR: z.string().min(1).default('dist'),
+    STORAGE_DIR: z.string().min(1).default('storage'),
     SEED_DEMO: z.enum(['0', '1'], { message: 'Use 1 or 0' }).optional(),
     TRUST_PROXY: trustProxySchema,
     DEV_MAIL_KEY: z.string().min(16, { message: 'Use at least 16 characters' }).max(200).optional(),
