@@ -20,7 +20,7 @@ describe('node --import tsx server/index.ts', () => {
     } finally {
       expect(await server.stop()).toBe(0);
     }
-  });
+  }, 60_000);
 
   it('prints the captured-mail link with its key; the API answers it and nothing without the key', async () => {
     const server = await startServer({ env: { DEV_MAIL_KEY: undefined } });
@@ -37,7 +37,7 @@ describe('node --import tsx server/index.ts', () => {
     } finally {
       await server.stop();
     }
-  });
+  }, 60_000);
 
   it('a production start on an empty database adds no demo firm and has no dev mail page', async () => {
     const production = {
@@ -55,5 +55,5 @@ describe('node --import tsx server/index.ts', () => {
     } finally {
       await server.stop();
     }
-  });
+  }, 60_000);
 });
