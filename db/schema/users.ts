@@ -9,7 +9,10 @@ export const users = sqliteTable('users', {
   createdAt: text('created_at').notNull(),
 });
 
-/** lucia v3 session rows; `expires_at` is Unix seconds, as @lucia-auth/adapter-drizzle writes it. */
+/**
+ * lucia v3 session rows; `expires_at` is Unix seconds, as @lucia-auth/adapter-drizzle writes it. `created_at`
+ * and `user_agent` let a person tell their sessions apart (null on sessions from before they were kept).
+ */
 export const sessions = sqliteTable(
   'sessions',
   {
@@ -18,6 +21,30 @@ export const sessions = sqliteTable(
       .notNull()
       .references(() => users.id, { onDelete: 'cascade' }),
     expiresAt: integer('expires_at').notNull(),
+    createdAt: text('created_at'),
+    userAgent: text('user_agent'),
   },
   (t) => [index('sessions_user').on(t.userId)],
+);
+
+export const authTokenPurposes = ['password-reset'] as const;
+
+/**
+ * Single-use tokens e-mailed to a person (a password reset link). Only the SHA-256 of the token is kept; a
+ * token is good once (`used_at`) and until `expires_at` (ISO time).
+ */
+export const authTokens = sqliteTable(
+  'auth_tokens',
+  {
+    id: text('id').primaryKey(),
+    userId: text('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    purpose: text('purpose', { enum: authTokenPurposes }).notNull(),
+    tokenHash: text('token_hash').notNull().unique(),
+    createdAt: text('created_at').notNull(),
+    expiresAt: text('expires_at').notNull(),
+    usedAt: text('used_at'),
+  },
+  (t) => [index('auth_tokens_user').on(t.userId)],
 );

@@ -41,7 +41,8 @@ export function apiRouter(options: ApiOptions): Router {
   router.use(
     '/auth',
     authRouter({
-      auth: createAuthService(db),
+      db,
+      auth: createAuthService(options),
       me,
       sessions,
       signInLimit: options.signInLimit,

@@ -76,3 +76,11 @@ export function signUpLimit(options: RateLimitOptions): RequestHandler {
     skipSuccessfulRequests: false,
   });
 }
+
+/** Reset-link requests per client address, every one counted: each may send an e-mail. */
+export function passwordResetLimit(options: RateLimitOptions): RequestHandler {
+  return limiter(options, clientAddress, {
+    message: 'Too many reset requests from this address.',
+    skipSuccessfulRequests: false,
+  });
+}

@@ -1,4 +1,4 @@
-import type { RequestHandler, Response } from 'express';
+import type { Request, RequestHandler, Response } from 'express';
 import type { Session, User } from 'lucia';
 import type { Db } from '@/db/client';
 import { AppError } from '@/server/app-error';
@@ -72,12 +72,21 @@ export function requireRole(...roles: Role[]): RequestHandler {
 }
 
 /**
- * Opens a new session for `userId` and sets its cookie. A session the request already carried is ended
+ * Opens a new session for `userId` and sets its cookie, noting when and from which browser (its User-Agent,
+ * shortened) so the person can tell their sessions apart. A session the request already carried is ended
  * first, so signing in never keeps an older session id alive in this browser.
  */
-export async function startSession(sessions: Sessions, res: Response, userId: string): Promise<void> {
+export async function startSession(
+  sessions: Sessions,
+  req: Request,
+  res: Response,
+  userId: string,
+): Promise<void> {
   if (res.locals.session) await sessions.invalidateSession(res.locals.session.id);
-  const session = await sessions.createSession(userId, {});
+  const session = await sessions.createSession(userId, {
+    createdAt: new Date().toISOString(),
+    userAgent: req.get('user-agent')?.slice(0, 200) ?? null,
+  });
   res.locals.session = session;
   res.append('Set-Cookie', sessions.createSessionCookie(session.id).serialize());
 }

@@ -15,11 +15,14 @@ export const REQUEST_ID_HEADER = 'X-Request-Id';
 
 /**
  * The path as logged: no query string (the dev mail key travels there), and the secret path segment of an
- * invitation link replaced by its name. Headers and bodies are never logged, so neither are passwords or
+ * invitation or password reset link replaced by its name. Headers and bodies are never logged, so neither are passwords or
  * cookies.
  */
 export function loggedPath(req: Request): string {
-  return req.originalUrl.split('?')[0].replace(/\/invitations\/[^/]+/, '/invitations/:token');
+  return req.originalUrl
+    .split('?')[0]
+    .replace(/\/invitations\/[^/]+/, '/invitations/:token')
+    .replace(/\/password-reset\/[^/]+/, '/password-reset/:resetToken');
 }
 
 /** One JSON line: when, how grave, which request, then the fields of the event. */

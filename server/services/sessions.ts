@@ -19,6 +19,10 @@ export function createSessions(db: Db, options: SessionOptions) {
       attributes: { secure: options.secureCookies, sameSite: 'lax' },
     },
     getUserAttributes: (attributes) => ({ email: attributes.email, name: attributes.name }),
+    getSessionAttributes: (attributes) => ({
+      createdAt: attributes.createdAt,
+      userAgent: attributes.userAgent,
+    }),
   });
 }
 
@@ -28,5 +32,6 @@ declare module 'lucia' {
   interface Register {
     Lucia: Sessions;
     DatabaseUserAttributes: { email: string; name: string };
+    DatabaseSessionAttributes: { createdAt: string | null; userAgent: string | null };
   }
 }

@@ -18,19 +18,33 @@ export const passwordSchema = z
   .string()
   .min(10, { message: 'Use at least 10 characters' })
   .max(200, { message: 'Use at most 200 characters' });
+export const PASSWORD_IS_EMAIL = 'Use a password that is not your e-mail address';
+
+/** True when the password is the e-mail address or the part before its @, in any case or spacing. */
+export function passwordMatchesEmail(password: string, email: string): boolean {
+  const typed = password.trim().toLowerCase();
+  const address = email.trim().toLowerCase();
+  return typed === address || typed === address.split('@')[0];
+}
+
 export const personNameSchema = visibleTextSchema('Enter your name', 120);
 
 /**
  * Sign-up creates a user and a new firm. A contracting firm makes the user its `owner`; an engineering
  * firm makes the user an `engineer` (engineers receive design requests only).
  */
-export const signUpSchema = z.object({
-  name: personNameSchema,
-  email: emailSchema,
-  password: passwordSchema,
-  firmName: visibleTextSchema('Enter your firm’s name', 160),
-  firmKind: orgKindSchema.default('contracting'),
-});
+export const signUpSchema = z
+  .object({
+    name: personNameSchema,
+    email: emailSchema,
+    password: passwordSchema,
+    firmName: visibleTextSchema('Enter your firm’s name', 160),
+    firmKind: orgKindSchema.default('contracting'),
+  })
+  .refine((input) => !passwordMatchesEmail(input.password, input.email), {
+    path: ['password'],
+    message: PASSWORD_IS_EMAIL,
+  });
 export type SignUpInput = z.input<typeof signUpSchema>;
 
 export const signInSchema = z.object({
@@ -58,3 +72,22 @@ export const meSchema = z.object({
   role: roleSchema,
 });
 export type Me = z.infer<typeof meSchema>;
+
+/** `POST /api/auth/password-reset`: mail a reset link to this address if it has an account. */
+export const passwordResetRequestSchema = z.object({ email: emailSchema });
+
+/** `POST /api/auth/password-reset/:resetToken`: the new password. */
+export const passwordResetSchema = z.object({ password: passwordSchema });
+
+/** One of the signed-in person's sessions; `id` is a handle, never the secret cookie value. */
+export const sessionRowSchema = z.object({
+  id: z.string(),
+  createdAt: z.string().nullable(),
+  expiresAt: z.string(),
+  userAgent: z.string().nullable(),
+  current: z.boolean(),
+});
+export type SessionRow = z.infer<typeof sessionRowSchema>;
+
+/** `GET /api/auth/sessions`, newest first. */
+export const sessionListSchema = z.object({ sessions: z.array(sessionRowSchema).max(10_000) });

@@ -17,6 +17,7 @@ describe('migrations', () => {
       .filter((name) => !name.startsWith('__drizzle') && !name.startsWith('sqlite_'));
     expect(tables).toEqual([
       'audit_events',
+      'auth_tokens',
       'invitations',
       'jobs',
       'mail_outbox',

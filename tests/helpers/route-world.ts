@@ -83,7 +83,7 @@ export async function createRouteWorld(server: TestServer) {
 
   /**
    * A fresh value for the route parameter `name`, owned by `owner`'s firm: `token` is an invitation link's
-   * token; `<thing>Id` is the id the route `POST …/<thing>s` answers, made with its sample body (its own
+   * token; `resetToken` a password reset link's (of a throwaway account); `<thing>Id` is the id the route `POST …/<thing>s` answers, made with its sample body (its own
    * parameters made the same way). A parameter that fits neither needs a line here.
    */
   async function makeParam(name: string, owner: Person): Promise<string> {
@@ -91,6 +91,16 @@ export async function createRouteWorld(server: TestServer) {
       const email = `world-token-${(tokenCount += 1)}-${owner.firm.toLowerCase()}@example.test`;
       await invite(owner, email, 'estimator');
       return mailedToken(email);
+    }
+    if (name === 'resetToken') {
+      // A throwaway account's link: using it ends that account's sessions, no one else's.
+      const body = signUpBody();
+      await request(server.app).post('/api/auth/sign-up').send(body).expect(201);
+      await request(server.app).post('/api/auth/password-reset').send({ email: body.email }).expect(204);
+      const mail = (await server.capturedMail()).find((m) => m.to === body.email);
+      const token = mail?.text.match(/\/reset-password\/([\w-]+)/)?.[1];
+      if (!token) throw new Error(`no reset link mailed to ${body.email}`);
+      return token;
     }
     const stem = name.match(/^(\w+)Id$/)?.[1];
     const create = API_ROUTES.find((r) => r.method === 'post' && stem && r.path.endsWith(`/${stem}s`));

@@ -1,5 +1,10 @@
 import type { z } from 'zod';
-import { signInSchema, signUpSchema } from '@/shared/schemas/auth';
+import {
+  passwordResetRequestSchema,
+  passwordResetSchema,
+  signInSchema,
+  signUpSchema,
+} from '@/shared/schemas/auth';
 import type { MemberCheckInputBody } from '@/shared/schemas/calc/member';
 import { memberCheckRequestSchema } from '@/shared/schemas/calc/requests';
 import { shortlistInputSchema } from '@/shared/schemas/calc/shortlist';
@@ -32,6 +37,8 @@ const unique = () => `${Date.now()}-${(counter += 1)}`;
 export const SAMPLE_BODIES = new Map<z.ZodType, () => unknown>([
   [signUpSchema, () => signUpBody()],
   [signInSchema, () => ({ email: `nobody-${unique()}@example.test`, password: 'not the password' })],
+  [passwordResetRequestSchema, () => ({ email: `forgetful-${unique()}@example.test` })],
+  [passwordResetSchema, () => ({ password: 'a brand new passphrase' })],
   [createInvitationSchema, () => ({ email: `invitee-${unique()}@example.test`, role: 'estimator' })],
   [acceptInvitationSchema, () => ({ name: 'Invited Person', password: 'a long enough password' })],
   [jobInputSchema, () => ({ name: `Sample job ${unique()}`, stories: 2 })],

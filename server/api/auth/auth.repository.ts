@@ -1,7 +1,9 @@
-import { eq } from 'drizzle-orm';
+import { and, desc, eq, gt, isNull } from 'drizzle-orm';
 import type { DbOrTx } from '@/db/client';
 import { newId } from '@/db/new-id';
-import { memberships, organizations, users } from '@/db/schema';
+import { authTokens, memberships, organizations, sessions, users, type authTokenPurposes } from '@/db/schema';
+
+type AuthTokenPurpose = (typeof authTokenPurposes)[number];
 import type { OrgKind, Role } from '@/shared/schemas/auth';
 
 export function findUserByEmail(db: DbOrTx, email: string) {
@@ -31,4 +33,70 @@ export function insertMembership(
   db.insert(memberships)
     .values({ id: newId(), ...membership, createdAt: new Date().toISOString() })
     .run();
+}
+
+export function updatePasswordHash(db: DbOrTx, userId: string, passwordHash: string): void {
+  db.update(users).set({ passwordHash }).where(eq(users.id, userId)).run();
+}
+
+export function deleteSessionsOf(db: DbOrTx, userId: string): void {
+  db.delete(sessions).where(eq(sessions.userId, userId)).run();
+}
+
+/** The user's sessions that have not expired, newest first. */
+export function listSessionsOf(db: DbOrTx, userId: string, nowUnixSeconds: number) {
+  return db
+    .select()
+    .from(sessions)
+    .where(and(eq(sessions.userId, userId), gt(sessions.expiresAt, nowUnixSeconds)))
+    .orderBy(desc(sessions.createdAt))
+    .all();
+}
+
+export function insertAuthToken(
+  db: DbOrTx,
+  token: { userId: string; purpose: AuthTokenPurpose; tokenHash: string; expiresAt: Date },
+): void {
+  db.insert(authTokens)
+    .values({
+      id: newId(),
+      ...token,
+      createdAt: new Date().toISOString(),
+      expiresAt: token.expiresAt.toISOString(),
+    })
+    .run();
+}
+
+/** Unused tokens of one purpose are dropped when a new one is made: only the newest link works. */
+export function deleteUnusedTokens(db: DbOrTx, userId: string, purpose: AuthTokenPurpose): void {
+  db.delete(authTokens)
+    .where(and(eq(authTokens.userId, userId), eq(authTokens.purpose, purpose), isNull(authTokens.usedAt)))
+    .run();
+}
+
+/** An unused, unexpired token of `purpose`, or undefined. */
+export function findOpenToken(db: DbOrTx, tokenHash: string, purpose: AuthTokenPurpose, now: Date) {
+  return db
+    .select()
+    .from(authTokens)
+    .where(
+      and(
+        eq(authTokens.tokenHash, tokenHash),
+        eq(authTokens.purpose, purpose),
+        isNull(authTokens.usedAt),
+        gt(authTokens.expiresAt, now.toISOString()),
+      ),
+    )
+    .get();
+}
+
+/** Marks the token used; false when another request used it first. */
+export function markTokenUsed(db: DbOrTx, id: string, at: Date): boolean {
+  return (
+    db
+      .update(authTokens)
+      .set({ usedAt: at.toISOString() })
+      .where(and(eq(authTokens.id, id), isNull(authTokens.usedAt)))
+      .run().changes > 0
+  );
 }

@@ -1,16 +1,41 @@
 import type { Db } from '@/db/client';
 import { AppError } from '@/server/app-error';
 import { recordAudit } from '@/server/api/audit/audit.repository';
+import { hashLinkToken, newLinkToken } from '@/server/services/link-token';
+import type { Mailer } from '@/server/services/mail/mailer';
+import { enqueueMail } from '@/server/services/mail/outbox.repository';
+import { passwordResetMail } from '@/server/services/mail/password-reset-mail';
 import { hashPassword, verifyPassword } from '@/server/services/password';
-import type { SignInInput, signUpSchema } from '@/shared/schemas/auth';
+import {
+  PASSWORD_IS_EMAIL,
+  passwordMatchesEmail,
+  type SignInInput,
+  type signUpSchema,
+} from '@/shared/schemas/auth';
 import type { z } from 'zod';
-import { findUserByEmail, insertMembership, insertOrganization, insertUser } from './auth.repository';
+import {
+  deleteSessionsOf,
+  deleteUnusedTokens,
+  findOpenToken,
+  findUserByEmail,
+  insertAuthToken,
+  insertMembership,
+  insertOrganization,
+  insertUser,
+  markTokenUsed,
+  updatePasswordHash,
+} from './auth.repository';
+import { findUser } from '@/server/api/me/me.repository';
 
 type SignUp = z.output<typeof signUpSchema>;
 
 const WRONG_CREDENTIALS = 'E-mail or password is wrong';
+/** How long a password reset link works. */
+export const RESET_MINUTES = 60;
+const RESET_GONE = 'This reset link is not valid any more. Ask for a new one.';
 
-export function createAuthService(db: Db) {
+export function createAuthService(deps: { db: Db; mailer: Mailer; appOrigin: string }) {
+  const { db } = deps;
   /** Hashed once at start so an unknown e-mail costs as much as a wrong password. */
   const decoyHash = hashPassword('decoy password, never matches');
 
@@ -38,6 +63,51 @@ export function createAuthService(db: Db) {
       const user = findUserByEmail(db, input.email);
       const matches = await verifyPassword(input.password, user?.passwordHash ?? (await decoyHash));
       if (!user || !matches) throw new AppError('unauthorized', WRONG_CREDENTIALS);
+      return { userId: user.id };
+    },
+
+    /**
+     * Mails a single-use reset link when the address has an account, and does nothing otherwise: the answer
+     * is the same either way, so it tells nobody who has an account. A newer link voids the older ones.
+     */
+    requestPasswordReset(email: string): void {
+      const user = findUserByEmail(db, email);
+      if (!user) return;
+      const { token, tokenHash } = newLinkToken();
+      const expiresAt = new Date(Date.now() + RESET_MINUTES * 60_000);
+      db.transaction((tx) => {
+        deleteUnusedTokens(tx, user.id, 'password-reset');
+        insertAuthToken(tx, { userId: user.id, purpose: 'password-reset', tokenHash, expiresAt });
+        enqueueMail(
+          tx,
+          passwordResetMail({
+            to: user.email,
+            name: user.name,
+            link: `${deps.appOrigin}/reset-password/${token}`,
+            minutes: RESET_MINUTES,
+          }),
+        );
+      });
+      deps.mailer.wake();
+    },
+
+    /**
+     * Sets a new password with a reset link's token: the token is used up, and every session of the person
+     * ends (the caller then opens one for this browser), all in one transaction.
+     */
+    async resetPassword(token: string, password: string): Promise<{ userId: string }> {
+      const found = findOpenToken(db, hashLinkToken(token), 'password-reset', new Date());
+      const user = found && findUser(db, found.userId);
+      if (!found || !user) throw new AppError('not_found', RESET_GONE);
+      if (passwordMatchesEmail(password, user.email)) {
+        throw new AppError('bad_request', 'Some fields need attention', { password: [PASSWORD_IS_EMAIL] });
+      }
+      const passwordHash = await hashPassword(password);
+      db.transaction((tx) => {
+        if (!markTokenUsed(tx, found.id, new Date())) throw new AppError('not_found', RESET_GONE);
+        updatePasswordHash(tx, user.id, passwordHash);
+        deleteSessionsOf(tx, user.id);
+      });
       return { userId: user.id };
     },
   };

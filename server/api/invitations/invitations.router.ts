@@ -26,7 +26,7 @@ export function invitationsRouter(deps: {
     validate({ params: tokenParams, body: acceptInvitationSchema }),
     async (req, res) => {
       const result = await deps.invitations.accept(req.params.token, req.body, res.locals.user?.id);
-      if (result.newAccount) await startSession(deps.sessions, res, result.userId);
+      if (result.newAccount) await startSession(deps.sessions, req, res, result.userId);
       res.status(result.newAccount ? 201 : 200).json(deps.me.describe(result.userId, result.orgId));
     },
   );

@@ -3,8 +3,9 @@ import { AppError } from '@/server/app-error';
 import { recordAudit } from '@/server/api/audit/audit.repository';
 import { findUserByEmail, insertMembership, insertUser } from '@/server/api/auth/auth.repository';
 import { listMemberships } from '@/server/api/me/me.repository';
-import { hashInvitationToken } from '@/server/services/invitation-token';
+import { hashLinkToken } from '@/server/services/link-token';
 import { hashPassword } from '@/server/services/password';
+import { PASSWORD_IS_EMAIL, passwordMatchesEmail } from '@/shared/schemas/auth';
 import type { AcceptInvitationInput, InvitationPreview } from '@/shared/schemas/orgs';
 import { findOpenInvitation, markAccepted } from './invitations.repository';
 
@@ -20,11 +21,14 @@ export interface AcceptResult {
 /** A new person must send a name and a password; the password is hashed before any write. */
 async function newAccountFields(
   input: AcceptInvitationInput,
+  email: string,
 ): Promise<{ name: string; passwordHash: string }> {
-  if (!input.name || !input.password) {
+  const passwordIsEmail = input.password !== undefined && passwordMatchesEmail(input.password, email);
+  if (!input.name || !input.password || passwordIsEmail) {
     const fields: Record<string, string[]> = {};
     if (!input.name) fields.name = ['Enter your name'];
     if (!input.password) fields.password = ['Choose a password'];
+    if (passwordIsEmail) fields.password = [PASSWORD_IS_EMAIL];
     throw new AppError('bad_request', 'Some fields need attention', fields);
   }
   return { name: input.name, passwordHash: await hashPassword(input.password) };
@@ -32,7 +36,7 @@ async function newAccountFields(
 
 export function createInvitationsService(db: Db) {
   const open = (token: string) => {
-    const invitation = findOpenInvitation(db, hashInvitationToken(token), new Date());
+    const invitation = findOpenInvitation(db, hashLinkToken(token), new Date());
     if (!invitation) throw new AppError('not_found', GONE);
     return invitation;
   };
@@ -72,7 +76,7 @@ export function createInvitationsService(db: Db) {
       }
       const account = existing
         ? ({ kind: 'existing', userId: existing.id } as const)
-        : ({ kind: 'new', fields: await newAccountFields(input) } as const);
+        : ({ kind: 'new', fields: await newAccountFields(input, invitation.email) } as const);
       return db.transaction((tx) => {
         if (!markAccepted(tx, invitation.id, new Date())) throw new AppError('not_found', GONE);
         const userId =

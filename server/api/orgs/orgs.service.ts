@@ -2,7 +2,7 @@ import type { Db } from '@/db/client';
 import { AppError, notFound } from '@/server/app-error';
 import { recordAudit, type Actor } from '@/server/api/audit/audit.repository';
 import { findUser } from '@/server/api/me/me.repository';
-import { INVITATION_DAYS, newInvitationToken } from '@/server/services/invitation-token';
+import { INVITATION_DAYS, newLinkToken } from '@/server/services/link-token';
 import { invitationMail } from '@/server/services/mail/invitation-mail';
 import type { Mailer } from '@/server/services/mail/mailer';
 import { enqueueMail } from '@/server/services/mail/outbox.repository';
@@ -39,7 +39,7 @@ export function createOrgsService(deps: { db: Db; mailer: Mailer; appOrigin: str
           email: ['Already a member of this firm'],
         });
       }
-      const { token, tokenHash } = newInvitationToken();
+      const { token, tokenHash } = newLinkToken();
       const expiresAt = new Date(Date.now() + INVITATION_DAYS * DAY_MS);
       const row = db.transaction((tx) => {
         deletePendingInvitationsFor(tx, actor.orgId, input.email);

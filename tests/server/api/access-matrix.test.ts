@@ -22,6 +22,8 @@ const PUBLIC = new Set([
   'POST /api/auth/sign-up',
   'POST /api/auth/sign-in',
   'POST /api/auth/sign-out',
+  'POST /api/auth/password-reset',
+  'POST /api/auth/password-reset/:resetToken',
   'GET /api/invitations/:token',
   'POST /api/invitations/:token/accept',
 ]);
@@ -29,12 +31,17 @@ const PUBLIC = new Set([
 /** Areas by path: a route is in an area when its path is the area's or lies below it. */
 const AREAS: [area: string, rule: Rule][] = [
   ['/api/me', { kind: 'signed-in' }],
+  ['/api/auth/sessions', { kind: 'signed-in' }],
+  ['/api/auth/sign-out-everywhere', { kind: 'signed-in' }],
   ['/api/calc', { kind: 'signed-in' }],
   ['/api/orgs/current', { kind: 'firm', roles: ['owner'] }],
   ['/api/jobs', { kind: 'firm', roles: CONTRACTING }],
   ['/api/members', { kind: 'firm', roles: CONTRACTING }],
   ['/api/dev/mail', { kind: 'dev-mail-key' }],
 ];
+
+/** Routes that end the caller's sessions: each try gets a session of its own, and a new one after. */
+const SESSION_ENDING = new Set(['POST /api/auth/sign-out-everywhere']);
 
 function ruleFor(route: ApiRoute): Rule | undefined {
   if (PUBLIC.has(`${route.method.toUpperCase()} ${route.path}`)) return { kind: 'public' };
@@ -94,9 +101,11 @@ describe.each(routes.map((route) => [label(route), route] as const))('%s', (_lab
   it.each([...firmA, 'engineer'] as const)('as the %s', async (who) => {
     const person = world.people[who];
     // Public routes may start or end a session: each try gets a session of its own.
-    const cookie = rule.kind === 'public' ? await world.signIn(person) : person.cookie;
+    const endsSessions = SESSION_ENDING.has(label(route));
+    const cookie = rule.kind === 'public' || endsSessions ? await world.signIn(person) : person.cookie;
     const params = await world.makeParams(route, world.people.owner);
     const res = await world.send(route, params, { cookie });
+    if (endsSessions) person.cookie = await world.signIn(person);
     expectSafe(res, who);
     if (rule.kind === 'signed-in') expect(res.status, res.text).toBeLessThan(300);
     if (rule.kind === 'dev-mail-key') expect(res.status).toBe(404);

@@ -30,6 +30,8 @@ const bodyRoutes = API_ROUTES.filter((route) => route.schemas.body);
 
 /** Who may call the route: firm routes and signed-in routes as firm A's owner, public ones signed out. */
 const PUBLIC_BODY_ROUTES = new Set([
+  'POST /api/auth/password-reset',
+  'POST /api/auth/password-reset/:resetToken',
   'POST /api/auth/sign-up',
   'POST /api/auth/sign-in',
   'POST /api/invitations/:token/accept',
