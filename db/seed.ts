@@ -116,7 +116,14 @@ export async function insertDemoData(
         const userId = userIds[personIndex];
         const createdAt = at(firmIndex * 100 + personIndex);
         tx.insert(users)
-          .values({ id: userId, email: person.email, name: person.name, passwordHash, createdAt })
+          .values({
+            id: userId,
+            email: person.email,
+            name: person.name,
+            passwordHash,
+            createdAt,
+            emailVerifiedAt: createdAt,
+          })
           .run();
         tx.insert(memberships).values({ id: newId(), userId, orgId, role: person.role, createdAt }).run();
       });

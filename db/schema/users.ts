@@ -7,6 +7,8 @@ export const users = sqliteTable('users', {
   name: text('name').notNull(),
   passwordHash: text('password_hash').notNull(),
   createdAt: text('created_at').notNull(),
+  /** When the person followed the e-mailed confirmation link (or joined through an e-mailed invitation). */
+  emailVerifiedAt: text('email_verified_at'),
 });
 
 /**
@@ -27,10 +29,10 @@ export const sessions = sqliteTable(
   (t) => [index('sessions_user').on(t.userId)],
 );
 
-export const authTokenPurposes = ['password-reset'] as const;
+export const authTokenPurposes = ['password-reset', 'email-verification'] as const;
 
 /**
- * Single-use tokens e-mailed to a person (a password reset link). Only the SHA-256 of the token is kept; a
+ * Single-use tokens e-mailed to a person (a password reset or e-mail confirmation link). Only the SHA-256 of the token is kept; a
  * token is good once (`used_at`) and until `expires_at` (ISO time).
  */
 export const authTokens = sqliteTable(

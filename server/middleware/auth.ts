@@ -71,6 +71,17 @@ export function requireRole(...roles: Role[]): RequestHandler {
   };
 }
 
+/** Runs after `requireUser` or `requireMember`: the person must have confirmed their e-mail address. */
+export const requireVerifiedEmail: RequestHandler = (_req, res, next) => {
+  if (!res.locals.user?.emailVerified) {
+    throw new AppError(
+      'forbidden',
+      'Confirm your e-mail address first: follow the link we sent, or ask for a new one',
+    );
+  }
+  next();
+};
+
 /**
  * Opens a new session for `userId` and sets its cookie, noting when and from which browser (its User-Agent,
  * shortened) so the person can tell their sessions apart. A session the request already carried is ended

@@ -22,7 +22,8 @@ export function loggedPath(req: Request): string {
   return req.originalUrl
     .split('?')[0]
     .replace(/\/invitations\/[^/]+/, '/invitations/:token')
-    .replace(/\/password-reset\/[^/]+/, '/password-reset/:resetToken');
+    .replace(/\/password-reset\/[^/]+/, '/password-reset/:resetToken')
+    .replace(/\/verify-email\/[^/]+/, '/verify-email/:verifyToken');
 }
 
 /** One JSON line: when, how grave, which request, then the fields of the event. */

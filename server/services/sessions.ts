@@ -18,7 +18,11 @@ export function createSessions(db: Db, options: SessionOptions) {
       name: SESSION_COOKIE,
       attributes: { secure: options.secureCookies, sameSite: 'lax' },
     },
-    getUserAttributes: (attributes) => ({ email: attributes.email, name: attributes.name }),
+    getUserAttributes: (attributes) => ({
+      email: attributes.email,
+      name: attributes.name,
+      emailVerified: attributes.emailVerifiedAt !== null,
+    }),
     getSessionAttributes: (attributes) => ({
       createdAt: attributes.createdAt,
       userAgent: attributes.userAgent,
@@ -31,7 +35,7 @@ export type Sessions = ReturnType<typeof createSessions>;
 declare module 'lucia' {
   interface Register {
     Lucia: Sessions;
-    DatabaseUserAttributes: { email: string; name: string };
+    DatabaseUserAttributes: { email: string; name: string; emailVerifiedAt: string | null };
     DatabaseSessionAttributes: { createdAt: string | null; userAgent: string | null };
   }
 }

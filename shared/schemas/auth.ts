@@ -66,7 +66,8 @@ export type Membership = z.infer<typeof membershipSchema>;
  * it, otherwise the user's earliest membership.
  */
 export const meSchema = z.object({
-  user: z.object({ id: z.string(), email: z.string(), name: z.string() }),
+  /** `emailVerified`: the person followed the e-mailed link; until then they cannot invite anyone. */
+  user: z.object({ id: z.string(), email: z.string(), name: z.string(), emailVerified: z.boolean() }),
   memberships: z.array(membershipSchema),
   activeOrgId: z.string(),
   role: roleSchema,

@@ -10,3 +10,4 @@ export const capturedMailSchema = z.object({
 });
 export type CapturedMail = z.infer<typeof capturedMailSchema>;
 export const capturedMailListSchema = z.object({ messages: z.array(capturedMailSchema) });
+export type CapturedMailList = z.infer<typeof capturedMailListSchema>;

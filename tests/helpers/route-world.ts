@@ -5,7 +5,7 @@ import type { Mailer } from '@/server/services/mail/mailer';
 import type { Role } from '@/shared/schemas/auth';
 import { listApiRoutes, routeParams, type ApiRoute } from './api-routes';
 import { sampleBody } from './sample-bodies';
-import { signUpBody, type TestServer } from './server';
+import { confirmEmail, signUpBody, type TestServer } from './server';
 
 const noMail: Mailer = {
   wake: () => undefined,
@@ -83,7 +83,8 @@ export async function createRouteWorld(server: TestServer) {
 
   /**
    * A fresh value for the route parameter `name`, owned by `owner`'s firm: `token` is an invitation link's
-   * token; `resetToken` a password reset link's (of a throwaway account); `<thing>Id` is the id the route `POST …/<thing>s` answers, made with its sample body (its own
+   * token; `resetToken` and `verifyToken` a password reset or confirmation link's (of a throwaway account);
+   * `<thing>Id` is the id the route `POST …/<thing>s` answers, made with its sample body (its own
    * parameters made the same way). A parameter that fits neither needs a line here.
    */
   async function makeParam(name: string, owner: Person): Promise<string> {
@@ -91,6 +92,14 @@ export async function createRouteWorld(server: TestServer) {
       const email = `world-token-${(tokenCount += 1)}-${owner.firm.toLowerCase()}@example.test`;
       await invite(owner, email, 'estimator');
       return mailedToken(email);
+    }
+    if (name === 'verifyToken') {
+      const body = signUpBody();
+      await request(server.app).post('/api/auth/sign-up').send(body).expect(201);
+      const mail = (await server.capturedMail()).find((m) => m.to === body.email);
+      const token = mail?.text.match(/\/verify-email\/([\w-]+)/)?.[1];
+      if (!token) throw new Error(`no confirmation link mailed to ${body.email}`);
+      return token;
     }
     if (name === 'resetToken') {
       // A throwaway account's link: using it ends that account's sessions, no one else's.
@@ -139,6 +148,7 @@ export async function createRouteWorld(server: TestServer) {
       firmName: `Firm ${firm}`,
     });
     const res = await request(server.app).post('/api/auth/sign-up').send(body).expect(201);
+    await confirmEmail(server.app, body.email);
     if (firm === 'B') firmBOrgId = res.body.activeOrgId;
     const role: Role = firm === 'E' ? 'engineer' : 'owner';
     return { name, role, firm, email: body.email, password: body.password, cookie: sessionCookie(res) };

@@ -6,7 +6,7 @@ import { createApp, type AppOptions } from '@/server/app';
 import { listCapturedMail } from '@/server/api/dev-mail/dev-mail.repository';
 import { startFakeSmtp, type FakeSmtp } from '@/server/services/fake-smtp';
 import { createSmtpMailer, type Mailer, type RetryPolicy } from '@/server/services/mail/mailer';
-import type { CapturedMail } from '@/shared/schemas/mail';
+import type { CapturedMail, CapturedMailList } from '@/shared/schemas/mail';
 import type { SignUpInput } from '@/shared/schemas/auth';
 
 export const TEST_APP_ORIGIN = 'http://tributary.test';
@@ -80,11 +80,39 @@ export function signUpBody(overrides: Partial<SignUpInput> = {}): SignUpInput {
   };
 }
 
-/** Signs up a new person (and firm) and returns a cookie-keeping agent with the answer's `Me`. */
-export async function signedUpAgent(app: Express, overrides: Partial<SignUpInput> = {}) {
+/**
+ * Follows the confirmation link mailed to `email`, read from the dev mail route (the outbox delivers in
+ * the background, so it waits a little for the mail).
+ */
+export async function confirmEmail(app: Express, email: string): Promise<void> {
+  for (let wait = 0; wait < 200; wait += 1) {
+    const res = await request(app).get(DEV_MAIL_PATH).expect(200);
+    const mail = (res.body as CapturedMailList).messages.find(
+      (m) => m.to === email && /verify-email/.test(m.text),
+    );
+    const token = mail?.text.match(/\/verify-email\/([\w-]+)/)?.[1];
+    if (token) {
+      await request(app).post(`/api/auth/verify-email/${token}`).expect(204);
+      return;
+    }
+    await new Promise((resolve) => setTimeout(resolve, 10));
+  }
+  throw new Error(`no confirmation link mailed to ${email}`);
+}
+
+/**
+ * Signs up a new person (and firm), confirms the e-mail address unless `confirmed: false`, and returns a
+ * cookie-keeping agent with the answer's `Me`.
+ */
+export async function signedUpAgent(
+  app: Express,
+  overrides: Partial<SignUpInput> = {},
+  options: { confirmed?: boolean } = {},
+) {
   const agent = request.agent(app);
   const body = signUpBody(overrides);
   const res = await agent.post('/api/auth/sign-up').send(body).expect(201);
+  if (options.confirmed !== false) await confirmEmail(app, body.email);
   return { agent, body, me: res.body as { user: { id: string }; activeOrgId: string; role: string } };
 }
 

@@ -10,7 +10,10 @@ export function findUserByEmail(db: DbOrTx, email: string) {
   return db.select().from(users).where(eq(users.email, email)).get();
 }
 
-export function insertUser(db: DbOrTx, user: { email: string; name: string; passwordHash: string }): string {
+export function insertUser(
+  db: DbOrTx,
+  user: { email: string; name: string; passwordHash: string; emailVerifiedAt?: string },
+): string {
   const id = newId();
   db.insert(users)
     .values({ id, ...user, createdAt: new Date().toISOString() })
@@ -33,6 +36,10 @@ export function insertMembership(
   db.insert(memberships)
     .values({ id: newId(), ...membership, createdAt: new Date().toISOString() })
     .run();
+}
+
+export function markEmailVerified(db: DbOrTx, userId: string, at: Date): void {
+  db.update(users).set({ emailVerifiedAt: at.toISOString() }).where(eq(users.id, userId)).run();
 }
 
 export function updatePasswordHash(db: DbOrTx, userId: string, passwordHash: string): void {

@@ -23,6 +23,7 @@ import { listSessionsOf } from './auth.repository';
 import type { AuthService } from './auth.service';
 
 const resetParams = z.object({ resetToken: z.string().min(1).max(200) });
+const verifyParams = z.object({ verifyToken: z.string().min(1).max(200) });
 
 /** A session's id is its cookie's secret: a list shows a short one-way handle of it instead. */
 const sessionHandle = (sessionId: string) =>
@@ -84,6 +85,18 @@ export function authRouter(deps: {
   router.post('/sign-out-everywhere', requireUser, async (_req, res) => {
     await deps.sessions.invalidateUserSessions(signedInUser(res).id);
     res.append('Set-Cookie', deps.sessions.createBlankSessionCookie().serialize());
+    res.status(204).end();
+  });
+
+  /** Mails a new confirmation link to the signed-in person, unless they are confirmed already. */
+  router.post('/verify-email', requireUser, passwordResetLimit(deps.signUpLimit), (_req, res) => {
+    deps.auth.resendVerification(signedInUser(res).id);
+    res.status(204).end();
+  });
+
+  /** Confirms the address with the link's token (no sign-in needed: the link is the proof). */
+  router.post('/verify-email/:verifyToken', validate({ params: verifyParams }), (req, res) => {
+    deps.auth.verifyEmail(req.params.verifyToken);
     res.status(204).end();
   });
 

@@ -1,10 +1,11 @@
-import type { Db } from '@/db/client';
+import type { Db, DbOrTx } from '@/db/client';
 import { AppError } from '@/server/app-error';
 import { recordAudit } from '@/server/api/audit/audit.repository';
 import { hashLinkToken, newLinkToken } from '@/server/services/link-token';
 import type { Mailer } from '@/server/services/mail/mailer';
 import { enqueueMail } from '@/server/services/mail/outbox.repository';
 import { passwordResetMail } from '@/server/services/mail/password-reset-mail';
+import { verificationMail } from '@/server/services/mail/verification-mail';
 import { hashPassword, verifyPassword } from '@/server/services/password';
 import {
   PASSWORD_IS_EMAIL,
@@ -22,6 +23,7 @@ import {
   insertMembership,
   insertOrganization,
   insertUser,
+  markEmailVerified,
   markTokenUsed,
   updatePasswordHash,
 } from './auth.repository';
@@ -32,10 +34,25 @@ type SignUp = z.output<typeof signUpSchema>;
 const WRONG_CREDENTIALS = 'E-mail or password is wrong';
 /** How long a password reset link works. */
 export const RESET_MINUTES = 60;
+/** How long an e-mail confirmation link works. */
+const VERIFY_DAYS = 7;
+const VERIFY_GONE = 'This confirmation link is not valid any more. Ask for a new one.';
 const RESET_GONE = 'This reset link is not valid any more. Ask for a new one.';
 
 export function createAuthService(deps: { db: Db; mailer: Mailer; appOrigin: string }) {
   const { db } = deps;
+
+  /** Writes a confirmation token and its e-mail; call inside the transaction that needs it. */
+  function queueVerification(tx: DbOrTx, user: { id: string; email: string; name: string }): void {
+    const { token, tokenHash } = newLinkToken();
+    const expiresAt = new Date(Date.now() + VERIFY_DAYS * 24 * 60 * 60_000);
+    deleteUnusedTokens(tx, user.id, 'email-verification');
+    insertAuthToken(tx, { userId: user.id, purpose: 'email-verification', tokenHash, expiresAt });
+    enqueueMail(
+      tx,
+      verificationMail({ to: user.email, name: user.name, link: `${deps.appOrigin}/verify-email/${token}` }),
+    );
+  }
   /** Hashed once at start so an unknown e-mail costs as much as a wrong password. */
   const decoyHash = hashPassword('decoy password, never matches');
 
@@ -48,13 +65,34 @@ export function createAuthService(deps: { db: Db; mailer: Mailer; appOrigin: str
         });
       }
       const passwordHash = await hashPassword(input.password);
-      return db.transaction((tx) => {
+      const created = db.transaction((tx) => {
         const userId = insertUser(tx, { email: input.email, name: input.name, passwordHash });
         const orgId = insertOrganization(tx, { name: input.firmName, kind: input.firmKind });
         const role = input.firmKind === 'engineering' ? 'engineer' : 'owner';
         insertMembership(tx, { userId, orgId, role });
         recordAudit(tx, { userId, orgId }, { action: 'org.create', subject: orgId, detail: { role } });
+        queueVerification(tx, { id: userId, email: input.email, name: input.name });
         return { userId, orgId };
+      });
+      deps.mailer.wake();
+      return created;
+    },
+
+    /** Mails a new confirmation link (voiding older ones) to a signed-in person not confirmed yet. */
+    resendVerification(userId: string): void {
+      const user = findUser(db, userId);
+      if (!user || user.emailVerifiedAt) return;
+      db.transaction((tx) => queueVerification(tx, user));
+      deps.mailer.wake();
+    },
+
+    /** Confirms the address the link was mailed to; the link works once. */
+    verifyEmail(token: string): void {
+      const found = findOpenToken(db, hashLinkToken(token), 'email-verification', new Date());
+      if (!found) throw new AppError('not_found', VERIFY_GONE);
+      db.transaction((tx) => {
+        if (!markTokenUsed(tx, found.id, new Date())) throw new AppError('not_found', VERIFY_GONE);
+        markEmailVerified(tx, found.userId, new Date());
       });
     },
 

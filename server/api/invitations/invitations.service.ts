@@ -1,7 +1,12 @@
 import type { Db } from '@/db/client';
 import { AppError } from '@/server/app-error';
 import { recordAudit } from '@/server/api/audit/audit.repository';
-import { findUserByEmail, insertMembership, insertUser } from '@/server/api/auth/auth.repository';
+import {
+  findUserByEmail,
+  insertMembership,
+  insertUser,
+  markEmailVerified,
+} from '@/server/api/auth/auth.repository';
 import { listMemberships } from '@/server/api/me/me.repository';
 import { hashLinkToken } from '@/server/services/link-token';
 import { hashPassword } from '@/server/services/password';
@@ -82,7 +87,13 @@ export function createInvitationsService(db: Db) {
         const userId =
           account.kind === 'existing'
             ? account.userId
-            : insertUser(tx, { email: invitation.email, ...account.fields });
+            : insertUser(tx, {
+                email: invitation.email,
+                ...account.fields,
+                // The link reached this address: that confirms it.
+                emailVerifiedAt: new Date().toISOString(),
+              });
+        if (account.kind === 'existing') markEmailVerified(tx, userId, new Date());
         insertMembership(tx, { userId, orgId: invitation.orgId, role: invitation.role });
         recordAudit(
           tx,

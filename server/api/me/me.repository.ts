@@ -21,7 +21,7 @@ export function listMemberships(db: DbOrTx, userId: string): Membership[] {
 
 export function findUser(db: DbOrTx, userId: string) {
   return db
-    .select({ id: users.id, email: users.email, name: users.name })
+    .select({ id: users.id, email: users.email, name: users.name, emailVerifiedAt: users.emailVerifiedAt })
     .from(users)
     .where(eq(users.id, userId))
     .get();

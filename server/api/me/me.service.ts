@@ -17,7 +17,13 @@ export function createMeService(db: Db) {
       const list = listMemberships(db, userId);
       const active = pickActiveMembership(list, preferredOrgId);
       if (!active) throw new AppError('forbidden', 'This account does not belong to any firm');
-      return { user, memberships: list, activeOrgId: active.orgId, role: active.role };
+      const { emailVerifiedAt, ...person } = user;
+      return {
+        user: { ...person, emailVerified: emailVerifiedAt !== null },
+        memberships: list,
+        activeOrgId: active.orgId,
+        role: active.role,
+      };
     },
   };
 }

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import type { Db } from '@/db/client';
-import { requireMember, requireRole, signedInUser } from '@/server/middleware/auth';
+import { requireMember, requireRole, requireVerifiedEmail, signedInUser } from '@/server/middleware/auth';
 import { validate } from '@/server/middleware/validate';
 import { createInvitationSchema } from '@/shared/schemas/orgs';
 import type { OrgsService } from './orgs.service';
@@ -17,10 +17,15 @@ export function orgsRouter(deps: { db: Db; orgs: OrgsService }): Router {
     res.json(deps.orgs.members(res.locals.member.orgId));
   });
 
-  router.post('/current/invitations', validate({ body: createInvitationSchema }), (req, res) => {
-    const actor = { userId: signedInUser(res).id, orgId: res.locals.member.orgId };
-    res.status(201).json(deps.orgs.invite(actor, req.body));
-  });
+  router.post(
+    '/current/invitations',
+    requireVerifiedEmail,
+    validate({ body: createInvitationSchema }),
+    (req, res) => {
+      const actor = { userId: signedInUser(res).id, orgId: res.locals.member.orgId };
+      res.status(201).json(deps.orgs.invite(actor, req.body));
+    },
+  );
 
   router.delete('/current/invitations/:invitationId', validate({ params: invitationParams }), (req, res) => {
     const actor = { userId: signedInUser(res).id, orgId: res.locals.member.orgId };

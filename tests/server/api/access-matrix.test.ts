@@ -24,6 +24,7 @@ const PUBLIC = new Set([
   'POST /api/auth/sign-out',
   'POST /api/auth/password-reset',
   'POST /api/auth/password-reset/:resetToken',
+  'POST /api/auth/verify-email/:verifyToken',
   'GET /api/invitations/:token',
   'POST /api/invitations/:token/accept',
 ]);
@@ -33,6 +34,7 @@ const AREAS: [area: string, rule: Rule][] = [
   ['/api/me', { kind: 'signed-in' }],
   ['/api/auth/sessions', { kind: 'signed-in' }],
   ['/api/auth/sign-out-everywhere', { kind: 'signed-in' }],
+  ['/api/auth/verify-email', { kind: 'signed-in' }],
   ['/api/calc', { kind: 'signed-in' }],
   ['/api/orgs/current', { kind: 'firm', roles: ['owner'] }],
   ['/api/jobs', { kind: 'firm', roles: CONTRACTING }],

@@ -3,6 +3,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import {
   DEV_MAIL_PATH,
   TEST_DEV_MAIL_KEY,
+  confirmEmail,
   createTestServer,
   signUpBody,
   type TestServer,
@@ -54,12 +55,13 @@ describe('request log', () => {
     const owner = signUpBody({ password: 'owner secret passphrase' });
     const signedUp = await request(server.app).post('/api/auth/sign-up').send(owner).expect(201);
     const cookie = String(signedUp.headers['set-cookie']).split(';')[0];
+    await confirmEmail(server.app, owner.email);
     await request(server.app)
       .post('/api/orgs/current/invitations')
       .set('Cookie', cookie)
       .send({ email: 'logged.invitee@example.test', role: 'estimator' })
       .expect(201);
-    const mail = (await server.capturedMail())[0];
+    const mail = (await server.capturedMail()).find((m) => m.subject.includes('invited you'))!;
     const link = mail.text.match(/http\S+\/invite\/[\w-]+/)?.[0] ?? '';
     const token = link.split('/').at(-1) ?? '';
     await request(server.app).get(`/api/invitations/${token}`).expect(200);
