@@ -1,3 +1,4 @@
+import { mkdirSync } from 'node:fs';
 import { describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { openBrowser, snap, viewports, type ViewportName } from './browser';
@@ -26,6 +27,37 @@ async function addSource(page: Page, kind: string, fields: Record<string, string
   for (const [field, value] of Object.entries(fields)) {
     await page.getByTestId(`source-${before}-${field}`).fill(value);
   }
+}
+
+/** Saves a screenshot of each diagram, scrolled to the middle of the screen, under screenshots/editor-gaps/. */
+async function snapDiagrams(page: Page, name: string): Promise<void> {
+  mkdirSync('screenshots/editor-gaps', { recursive: true });
+  for (const part of ['loads', 'shear', 'moment', 'deflection']) {
+    const diagram = page.getByTestId(`member-diagrams-${part}`);
+    await diagram.evaluate((el) => el.scrollIntoView({ block: 'center' }));
+    await diagram.screenshot({ path: `screenshots/editor-gaps/${name}-${part}.png` });
+  }
+}
+
+/**
+ * The drawn extent of a curve diagram: its curve's box (px, in the drawing), the drawing's width and the
+ * number of dashed support guides.
+ */
+async function curveExtent(page: Page, testID: string) {
+  return page.getByTestId(testID).evaluate((el) => {
+    const svg = el.querySelector('svg');
+    const paths = [...el.querySelectorAll('path')] as SVGPathElement[];
+    const line = paths.find(
+      (p) => p.getAttribute('fill') === 'none' || p.getAttribute('fill') === 'transparent',
+    );
+    const box = (line ?? paths[paths.length - 1]).getBBox();
+    return {
+      left: box.x,
+      right: box.x + box.width,
+      width: svg?.getBoundingClientRect().width ?? 0,
+      guides: el.querySelectorAll('line[stroke-dasharray]').length,
+    };
+  });
 }
 
 for (const name of Object.keys(viewports) as ViewportName[]) {
@@ -69,6 +101,43 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         expect(await page.getByTestId('source-3-at').inputValue()).toBe(`5' 0"`);
         await page.getByTestId('member-diagrams').waitFor();
         await snap(page, `${name}-member-reloaded`);
+      } finally {
+        await close();
+      }
+    });
+
+    it('draws a two-span member and a member with overhangs over their whole length', async () => {
+      const { page, close } = await openBrowser(name);
+      try {
+        await signInAsContractor(page);
+        await openJob(page, 'Ranch');
+        await page.getByTestId('add-beam').click();
+        await page.getByTestId('clear-span').fill('12');
+        await page.getByTestId('continuous').click();
+        await page.getByTestId('second-span').fill('9');
+        await addSource(page, 'floor', { tributary: '10' });
+        await addSource(page, 'point', { at: '17', 'dead-lb': '700', 'live-lb': '900' });
+        const loads = page.getByTestId('member-diagrams-loads');
+        await expect.poll(() => loads.getAttribute('aria-label')).toContain('Two spans continuous');
+        const twoSpan = await curveExtent(page, 'member-diagrams-moment');
+        expect(twoSpan.guides).toBe(3); // a guide at each support, the centre post too
+        expect(twoSpan.left).toBeGreaterThanOrEqual(0);
+        expect(twoSpan.right).toBeLessThanOrEqual(twoSpan.width + 0.5);
+        expect(twoSpan.right - twoSpan.left).toBeGreaterThan(0.85 * twoSpan.width); // both spans, not the first
+        await snapDiagrams(page, `${name}-two-span`);
+
+        await page.getByTestId('continuous').click();
+        await page.getByTestId('overhang-left').fill('2');
+        await page.getByTestId('overhang-right').fill('3');
+        await page.getByTestId('source-1-at').fill('15-6');
+        await expect
+          .poll(() => loads.getAttribute('aria-label'))
+          .toContain('overhangs 3\' 0" past the right support');
+        const overhang = await curveExtent(page, 'member-diagrams-moment');
+        expect(overhang.guides).toBe(2);
+        expect(overhang.right).toBeLessThanOrEqual(overhang.width + 0.5);
+        expect(overhang.right - overhang.left).toBeGreaterThan(0.9 * overhang.width); // tip to tip
+        await snapDiagrams(page, `${name}-overhang`);
       } finally {
         await close();
       }

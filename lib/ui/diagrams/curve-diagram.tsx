@@ -22,26 +22,21 @@ export function CurveDiagram({ result, width, kind, testID }: CurveDiagramProps 
   const text = useMemo(() => curveText(result, kind), [result, kind]);
   if (!layout) return null;
   const look = curveLook[kind];
-  const [left, right] = layout.supportXs;
+  const [left, right] = layout.endXs;
   return (
     <View role="img" aria-label={text} accessibilityLabel={text} testID={testID}>
       <Svg width={layout.width} height={layout.height} aria-hidden>
-        <Line
-          x1={left}
-          x2={left}
-          y1={0}
-          y2={layout.height}
-          stroke={diagramLook.guide}
-          strokeDasharray="3 3"
-        />
-        <Line
-          x1={right}
-          x2={right}
-          y1={0}
-          y2={layout.height}
-          stroke={diagramLook.guide}
-          strokeDasharray="3 3"
-        />
+        {layout.supportXs.map((x) => (
+          <Line
+            key={x}
+            x1={x}
+            x2={x}
+            y1={0}
+            y2={layout.height}
+            stroke={diagramLook.guide}
+            strokeDasharray="3 3"
+          />
+        ))}
         <Path d={layout.areaPath} fill={look.fill} />
         <Line
           x1={left}

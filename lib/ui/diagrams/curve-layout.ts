@@ -17,8 +17,10 @@ export interface CurveLayout {
   height: number;
   /** y of the zero line. */
   baselineY: number;
-  /** x of the bearing centres, where the curve starts and ends. */
-  supportXs: [number, number];
+  /** x of every bearing centre, left to right. */
+  supportXs: number[];
+  /** x of the member's ends as analysed (support centres, or overhang tips): the zero line's ends. */
+  endXs: [number, number];
   /** The curve as an SVG path, and the closed area between it and the zero line. */
   linePath: string;
   areaPath: string;
@@ -38,8 +40,9 @@ const n1 = (v: number) => Math.round(v * 10) / 10;
 
 /**
  * Lays out the shear, moment or deflection curve of a member check for a given width: x by the span scale
- * shared with the load diagram (samples are in the design frame), y from zero to the curve's extremes over
- * PLOT_HEIGHT px, and value labels at the maxima and the supports placed without overlap.
+ * shared with the load diagram (samples are in the analysis frame, over every span and overhang), y from
+ * zero to the curve's extremes over PLOT_HEIGHT px, and value labels at the maxima and at every support
+ * placed without overlap.
  *
  * @param result a member check run with `{ diagrams: true }`
  * @param kind which curve
@@ -50,7 +53,7 @@ const n1 = (v: number) => Math.round(v * 10) / 10;
 export function layoutCurve(result: MemberCheckResult, kind: CurveKind, widthPx: number): CurveLayout | null {
   const samples = result.diagram?.samples ?? [];
   if (samples.length < 2) return null;
-  const scale = spanScale(result.spans, widthPx);
+  const scale = spanScale(result, widthPx);
   const values = samples.map((s) => curveValue(s, kind));
   const lo = Math.min(0, ...values);
   const hi = Math.max(0, ...values);
@@ -65,7 +68,7 @@ export function layoutCurve(result: MemberCheckResult, kind: CurveKind, widthPx:
   const last = n1(scale.px(samples[samples.length - 1].xFt));
   const areaPath = `M${first} ${n1(baselineY)}L${points.join('L')}L${last} ${n1(baselineY)}Z`;
 
-  const picks = pickCurveValues(samples, kind);
+  const picks = pickCurveValues(samples, kind, scale.frame.supports);
   const biggest = values.reduce((a, b) => (Math.abs(b) > Math.abs(a) ? b : a), 0);
   const bulkAbove = y(biggest) < baselineY;
   const requests: LabelRequest[] = picks.map((p) => {
@@ -88,7 +91,8 @@ export function layoutCurve(result: MemberCheckResult, kind: CurveKind, widthPx:
     width: widthPx,
     height,
     baselineY,
-    supportXs: [scale.leftCentrePx, scale.rightCentrePx],
+    supportXs: scale.supports.map((s) => s.centrePx),
+    endXs: [scale.px(0), scale.px(scale.frame.analysedLengthFt)],
     linePath,
     areaPath,
     labels: placed,

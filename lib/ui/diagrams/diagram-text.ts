@@ -1,8 +1,8 @@
 import { formatFtIn, formatIn, formatLb, formatNumber } from '@/lib/format';
-import type { MemberCheckResult } from '@/shared/schemas/calc/member';
+import type { MemberCheckResult, SupportName } from '@/shared/schemas/calc/member';
 import { pickCurveValues, type CurvePick } from './curve-picks';
 import { addsUp, groupLoads, type DrawnLoad, type LoadType } from './load-groups';
-import { designToClearFt } from './span-frame';
+import { memberFrame, toEnteredFt, type MemberFrame } from './span-frame';
 import { CURVE_UNITS, formatCurveValue, formatPositionFt, type CurveKind } from './value-text';
 
 /** Positions this close past a support face (ft) are rounding, not inside the bearing. */
@@ -18,18 +18,26 @@ export const DIAGRAM_TITLES = {
   deflection: 'Deflection',
 } as const;
 
-/** A design-frame position as ft-in from the face of the left support ("within the left bearing" before it). */
-function positionText(xFt: number, result: MemberCheckResult): string {
-  const clearFt = designToClearFt(xFt, result.spans);
-  if (clearFt < -EDGE_FT) return 'within the left bearing';
-  if (clearFt > result.spans.clearSpanFt + EDGE_FT) return 'within the right bearing';
-  return formatPositionFt(Math.min(Math.max(clearFt, 0), result.spans.clearSpanFt));
+const SUPPORT_WORDS: Record<SupportName, string> = { left: 'left', centre: 'centre', right: 'right' };
+
+/**
+ * An analysis-frame position as the user enters it: ft-in from the face of the left support (or from the
+ * tip of a left overhang); "over the … support" inside a bearing.
+ */
+function positionText(xFt: number, frame: MemberFrame): string {
+  for (const s of frame.supports) {
+    const halfFt = s.bearingIn / 2 / 12;
+    if (Math.abs(xFt - s.atFt) < halfFt - EDGE_FT) return `over the ${SUPPORT_WORDS[s.name]} support`;
+  }
+  const enteredFt = toEnteredFt(xFt, frame);
+  return formatPositionFt(Math.abs(enteredFt) < EDGE_FT ? 0 : enteredFt);
 }
 
-/** Where a design-frame position is, in words, measured from the face of the left support. */
-function whereText(xFt: number, result: MemberCheckResult): string {
-  const text = positionText(xFt, result);
-  return text.startsWith('within') ? text : `${text} from the left support face`;
+/** Where a position is, in words, measured from where the user measures: the left support face or tip. */
+function whereText(xFt: number, frame: MemberFrame): string {
+  const text = positionText(xFt, frame);
+  if (text.startsWith('over')) return text;
+  return `${text} from ${frame.fromLeftTip ? 'the tip of the left overhang' : 'the left support face'}`;
 }
 
 function partsText(load: DrawnLoad): string {
@@ -40,11 +48,11 @@ function partsText(load: DrawnLoad): string {
   return addsUp(load) ? `${parts.join(' + ')} = ${formatNumber(total)} ${unit}` : parts.join(', ');
 }
 
-function loadSentence(load: DrawnLoad, result: MemberCheckResult): string {
-  if (load.kind === 'point') return `${load.label}: ${partsText(load)} at ${whereText(load.atFt, result)}.`;
+function loadSentence(load: DrawnLoad, frame: MemberFrame, whole: string): string {
+  if (load.kind === 'point') return `${load.label}: ${partsText(load)} at ${whereText(load.atFt, frame)}.`;
   const extent = load.full
-    ? 'over the full span'
-    : `from ${positionText(load.startFt, result)} to ${whereText(load.endFt, result)}`;
+    ? whole
+    : `from ${positionText(load.startFt, frame)} to ${whereText(load.endFt, frame)}`;
   return `${load.label}: ${partsText(load)} ${extent}.`;
 }
 
@@ -57,24 +65,63 @@ function loadSentence(load: DrawnLoad, result: MemberCheckResult): string {
  * @example loadDiagramText(result) // "Loads on the member, service loads by source. Clear span 14' 0" …"
  */
 export function loadDiagramText(result: MemberCheckResult): string {
-  const { spans, reactions } = result;
-  const bearings =
-    spans.bearingLeftIn === spans.bearingRightIn
-      ? `${formatIn(spans.bearingLeftIn)} bearing at each end`
-      : `${formatIn(spans.bearingLeftIn)} bearing at the left end and ${formatIn(spans.bearingRightIn)} at the right`;
-  const loads = groupLoads(result.takedown, spans.designSpanFt).map((l) => loadSentence(l, result));
+  const { spans } = result;
+  const frame = memberFrame(result);
+  const whole =
+    frame.supports.length > 2 || frame.fromLeftTip || spans.overhangRightFt
+      ? 'over the whole member'
+      : 'over the full span';
+  const loads = groupLoads(result.takedown, frame.analysedLengthFt).map((l) => loadSentence(l, frame, whole));
   return [
     `${DIAGRAM_TITLES.loads}, service loads by source.`,
-    `Clear span ${formatFtIn(spans.clearSpanFt * 12)} between support faces; design span ${formatFtIn(spans.designSpanFt * 12)} between bearing centres; ${bearings}.`,
+    spansSentence(spans),
     ...(loads.length > 0 ? loads : ['No loads.']),
-    `Largest reactions (${reactions.combination}): ${formatLb(reactions.leftLb)} at the left, ${formatLb(reactions.rightLb)} at the right.`,
+    reactionsSentence(result),
   ].join(' ');
+}
+
+const ftIn = (ft: number) => formatFtIn(ft * 12);
+
+/** Spans, overhangs and bearings in words. */
+function spansSentence(spans: MemberCheckResult['spans']): string {
+  const parts: string[] = [];
+  if (spans.secondClearSpanFt !== undefined && spans.secondDesignSpanFt !== undefined) {
+    parts.push(
+      `Two spans continuous over a centre support: clear spans ${ftIn(spans.clearSpanFt)} and ${ftIn(spans.secondClearSpanFt)} between support faces; design spans ${ftIn(spans.designSpanFt)} and ${ftIn(spans.secondDesignSpanFt)} between bearing centres`,
+    );
+    parts.push(
+      `bearing ${formatIn(spans.bearingLeftIn)} at the left end, ${formatIn(spans.centreBearingIn ?? 0)} at the centre and ${formatIn(spans.bearingRightIn)} at the right`,
+    );
+  } else {
+    parts.push(
+      `Clear span ${ftIn(spans.clearSpanFt)} between support faces; design span ${ftIn(spans.designSpanFt)} between bearing centres`,
+    );
+    parts.push(
+      spans.bearingLeftIn === spans.bearingRightIn
+        ? `${formatIn(spans.bearingLeftIn)} bearing at each end`
+        : `${formatIn(spans.bearingLeftIn)} bearing at the left end and ${formatIn(spans.bearingRightIn)} at the right`,
+    );
+  }
+  if (spans.overhangLeftFt) parts.push(`overhangs ${ftIn(spans.overhangLeftFt)} past the left support`);
+  if (spans.overhangRightFt) parts.push(`overhangs ${ftIn(spans.overhangRightFt)} past the right support`);
+  return `${parts.join('; ')}.`;
+}
+
+/** The largest reaction at each support in words. */
+function reactionsSentence(result: MemberCheckResult): string {
+  const { reactions } = result;
+  const centre = reactions.bySupport?.find((s) => s.support === 'centre');
+  const middle = centre
+    ? `, ${formatLb(centre.largestLb)} at the centre support (${centre.largestCombination})`
+    : '';
+  return `Largest reactions (${reactions.combination}): ${formatLb(reactions.leftLb)} at the left${middle}, ${formatLb(reactions.rightLb)} at the right.`;
 }
 
 const ROLE_WORDS: Record<CurvePick['role'], string> = {
   max: 'largest',
   min: 'most negative',
   'left-support': 'at the left support',
+  'centre-support': 'at the centre support',
   'right-support': 'at the right support',
 };
 
@@ -84,18 +131,18 @@ const CURVE_NOTES: Record<CurveKind, string> = {
   deflection: 'drawn downward as the member moves; short-term, the check table adds creep to the total',
 };
 
-function pickText(kind: CurveKind, pick: CurvePick, result: MemberCheckResult): string {
+function pickText(kind: CurveKind, pick: CurvePick, frame: MemberFrame): string {
   const value = formatCurveValue(kind, pick.value);
-  if (pick.role === 'left-support' || pick.role === 'right-support') {
+  if (pick.role !== 'max' && pick.role !== 'min') {
     return `${value} ${ROLE_WORDS[pick.role]}${pick.priority === 0 && pick.extreme ? ' (the largest in size)' : ''}`;
   }
   const direction = kind === 'deflection' ? (pick.value > 0 ? ' downward' : ' upward') : '';
-  return `${ROLE_WORDS[pick.role]} ${value}${direction} at ${whereText(pick.xFt, result)}`;
+  return `${ROLE_WORDS[pick.role]} ${value}${direction} at ${whereText(pick.xFt, frame)}`;
 }
 
 /**
  * One curve in words: its combination, its largest (and most negative) value with where it occurs, and its
- * values at both supports, the same values the drawing labels.
+ * values at every support, the same values the drawing labels.
  *
  * @param result a member check run with `{ diagrams: true }`
  * @param kind which curve
@@ -104,10 +151,11 @@ function pickText(kind: CurveKind, pick: CurvePick, result: MemberCheckResult): 
 export function curveText(result: MemberCheckResult, kind: CurveKind): string {
   const diagram = result.diagram;
   if (!diagram || diagram.samples.length < 2) return `${DIAGRAM_TITLES[kind]}: not computed for this result.`;
-  const picks = pickCurveValues(diagram.samples, kind);
+  const frame = memberFrame(result);
+  const picks = pickCurveValues(diagram.samples, kind, frame.supports);
   const extremes = picks.filter((p) => p.role === 'max' || p.role === 'min');
   const supports = picks.filter((p) => p.role !== 'max' && p.role !== 'min');
-  const parts = [...extremes, ...supports].map((p) => pickText(kind, p, result));
+  const parts = [...extremes, ...supports].map((p) => pickText(kind, p, frame));
   const head = `${DIAGRAM_TITLES[kind]} under ${diagram.combination}, ${CURVE_UNITS[kind]} (${CURVE_NOTES[kind]})`;
   return `${head}: ${parts.join('; ')}.`;
 }

@@ -12,8 +12,8 @@ export interface LoadPart {
 
 /**
  * One source's load as drawn: the takedown's lines of that source, one part per load type, unfactored;
- * the total is their plain sum (shown only where the parts add up, see addsUp). Positions are in the design
- * frame (ft from the centre of the left bearing), as in the takedown.
+ * the total is their plain sum (shown only where the parts add up, see addsUp). Positions are in the analysis
+ * frame (ft from the member's left end as analysed), as in the takedown.
  */
 export type DrawnLoad =
   | {
@@ -40,12 +40,12 @@ function placeKey(line: TakedownLine): string {
  * different load types are one source (the engine writes a source's D, L, Lr and S lines one after the
  * other), so "Floor" D 144 plf and L 480 plf become one "Floor · D+L 624 plf". Unfactored (service) loads.
  *
- * @param takedown the result's takedown (plf, lb; positions ft, design frame)
- * @param designSpanFt the design span, ft: a uniform line without extent covers 0 to it
+ * @param takedown the result's takedown (plf, lb; positions ft, analysis frame)
+ * @param lengthFt the analysed length, ft: a uniform line without extent covers 0 to it
  * @returns loads in takedown order
- * @example groupLoads(result.takedown, result.spans.designSpanFt)[0] // { kind: 'uniform', label: 'Floor', totalPlf: 624, … }
+ * @example groupLoads(result.takedown, memberFrame(result).analysedLengthFt)[0] // { kind: 'uniform', label: 'Floor', totalPlf: 624, … }
  */
-export function groupLoads(takedown: readonly TakedownLine[], designSpanFt: number): DrawnLoad[] {
+export function groupLoads(takedown: readonly TakedownLine[], lengthFt: number): DrawnLoad[] {
   const loads: DrawnLoad[] = [];
   let lastKey = '';
   for (const line of takedown) {
@@ -73,7 +73,7 @@ export function groupLoads(takedown: readonly TakedownLine[], designSpanFt: numb
         parts: [{ type: line.type, value }],
         totalPlf: value,
         startFt: line.startFt ?? 0,
-        endFt: line.endFt ?? designSpanFt,
+        endFt: line.endFt ?? lengthFt,
         full,
       });
     }

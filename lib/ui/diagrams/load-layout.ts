@@ -35,8 +35,8 @@ export interface LoadLayout {
   height: number;
   loads: DrawnLoad[];
   beam: Box;
-  /** Left and right bearings, to scale along x. */
-  bearings: [Box, Box];
+  /** Every bearing, left to right, to scale along x. */
+  bearings: Box[];
   bands: LoadBand[];
   arrows: LoadArrow[];
   /** Load labels, reaction and bearing chips. */
@@ -71,11 +71,11 @@ function ticksBetween(left: number, right: number): number[] {
 }
 
 /**
- * Lays out the loaded member for a given width: to scale along x (takedown positions are in the design
- * frame, see span-frame), uniform loads as bands stacked in rows so that partial loads share a row where
+ * Lays out the loaded member for a given width: to scale along x over the whole piece, every span and
+ * overhang (takedown positions are in the analysis frame, see span-frame), uniform loads as bands stacked in rows so that partial loads share a row where
  * they and their labels fit, band height growing with the load; point loads as arrows with their labels
- * above the bands; the beam, both bearings to scale, the largest reactions, and dimension lines for the
- * clear span (support faces) and the design span (bearing centres). Loads are the service (unfactored)
+ * above the bands; the beam, every bearing to scale, the largest reactions, and dimension lines for each
+ * clear span (support faces), overhang and design span (bearing centres). Loads are the service (unfactored)
  * loads of the takedown, one per source: "Floor · D+L 624 plf".
  *
  * @param result a member check result (the takedown, spans and reactions; samples are not needed)
@@ -83,8 +83,8 @@ function ticksBetween(left: number, right: number): number[] {
  * @example layoutLoads(checkMember(input), 390).labels.map((l) => l.text)
  */
 export function layoutLoads(result: MemberCheckResult, widthPx: number): LoadLayout {
-  const scale = spanScale(result.spans, widthPx);
-  const loads = groupLoads(result.takedown, result.spans.designSpanFt);
+  const scale = spanScale(result, widthPx);
+  const loads = groupLoads(result.takedown, scale.frame.analysedLengthFt);
   const uniformIdx = loads.flatMap((l, i) => (l.kind === 'uniform' ? [i] : []));
   const pointIdx = loads.flatMap((l, i) => (l.kind === 'point' ? [i] : []));
   const texts = loads.map((l) => loadTexts(l, widthPx));

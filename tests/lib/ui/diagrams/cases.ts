@@ -77,3 +77,35 @@ export function seeded(seed: number): () => number {
     return s / 2147483647;
   };
 }
+
+/** A floor beam continuous over a centre post into a second, shorter span, a post above in the second (test input). */
+export const twoSpanBody: MemberCheckInputBody = {
+  kind: 'beam',
+  edition: 'ASCE 7-16',
+  clearSpanFt: 12,
+  secondClearSpanFt: 9,
+  bearingLeftIn: 3,
+  bearingRightIn: 4.5,
+  centreBearingIn: 3.5,
+  sources: [
+    { kind: 'floor', tributaryFt: 10, deadPsf: 12, livePsf: 40 },
+    { kind: 'point', pointKind: 'post-above', atFt: 17, deadLb: 700, liveLb: 900 },
+  ],
+  materialId: 'lvl-2.0e',
+  sizeId: '3-ply-1.75x11.875',
+};
+
+/** A roof beam overhanging both supports, a point load at the right tip (test input). */
+export const overhangBody: MemberCheckInputBody = {
+  kind: 'beam',
+  edition: 'ASCE 7-16',
+  clearSpanFt: 10,
+  overhangLeftFt: 2,
+  overhangRightFt: 3,
+  sources: [
+    { kind: 'roof', tributaryFt: 6, deadPsf: 15, roofLivePsf: 20 },
+    { kind: 'point', pointKind: 'post-above', atFt: 15.5, deadLb: 400, liveLb: 0, roofLiveLb: 300 },
+  ],
+  materialId: 'lvl-2.0e',
+  sizeId: '2-ply-1.75x11.875',
+};

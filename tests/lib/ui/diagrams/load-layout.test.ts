@@ -59,7 +59,7 @@ describe.each(WIDTHS)('load diagram at %i px', (width) => {
   it('fixture: loads to scale along the span, positions as entered from the support face', () => {
     const result = check(fixtureBody);
     const layout = layoutLoads(result, width);
-    const scale = spanScale(result.spans, width);
+    const scale = spanScale(result, width);
     const face = scale.leftFacePx;
     const post = layout.arrows[0];
     expectApprox(post.x, face + 9 * scale.pxPerFt, { abs: 1e-9 }); // the input's post at 9 ft
@@ -76,7 +76,7 @@ describe.each(WIDTHS)('load diagram at %i px', (width) => {
   it('bearings are drawn to scale under the ends of the piece', () => {
     const result = check(busyBody); // 3 in left, 6 in right
     const layout = layoutLoads(result, width);
-    const scale = spanScale(result.spans, width);
+    const scale = spanScale(result, width);
     const [left, right] = layout.bearings;
     expectApprox(left.width, Math.max(4, (3 / 12) * scale.pxPerFt), { abs: 1e-9 });
     expectApprox(right.width, Math.max(4, (6 / 12) * scale.pxPerFt), { abs: 1e-9 });

@@ -1,5 +1,11 @@
 import { describe, it } from 'vitest';
-import { DIAGRAM_PAD_PX, designToClearFt, linearScale, spanScale } from '@/lib/ui/diagrams/span-frame';
+import {
+  DIAGRAM_PAD_PX,
+  linearScale,
+  memberFrame,
+  spanScale,
+  toEnteredFt,
+} from '@/lib/ui/diagrams/span-frame';
 import { expectApprox } from '@/tests/helpers/approx';
 import { check, fixtureBody, WIDTHS } from './cases';
 
@@ -7,14 +13,14 @@ const result = check(fixtureBody);
 
 describe('span scale', () => {
   it.each(WIDTHS)('puts the whole piece (length to buy) between the paddings at %i px', (width) => {
-    const scale = spanScale(result.spans, width);
+    const scale = spanScale(result, width);
     expectApprox(scale.memberLeftPx, DIAGRAM_PAD_PX, { abs: 1e-9 });
     expectApprox(scale.memberRightPx, width - DIAGRAM_PAD_PX, { abs: 1e-9 });
     expectApprox(scale.pxPerFt * result.spans.lengthToBuyFt, width - 2 * DIAGRAM_PAD_PX, { abs: 1e-9 });
   });
 
   it('places bearing centres at the ends of the design span and faces at the ends of the clear span', () => {
-    const scale = spanScale(result.spans, 390);
+    const scale = spanScale(result, 390);
     // 4-1/2 in bearings (the fixture): the design frame starts 2-1/4 in from the end of the piece
     expectApprox(scale.px(0), scale.memberLeftPx + (2.25 / 12) * scale.pxPerFt, { abs: 1e-9 });
     expectApprox(scale.leftCentrePx, scale.px(0), { abs: 1e-9 });
@@ -25,12 +31,13 @@ describe('span scale', () => {
     expectApprox(scale.leftFacePx, scale.px(2.25 / 12), { abs: 1e-9 });
   });
 
-  it("reads the engine's takedown positions in the design frame: the input's 9 ft post is 9 ft from the face", () => {
+  it("reads the engine's takedown positions in the analysis frame: the input's 9 ft post is 9 ft from the face", () => {
+    const frame = memberFrame(result);
     const post = result.takedown.find((l) => l.label === 'Post above');
-    expectApprox(designToClearFt(post?.atFt ?? NaN, result.spans), 9, { abs: 1e-12 });
+    expectApprox(toEnteredFt(post?.atFt ?? NaN, frame), 9, { abs: 1e-12 });
     const wall = result.takedown.find((l) => l.label === 'Wall above');
-    expectApprox(designToClearFt(wall?.startFt ?? NaN, result.spans), 0, { abs: 1e-12 });
-    expectApprox(designToClearFt(wall?.endFt ?? NaN, result.spans), 6, { abs: 1e-12 });
+    expectApprox(toEnteredFt(wall?.startFt ?? NaN, frame), 0, { abs: 1e-12 });
+    expectApprox(toEnteredFt(wall?.endFt ?? NaN, frame), 6, { abs: 1e-12 });
   });
 
   it('samples run over the design span, support centre to support centre', () => {
