@@ -18,7 +18,6 @@ import { asdCombinations, buildMemberLoads, type TakedownLine } from '@/lib/calc
 import { liveLoadPatterns, patternedName, patternFactor } from '@/lib/calc/loads/live-patterns';
 import { roofSnowLoad, type RoofSnow } from '@/lib/calc/snow';
 import { LOAD_TYPES, type BeamLoad, type LoadCombination, type LoadType } from '@/lib/calc/types';
-import type { LoadSource } from '@/shared/schemas/calc/loads';
 import type { MemberLoadingInput } from '@/shared/schemas/calc/member';
 import { creepFactor } from './creep';
 import { endShearsAtD, supportSideShears } from './end-shears';
@@ -146,16 +145,6 @@ export interface EndShears {
   byGroup: number[][];
   unitSelfWeight: number[];
   sideSupport: number[];
-}
-
-function shift(source: LoadSource, offsetFt: number): LoadSource {
-  if (source.kind === 'point') return { ...source, atFt: source.atFt + offsetFt };
-  if (source.startFt === undefined && source.endFt === undefined) return source;
-  return {
-    ...source,
-    startFt: source.startFt === undefined ? undefined : source.startFt + offsetFt,
-    endFt: source.endFt === undefined ? undefined : source.endFt + offsetFt,
-  };
 }
 
 /** The member's spans for the result, from its geometry and input. */
@@ -376,13 +365,13 @@ export function prepareMember(input: MemberLoadingInput): PreparedMember {
     warnings.push(...snow.warnings);
     sources.push(`${snow.reference} (roof snow)`);
   }
-  const offsetFt = geometry.positionOffsetFt;
   const built = buildMemberLoads({
     spanFt: L,
     roofPitchIn12,
     roofSnowPsf,
     selfWeightPlf: 0,
-    sources: input.sources.map((s) => shift(s, offsetFt)),
+    sources: input.sources,
+    positionOffsetFt: geometry.positionOffsetFt,
   });
   warnings.push(...built.warnings);
 

@@ -66,44 +66,58 @@ class Takedown {
     this.totalsPlf[type] += wPlf;
   }
 
-  point(label: string, type: LoadType, pLb: number, atFt: number, flag: InputFlag): void {
+  /** A point load at `atFt` on the member, written as at `enteredFt` (where the user measured it). */
+  point(label: string, type: LoadType, pLb: number, atFt: number, enteredFt: number, flag: InputFlag): void {
     if (pLb <= 0) return;
     this.loads.push({ kind: 'point', pLb, atFt, type, label });
-    this.lines.push({ label, type, expression: `${n(pLb, 0)} lb at ${n(atFt, 2)} ft`, pLb, atFt, flag });
+    this.lines.push({ label, type, expression: `${n(pLb, 0)} lb at ${n(enteredFt, 2)} ft`, pLb, atFt, flag });
   }
 }
 
-function extentOf(source: { startFt?: number; endFt?: number }, spanFt: number, field: string): Extent {
-  const startFt = source.startFt ?? 0;
-  const endFt = source.endFt ?? spanFt;
+/**
+ * A source's extent on the member (ft along the analysed length), its text in entered positions. An extent
+ * left open runs to the member's end; an extent given is entered, so it moves on by `offsetFt`.
+ */
+function extentOf(
+  source: { startFt?: number; endFt?: number },
+  input: Pick<MemberLoadsInput, 'spanFt' | 'positionOffsetFt'>,
+  field: string,
+): Extent {
+  const { spanFt, positionOffsetFt: offsetFt } = input;
+  const startFt = source.startFt === undefined ? 0 : source.startFt + offsetFt;
+  const endFt = source.endFt === undefined ? spanFt : source.endFt + offsetFt;
   if (endFt > spanFt + POSITION_TOLERANCE_FT) {
     throw new CalcInputError(
       `${field}.endFt`,
-      `Load end: ${n(endFt, 2)} ft is past the ${n(spanFt, 2)} ft span`,
+      `Load end: ${n(endFt - offsetFt, 2)} ft is past the ${n(spanFt - offsetFt, 2)} ft span`,
     );
   }
   if (startFt >= endFt) {
     throw new CalcInputError(`${field}.startFt`, 'Load start: must come before the load end');
   }
   const partial = startFt > 0 || endFt < spanFt;
-  return { startFt, endFt, partial, text: partial ? ` from ${n(startFt, 2)} to ${n(endFt, 2)} ft` : '' };
+  const from = Math.max(0, startFt - offsetFt);
+  const to = endFt - offsetFt;
+  return { startFt, endFt, partial, text: partial ? ` from ${n(from, 2)} to ${n(to, 2)} ft` : '' };
 }
 
 function addSource(t: Takedown, source: LoadSource, input: MemberLoadsInput, field: string): void {
   const flag = source.flag;
   if (source.kind === 'point') {
     const label = source.label ?? POINT_LABELS[source.pointKind];
-    if (source.atFt > input.spanFt + POSITION_TOLERANCE_FT) {
+    const offsetFt = input.positionOffsetFt;
+    if (source.atFt + offsetFt > input.spanFt + POSITION_TOLERANCE_FT) {
       throw new CalcInputError(
         `${field}.atFt`,
-        `${label} position: ${n(source.atFt, 2)} ft is past the ${n(input.spanFt, 2)} ft span`,
+        `${label} position: ${n(source.atFt, 2)} ft is past the ${n(input.spanFt - offsetFt, 2)} ft span`,
       );
     }
-    const atFt = Math.min(source.atFt, input.spanFt);
-    t.point(label, 'D', source.deadLb, atFt, flag);
-    t.point(label, 'L', source.liveLb, atFt, flag);
-    t.point(label, 'Lr', source.roofLiveLb, atFt, flag);
-    t.point(label, 'S', source.snowLb, atFt, flag);
+    const atFt = Math.min(source.atFt + offsetFt, input.spanFt);
+    const enteredFt = atFt - offsetFt;
+    t.point(label, 'D', source.deadLb, atFt, enteredFt, flag);
+    t.point(label, 'L', source.liveLb, atFt, enteredFt, flag);
+    t.point(label, 'Lr', source.roofLiveLb, atFt, enteredFt, flag);
+    t.point(label, 'S', source.snowLb, atFt, enteredFt, flag);
     if (source.pointKind === 'purlin-strut') {
       t.warnings.push(
         `${label}: a purlin strut's load depends on the roof framing above; have an engineer confirm it.`,
@@ -112,7 +126,7 @@ function addSource(t: Takedown, source: LoadSource, input: MemberLoadsInput, fie
     return;
   }
   const label = source.label ?? SOURCE_LABELS[source.kind];
-  const extent = extentOf(source, input.spanFt, field);
+  const extent = extentOf(source, input, field);
   if (source.kind === 'wall-above') {
     if (source.wPlf !== undefined) {
       t.uniform(label, 'D', source.wPlf, `${n(source.wPlf, 1)} plf (given)`, extent, flag);
@@ -182,12 +196,15 @@ function addSource(t: Takedown, source: LoadSource, input: MemberLoadsInput, fie
  *   gives its own);
  * - floor or ceiling joists continuous over the member: × 1.25 (two equal spans);
  * - wall above: plf as given, or height × psf; point loads by type at their position; self-weight as D.
- * Zero loads are left out of `loads` and `lines`.
+ * Zero loads are left out of `loads` and `lines`. Source positions are entered ones (from the face of the left
+ * support, say): `positionOffsetFt` moves them onto the analysed member for `loads` and the lines' numbers,
+ * while the lines' text and the messages say the positions as entered.
  *
  * @param input parsed memberLoadsInputSchema: spanFt (ft), roofPitchIn12, roofSnowPsf (psf), selfWeightPlf
- *   (plf), sources (tributary widths ft, area loads psf, line loads plf, point loads lb, positions ft)
+ *   (plf), sources (tributary widths ft, area loads psf, line loads plf, point loads lb, positions ft as
+ *   entered), positionOffsetFt (ft)
  * @returns loads (plf / lb, positions ft), takedown lines, warnings, totalsPlf (plf by load type)
- * @throws CalcInputError (field = "sources.<i>.<name>") for positions or extents off the span
+ * @throws CalcInputError (field = "sources.<i>.<name>") for positions or extents off the span (in entered ft)
  * @example
  * buildMemberLoads({ spanFt: 6, roofPitchIn12: 12, roofSnowPsf: 0, selfWeightPlf: 0,
  *   sources: [{ kind: 'roof', flag: 'assumed', tributaryFt: 10, deadPsf: 10, deadAlongSlope: true, roofLivePsf: 20 }] })

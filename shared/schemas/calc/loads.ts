@@ -134,7 +134,7 @@ export type LoadSource = z.infer<typeof loadSourceSchema>;
 export type LoadSourceInput = z.input<typeof loadSourceSchema>;
 
 export const memberLoadsInputSchema = z.object({
-  /** Design span, ft: positions and extents are checked against it. */
+  /** Length analysed, ft (the design span of a simple span): positions and extents are checked against it. */
   spanFt: z
     .number()
     .finite()
@@ -149,6 +149,13 @@ export const memberLoadsInputSchema = z.object({
   sources: z
     .array(loadSourceSchema)
     .max(CALC_BOUNDS.sources, { message: `At most ${CALC_BOUNDS.sources} load sources` }),
+  /**
+   * Where the sources' positions are measured from, ft along the analysed length: an entered position plus
+   * this is its place on the member (half the left bearing when positions are entered from the face of the
+   * left support and the analysis starts at its centre). The takedown's text and messages keep the entered
+   * positions; its loads and lines carry the member's. Default 0.
+   */
+  positionOffsetFt: z.number().finite().min(0).max(60).default(0),
 });
 export type MemberLoadsInput = z.infer<typeof memberLoadsInputSchema>;
 

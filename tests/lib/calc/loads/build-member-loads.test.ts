@@ -152,4 +152,39 @@ describe('buildMemberLoads', () => {
       /before the load end/,
     );
   });
+
+  describe('positions entered from the face of the left support (positionOffsetFt)', () => {
+    // 4-1/2 in bearings: the analysis starts at the bearing centre, 2-1/4 in before the face (DESIGN.md §5)
+    const offset = 2.25 / 12;
+    const sources: LoadSourceInput[] = [
+      { kind: 'wall-above', wPlf: 48, startFt: 0, endFt: 6 },
+      { kind: 'point', pointKind: 'post-above', atFt: 9, deadLb: 600 },
+    ];
+
+    it('puts the loads on the member and writes the positions the user entered', () => {
+      const result = build(sources, { spanFt: 14.375, positionOffsetFt: offset });
+      const wall = result.lines.find((l) => l.label === 'Wall above');
+      const post = result.lines.find((l) => l.label === 'Post above');
+      expect(wall?.expression).toBe('48 plf (given) from 0 to 6 ft');
+      expect(post?.expression).toBe('600 lb at 9 ft');
+      expectApprox(wall?.startFt ?? NaN, offset, { abs: 1e-12 });
+      expectApprox(wall?.endFt ?? NaN, 6 + offset, { abs: 1e-12 });
+      expectApprox(post?.atFt ?? NaN, 9 + offset, { abs: 1e-12 });
+      expect(result.loads.find((l) => l.kind === 'point')).toMatchObject({ atFt: 9 + offset });
+    });
+
+    it('names an entered position past the member in entered feet', () => {
+      try {
+        build([{ kind: 'point', pointKind: 'post-above', atFt: 14.5, deadLb: 10 }], {
+          spanFt: 14.375,
+          positionOffsetFt: offset,
+        });
+        expect.unreachable('a position past the member');
+      } catch (error) {
+        expect((error as CalcInputError).field).toBe('sources.0.atFt');
+        // 14.375 ft analysed less the 0.1875 ft offset: 14.19 ft from the face
+        expect((error as Error).message).toBe('Post above position: 14.5 ft is past the 14.19 ft span');
+      }
+    });
+  });
 });
