@@ -1,3 +1,4 @@
+import { jobUpdateResultSchema } from '@/shared/schemas/job-update';
 import { jobListSchema, jobSchema, type JobInput } from '@/shared/schemas/jobs';
 import { apiRequest, noContentSchema } from './client';
 
@@ -8,8 +9,9 @@ export const fetchJob = (jobId: string) =>
 
 export const createJob = (input: JobInput) => apiRequest('POST', '/api/jobs', jobSchema, input);
 
+/** Saves the job; the answer names every member the server checked again with the job's new values. */
 export const updateJob = (jobId: string, input: Partial<JobInput>) =>
-  apiRequest('PATCH', `/api/jobs/${encodeURIComponent(jobId)}`, jobSchema, input);
+  apiRequest('PATCH', `/api/jobs/${encodeURIComponent(jobId)}`, jobUpdateResultSchema, input);
 
 /** Archives the job (the API keeps it; it leaves the list). */
 export const archiveJob = (jobId: string) =>

@@ -22,13 +22,16 @@ export function useJobMutations() {
       },
       [mutate, orgId, router],
     ),
+    /** Saves the job and returns the members the server checked again with its new values. */
     update: useCallback(
       async (jobId: string, input: JobInput) => {
-        const job = await updateJob(jobId, input);
+        const { recomputed, ...job } = await updateJob(jobId, input);
         await Promise.all([
           mutate(keys.job(orgId, jobId), job, { revalidate: false }),
           mutate(keys.jobs(orgId)),
+          recomputed.length > 0 ? mutate(keys.jobMembers(orgId, jobId)) : undefined,
         ]);
+        return recomputed;
       },
       [mutate, orgId],
     ),

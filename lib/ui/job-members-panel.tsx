@@ -3,6 +3,7 @@ import { Pressable, StyleSheet, View } from 'react-native';
 import { formatNumber } from '@/lib/format';
 import { useJobMembers } from '@/lib/hooks/use-job-members';
 import { colors, layout, radii, spacing } from '@/lib/theme';
+import type { MemberRecompute } from '@/shared/schemas/job-update';
 import type { Job } from '@/shared/schemas/jobs';
 import type { MemberListItem } from '@/shared/schemas/members';
 import { Card } from './card';
@@ -10,6 +11,7 @@ import { ErrorView } from './error-view';
 import { Icon } from './icon';
 import { LinkButton } from './link-button';
 import { memberStateLook } from './member-state';
+import { RecomputeNotice } from './recompute-notice';
 import { checkNames } from './result/check-names';
 import { Text } from './text';
 
@@ -46,8 +48,17 @@ function MemberRow({ member }: { member: MemberListItem }) {
   );
 }
 
-/** The job's members with their state, the loads they inherit from the job, and "Add a header" / "Add a beam". */
-export function JobMembersPanel({ job }: { job: Job }) {
+/**
+ * The job's members with their state, the loads they inherit from the job, "Add a header" / "Add a beam",
+ * and after a job save the members the server checked again (`recomputed`).
+ */
+export function JobMembersPanel({
+  job,
+  recomputed = [],
+}: {
+  job: Job;
+  recomputed?: readonly MemberRecompute[];
+}) {
   const { data: members, error, mutate } = useJobMembers(job.id);
   return (
     <Card title="Members" testID="job-members">
@@ -56,6 +67,7 @@ export function JobMembersPanel({ job }: { job: Job }) {
         {job.groundSnowSource ? ` (${job.groundSnowSource})` : ' (source not entered)'}, roof {job.roofType}{' '}
         at {job.roofPitchIn12} in 12.
       </Text>
+      <RecomputeNotice recomputed={recomputed} />
       {error ? <ErrorView error={error} onRetry={() => mutate()} /> : null}
       {members && members.length === 0 ? (
         <Text tone="muted">No members yet. Add the header or beam for an opening.</Text>

@@ -1,6 +1,8 @@
 import type { Db } from '@/db/client';
 import { notFound } from '@/server/app-error';
 import { recordAudit, type Actor } from '@/server/api/audit/audit.repository';
+import { recomputeJobMembers } from '@/server/api/members/job-context';
+import type { JobUpdateResult } from '@/shared/schemas/job-update';
 import type { Job, JobPatch } from '@/shared/schemas/jobs';
 import { archiveJob, findJob, insertJob, listJobs, updateJob, type JobFields } from './jobs.repository';
 
@@ -25,8 +27,14 @@ export function createJobsService(db: Db) {
       });
     },
 
-    update(actor: Actor, jobId: string, patch: JobPatch): Job {
+    /**
+     * Saves the patch and, in the same transaction, checks again every member that takes a changed load
+     * value from the job (see recomputeJobMembers).
+     */
+    update(actor: Actor, jobId: string, patch: JobPatch): JobUpdateResult {
       return db.transaction((tx) => {
+        const before = findJob(tx, actor.orgId, jobId);
+        if (!before) throw notFound('Job');
         const job = updateJob(tx, actor.orgId, jobId, patch);
         if (!job) throw notFound('Job');
         recordAudit(tx, actor, {
@@ -34,7 +42,7 @@ export function createJobsService(db: Db) {
           subject: jobId,
           detail: { fields: Object.keys(patch) },
         });
-        return job;
+        return { ...job, recomputed: recomputeJobMembers(tx, actor, before, job) };
       });
     },
 

@@ -89,3 +89,13 @@ export function deleteMember(db: DbOrTx, orgId: string, memberId: string): boole
     .all();
   return deleted.length > 0;
 }
+
+/** The job's members with their inputs, in the order they were made (for checking them again). */
+export function listMembersOfJob(db: DbOrTx, orgId: string, jobId: string): Member[] {
+  return db
+    .select(memberColumns)
+    .from(members)
+    .where(and(eq(members.jobId, jobId), eq(members.orgId, orgId)))
+    .orderBy(asc(members.createdAt), asc(sql`${members}.rowid`))
+    .all();
+}

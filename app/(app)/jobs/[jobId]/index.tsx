@@ -1,5 +1,6 @@
 import { useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
+import type { MemberRecompute } from '@/shared/schemas/job-update';
 import { useJob } from '@/lib/hooks/use-job';
 import { useJobMutations } from '@/lib/hooks/use-job-mutations';
 import { ArchiveJobControl } from '@/lib/ui/archive-job-control';
@@ -18,6 +19,7 @@ export default function JobPage() {
   const { data: job, error, mutate } = useJob(jobId);
   const { update, archive } = useJobMutations();
   const [editing, setEditing] = useState(false);
+  const [recomputed, setRecomputed] = useState<MemberRecompute[]>([]);
 
   if (error) {
     return (
@@ -36,7 +38,7 @@ export default function JobPage() {
           initial={jobToDraft(job)}
           submitLabel="Save changes"
           onSubmit={async (fields) => {
-            await update(job.id, fields);
+            setRecomputed(await update(job.id, fields));
             setEditing(false);
           }}
           onCancel={() => setEditing(false)}
@@ -59,7 +61,7 @@ export default function JobPage() {
       }
     >
       <TextLink href="/jobs" label="All jobs" />
-      <JobMembersPanel job={job} />
+      <JobMembersPanel job={job} recomputed={recomputed} />
       <JobSummary job={job} />
       <ArchiveJobControl jobName={job.name} onArchive={() => archive(job.id)} />
     </Screen>

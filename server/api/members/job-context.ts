@@ -1,0 +1,103 @@
+import type { DbOrTx } from '@/db/client';
+import { recordAudit, type Actor } from '@/server/api/audit/audit.repository';
+import { AppError } from '@/server/app-error';
+import {
+  memberCheckInputSchema,
+  type MemberCheckInput,
+  type MemberCheckInputBody,
+} from '@/shared/schemas/calc/member';
+import type { JobLoadContextField, MemberRecompute } from '@/shared/schemas/job-update';
+import type { Job } from '@/shared/schemas/jobs';
+import type { Member } from '@/shared/schemas/members';
+import { evaluate } from './member-evaluation';
+import { listMembersOfJob, updateMember } from './members.repository';
+
+/**
+ * A member's input with the job's new load context where the member takes it from the job, and which of the
+ * job's changed values it takes. A member takes a value when its own equals the job's value before the
+ * change (the editor prefills every member from the job, and a member set apart from the job keeps its own):
+ * the edition, the ground snow (no snow on the member is a job's 0 psf), the roof type of its snow and the
+ * roof slope. A header's prescriptive-path verdict reads the job's building width and ground snow straight
+ * from the job, so every header takes those two.
+ *
+ * @param member the saved member (kind and parsed input)
+ * @param before the job before the change; after the job after it
+ * @returns the input to check (parsed again, so its defaults are filled) and the fields it takes
+ * @example takeJobContext(member, { ...job, groundSnowPsf: 30 }, { ...job, groundSnowPsf: 50 }).fields // ['groundSnowPsf']
+ */
+export function takeJobContext(
+  member: Pick<Member, 'kind' | 'input'>,
+  before: Job,
+  after: Job,
+): { input: MemberCheckInput; fields: JobLoadContextField[] } {
+  const { input } = member;
+  const fields = new Set<JobLoadContextField>();
+  const next: MemberCheckInputBody = { ...input };
+  if (before.loadStandard !== after.loadStandard && input.edition === before.loadStandard) {
+    next.edition = after.loadStandard;
+    fields.add('loadStandard');
+  }
+  if (before.roofPitchIn12 !== after.roofPitchIn12 && (input.roofPitchIn12 ?? 0) === before.roofPitchIn12) {
+    next.roofPitchIn12 = after.roofPitchIn12;
+    fields.add('roofPitchIn12');
+  }
+  const ownSnowPsf = input.snow?.groundSnowPsf ?? 0;
+  const takesSnow = before.groundSnowPsf !== after.groundSnowPsf && ownSnowPsf === before.groundSnowPsf;
+  const takesRoofType =
+    before.roofType !== after.roofType &&
+    (input.snow === undefined || input.snow.roofType === before.roofType);
+  if (takesSnow) fields.add('groundSnowPsf');
+  if (takesRoofType && (input.snow !== undefined || takesSnow)) fields.add('roofType');
+  if (takesSnow || fields.has('roofType')) {
+    const groundSnowPsf = takesSnow ? after.groundSnowPsf : ownSnowPsf;
+    const roofType = takesRoofType ? after.roofType : (input.snow?.roofType ?? after.roofType);
+    next.snow = groundSnowPsf > 0 ? { ...input.snow, groundSnowPsf, roofType } : undefined;
+  }
+  if (member.kind === 'header') {
+    if (before.buildingWidthFt !== after.buildingWidthFt) fields.add('buildingWidthFt');
+    if (before.groundSnowPsf !== after.groundSnowPsf) fields.add('groundSnowPsf');
+  }
+  if (fields.size === 0) return { input, fields: [] };
+  return { input: memberCheckInputSchema.parse(next), fields: [...fields] };
+}
+
+/**
+ * Checks again, with the engine and inside the caller's transaction, every member of a job that takes one of
+ * the job's changed load values, stores each new result as a save would (by the person who changed the
+ * job) and records it in the audit log. A member the engine cannot check with the new values refuses the
+ * whole change: a 400 naming the job's field, and the transaction writes nothing. Members of an archived job
+ * are not changed.
+ *
+ * @returns each member checked again, with its state before and after
+ */
+export function recomputeJobMembers(tx: DbOrTx, actor: Actor, before: Job, after: Job): MemberRecompute[] {
+  if (after.archivedAt) return [];
+  const out: MemberRecompute[] = [];
+  for (const member of listMembersOfJob(tx, actor.orgId, after.id)) {
+    const taken = takeJobContext(member, before, after);
+    if (taken.fields.length === 0) continue;
+    let fields;
+    try {
+      fields = evaluate(after, member.label, member.wall, taken.input);
+    } catch (error) {
+      if (!(error instanceof AppError)) throw error;
+      const message = `${member.label} can't be checked with this value: ${error.message}`;
+      throw new AppError('bad_request', message, { [taken.fields[0]]: [message] });
+    }
+    updateMember(tx, actor.orgId, member.id, actor.userId, fields);
+    recordAudit(tx, actor, {
+      action: 'member.recompute',
+      subject: member.id,
+      detail: { jobId: after.id, fields: taken.fields },
+    });
+    out.push({
+      memberId: member.id,
+      label: member.label,
+      kind: member.kind,
+      fields: taken.fields,
+      before: member.summary.state,
+      after: fields.summary.state,
+    });
+  }
+  return out;
+}
