@@ -1,6 +1,7 @@
 import { count } from 'drizzle-orm';
 import type { Db } from './client';
 import { newId } from './new-id';
+import { insertDemoMembers, type EvaluateMember } from './seed-members';
 import { jobs, memberships, organizations, users } from './schema';
 import type { OrgKind, Role } from '@/shared/schemas/auth';
 import type { jobInputSchema } from '@/shared/schemas/jobs';
@@ -93,12 +94,15 @@ const DEMO_FIRMS: DemoFirm[] = [
 
 /**
  * Adds the demo firms, people and jobs when the database has no users yet; otherwise does nothing.
- * `hashPassword` comes from the server's password module (the database layer does not import the server).
+ * `hashPassword` comes from the server's password module (the database layer does not import the server),
+ * and so does `evaluateMember`, the members service's own check: with it the demo jobs get their demo
+ * headers and beams (db/seed-members.ts), computed by the engine as a save would.
  * Returns true when it added the demo data.
  */
 export async function insertDemoData(
   db: Db,
   hashPassword: (password: string) => Promise<string>,
+  evaluateMember?: EvaluateMember,
 ): Promise<boolean> {
   const [{ users: existing }] = db.select({ users: count() }).from(users).all();
   if (existing > 0) return false;
@@ -129,17 +133,11 @@ export async function insertDemoData(
       });
       firm.jobs.forEach((job, jobIndex) => {
         const createdAt = at(1000 + jobIndex);
+        const row = { id: newId(), orgId, ...job, createdAt, updatedAt: createdAt, archivedAt: null };
         tx.insert(jobs)
-          .values({
-            id: newId(),
-            orgId,
-            createdBy: userIds[0],
-            ...job,
-            createdAt,
-            updatedAt: createdAt,
-            archivedAt: null,
-          })
+          .values({ ...row, createdBy: userIds[0] })
           .run();
+        if (evaluateMember) insertDemoMembers(tx, row, userIds[1] ?? userIds[0], evaluateMember);
       });
     });
   });

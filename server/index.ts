@@ -5,6 +5,7 @@ import { openDatabase } from '@/db/client';
 import { migrateDatabase } from '@/db/migrate';
 import { insertDemoData } from '@/db/seed';
 import { devMailPageUrl } from './api/dev-mail/dev-mail.router';
+import { evaluate } from './api/members/member-evaluation';
 import { createApp } from './app';
 import { loadEnv } from './env';
 import { startFakeSmtp, type FakeSmtp } from './services/fake-smtp';
@@ -18,8 +19,8 @@ async function main(): Promise<void> {
 
   const database = openDatabase(env.DATABASE_URL);
   migrateDatabase(database.db);
-  if (env.SEED_DEMO && (await insertDemoData(database.db, hashPassword))) {
-    log('Demo firms, people and jobs added (password tributary-demo)');
+  if (env.SEED_DEMO && (await insertDemoData(database.db, hashPassword, evaluate))) {
+    log('Demo firms, people, jobs and members added (password tributary-demo)');
   }
 
   let fakeSmtp: FakeSmtp | undefined;

@@ -2,9 +2,14 @@ import { count } from 'drizzle-orm';
 import request from 'supertest';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD, insertDemoData } from '@/db/seed';
-import { jobs, users } from '@/db/schema';
+import { DEMO_MEMBERS, demoMemberInput } from '@/db/seed-members';
+import { jobs, members, users } from '@/db/schema';
+import { ENGINE_VERSION, checkMember, prescriptiveVerdict } from '@/lib/calc';
+import { evaluate } from '@/server/api/members/member-evaluation';
 import { hashPassword } from '@/server/services/password';
 import { meSchema } from '@/shared/schemas/auth';
+import { jobSchema } from '@/shared/schemas/jobs';
+import { memberSchema } from '@/shared/schemas/members';
 import { createTestServer, type TestServer } from '@/tests/helpers/server';
 
 let server: TestServer;
@@ -44,5 +49,78 @@ describe('demo data', () => {
     const list = await agent.get('/api/jobs');
     if (jobCount === null) expect(list.status).toBe(403);
     else expect(list.body.jobs).toHaveLength(jobCount);
+  });
+
+  it('adds no members without the members check (the database layer does not import the server)', async () => {
+    await insertDemoData(server.db, hashPassword);
+    expect(server.db.select({ n: count() }).from(members).get()?.n).toBe(0);
+  });
+});
+
+describe('demo members (an invented scenario)', () => {
+  beforeEach(async () => {
+    await insertDemoData(server.db, hashPassword, evaluate);
+  });
+
+  const signIn = async () => {
+    const agent = request.agent(server.app);
+    await agent
+      .post('/api/auth/sign-in')
+      .send({ email: 'contractor@demo.tributary.test', password: DEMO_PASSWORD })
+      .expect(200);
+    return agent;
+  };
+
+  it('puts headers and beams on the demo jobs: some pass, one fails, the beams need an engineer', async () => {
+    const agent = await signIn();
+    const list = (await agent.get('/api/jobs').expect(200)).body.jobs.map((j: unknown) => jobSchema.parse(j));
+    const states: Record<string, string> = {};
+    for (const job of list) {
+      const rows = (await agent.get(`/api/jobs/${job.id}/members`).expect(200)).body.members;
+      expect(rows.map((m: { label: string }) => m.label)).toEqual(
+        (DEMO_MEMBERS[job.name] ?? []).map((m) => m.label),
+      );
+      for (const row of rows) states[row.label] = row.summary.state;
+    }
+    expect(states).toEqual({
+      'Kitchen pass-through header': 'passes',
+      'Dining-room beam': 'engineer-needed',
+      'Hall doorway header': 'passes',
+      'Linen closet header': 'fails',
+      'Family room beam': 'engineer-needed',
+    });
+  });
+
+  it("stores the engine's own result of each stored input, as a save would, with the job's load context", async () => {
+    const agent = await signIn();
+    const list = (await agent.get('/api/jobs').expect(200)).body.jobs.map((j: unknown) => jobSchema.parse(j));
+    let checked = 0;
+    for (const job of list) {
+      for (const row of (await agent.get(`/api/jobs/${job.id}/members`).expect(200)).body.members) {
+        const member = memberSchema.parse((await agent.get(`/api/members/${row.id}`).expect(200)).body);
+        const demo = (DEMO_MEMBERS[job.name] ?? []).find((m) => m.label === member.label);
+        if (!demo) throw new Error(`${member.label} is not a demo member of ${job.name}`);
+        expect(member.input).toEqual(JSON.parse(JSON.stringify(demoMemberInput(job, demo))));
+        expect(member.input.edition).toBe(job.loadStandard);
+        expect(member.input.roofPitchIn12).toBe(job.roofPitchIn12);
+        expect(member.input.snow?.groundSnowPsf).toBe(job.groundSnowPsf);
+        expect(member.engineVersion).toBe(ENGINE_VERSION);
+        expect(member.result).toEqual(
+          JSON.parse(JSON.stringify(checkMember(member.input, { diagrams: true }))),
+        );
+        if (member.kind === 'header') {
+          const facts = {
+            member: member.input,
+            buildingWidthFt: job.buildingWidthFt,
+            groundSnowPsf: job.groundSnowPsf,
+          };
+          expect(member.prescriptive).toEqual(JSON.parse(JSON.stringify(prescriptiveVerdict(facts))));
+        } else {
+          expect(member.prescriptive).toBeNull();
+        }
+        checked++;
+      }
+    }
+    expect(checked).toBe(Object.values(DEMO_MEMBERS).flat().length);
   });
 });
