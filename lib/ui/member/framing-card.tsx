@@ -1,6 +1,6 @@
 import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { buildFramingList, CalcInputError, parseLength, type FramingList } from '@/lib/calc';
+import { buildFramingList, CalcInputError, type FramingList } from '@/lib/calc';
 import { formatFtIn, formatIn } from '@/lib/format';
 import { colors, spacing } from '@/lib/theme';
 import { Card } from '@/lib/ui/card';
@@ -9,6 +9,7 @@ import { Text } from '@/lib/ui/text';
 import { framingInputSchema } from '@/shared/schemas/calc/framing';
 import type { MemberCheckResult } from '@/shared/schemas/calc/member';
 import { MeasureField } from './measure-field';
+import { DraftReader } from './member-input';
 
 type Opening = {
   width: string;
@@ -21,21 +22,6 @@ type Opening = {
 
 /** Houses built before this year often have a single top plate (common practice); the framing list asks. */
 const SINGLE_PLATE_BEFORE = 1950;
-
-function lengthIn(
-  text: string,
-  field: string,
-  label: string,
-  errors: Record<string, string[]>,
-): number | undefined {
-  try {
-    return parseLength(text, field, { defaultUnit: 'in', label });
-  } catch (error) {
-    if (error instanceof CalcInputError) errors[field] = [error.message];
-    else throw error;
-    return undefined;
-  }
-}
 
 function ListLines({ list, title }: { list: FramingList; title: string }) {
   return (
@@ -72,13 +58,14 @@ export function FramingCard({ result, yearBuilt }: { result: MemberCheckResult; 
   }));
   const set = (key: keyof Opening) => (value: string) => setOpening((o) => ({ ...o, [key]: value }));
   const lists = useMemo(() => {
-    const errors: Record<string, string[]> = {};
-    const width = lengthIn(opening.width, 'width', 'Rough opening width', errors);
-    const height = lengthIn(opening.height, 'height', 'Rough opening height', errors);
-    const sill = lengthIn(opening.sill, 'sill', 'Sill height', errors);
+    const r = new DraftReader();
+    const errors = r.errors;
+    const width = r.parsedLength('width', opening.width, 'Rough opening width', 'in');
+    const height = r.parsedLength('height', opening.height, 'Rough opening height', 'in');
+    const sill = r.parsedLength('sill', opening.sill, 'Sill height', 'in');
     const ends = [
-      lengthIn(opening.wallLeft, 'wallLeft', 'Wall height, left', errors),
-      lengthIn(opening.wallRight, 'wallRight', 'Wall height, right', errors),
+      r.parsedLength('wallLeft', opening.wallLeft, 'Wall height, left', 'in'),
+      r.parsedLength('wallRight', opening.wallRight, 'Wall height, right', 'in'),
     ];
     const out: FramingList[] = [];
     for (const [i, wall] of ends.entries()) {

@@ -15,8 +15,11 @@ export type DraftReading = { input: MemberCheckInputBody; errors: FieldErrors };
  */
 export const FINISH_PER_SIDE_IN: Record<MeasuredTo, number> = { framing: 0, drywall: 0.5, plaster: 0.875 };
 
-/** Reads the draft field by field. Every field that can't be read gets a message under its draft path. */
-class DraftReader {
+/**
+ * Reads a form field by field. Every field that can't be read gets a message under its path in `errors`
+ * (the member draft, the framing list, what's above).
+ */
+export class DraftReader {
   readonly errors: FieldErrors = {};
 
   fail(path: string, message: string): undefined {
@@ -42,8 +45,16 @@ class DraftReader {
     required: boolean,
   ): number | undefined {
     if (text.trim() === '') return required ? this.fail(path, `Enter the ${label}, e.g. 13' 6"`) : undefined;
+    return this.parsedLength(path, text, capitalize(label), unit);
+  }
+
+  /**
+   * A length as typed, empty text included (the parser's own message then), in `unit` (bare numbers are
+   * that unit); a message under `path` when it can't be read.
+   */
+  parsedLength(path: string, text: string, label: string, unit: 'ft' | 'in'): number | undefined {
     try {
-      const inches = parseLength(text, path, { defaultUnit: unit, label: capitalize(label) });
+      const inches = parseLength(text, path, { defaultUnit: unit, label });
       return unit === 'ft' ? inches / 12 : inches;
     } catch (error) {
       if (error instanceof CalcInputError) return this.fail(path, error.message);

@@ -3,8 +3,6 @@ import { StyleSheet, View } from 'react-native';
 import {
   ageDefaults,
   ATTIC_EQUIPMENT,
-  parseLength,
-  CalcInputError,
   ROOF_COVERINGS,
   whatsAboveSources,
   type AtticEquipment,
@@ -21,6 +19,7 @@ import { TextField } from '@/lib/ui/text-field';
 import { loadSourceSchema } from '@/shared/schemas/calc/loads';
 import type { Job } from '@/shared/schemas/jobs';
 import { sourceDraft } from './draft-from-input';
+import { DraftReader } from './member-input';
 import type { SourceDraft } from './source-draft';
 
 type Form = {
@@ -109,17 +108,12 @@ export function WhatsAboveCard({
     (value: Form[K]) =>
       setForm((f) => ({ ...f, [key]: value }));
   const build = () => {
-    const found: Record<string, string[]> = {};
+    const r = new DraftReader();
+    const found = r.errors;
     const ft = (key: keyof Form, label: string, emptyIsZero = true) => {
       const text = String(form[key]).trim();
       if (text === '' && emptyIsZero) return 0;
-      try {
-        return parseLength(text, key, { defaultUnit: 'ft', label }) / 12;
-      } catch (error) {
-        if (!(error instanceof CalcInputError)) throw error;
-        found[key] = [error.message];
-        return 0;
-      }
+      return r.parsedLength(key, text, label, 'ft') ?? 0;
     };
     const above: WhatsAbove = {};
     if (form.roof) {

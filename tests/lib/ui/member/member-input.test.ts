@@ -3,7 +3,7 @@ import { checkMember } from '@/lib/calc';
 import { draftFromInput } from '@/lib/ui/member/draft-from-input';
 import { liveCheck } from '@/lib/ui/member/live-check';
 import { emptyMemberDraft, flagAfterEdit, type MemberDraft } from '@/lib/ui/member/member-draft';
-import { FINISH_PER_SIDE_IN, readMemberDraft } from '@/lib/ui/member/member-input';
+import { DraftReader, FINISH_PER_SIDE_IN, readMemberDraft } from '@/lib/ui/member/member-input';
 import { moveSource, newSource } from '@/lib/ui/member/source-draft';
 import { memberCheckInputSchema } from '@/shared/schemas/calc/member';
 import type { Job } from '@/shared/schemas/jobs';
@@ -157,5 +157,22 @@ describe('two spans and overhangs', () => {
   it('asks for the second span when the member is continuous', () => {
     const { errors } = readMemberDraft({ ...beamDraft(), continuous: true, secondSpan: '' }, job);
     expect(errors.secondSpan?.[0]).toMatch(/second clear span/);
+  });
+});
+
+describe('DraftReader (shared by the member form, the framing list and what is above)', () => {
+  it('reads a length as typed in the unit asked, and files a message under its path when it cannot', () => {
+    const r = new DraftReader();
+    // 13 ft 6-3/8 in = 162.375 in, read off a tape (common practice: feet, inches and sixteenths)
+    expectApprox(r.parsedLength('width', '13-6-3/8', 'Rough opening width', 'in') ?? NaN, 162.375, {
+      abs: 1e-12,
+    });
+    expectApprox(r.parsedLength('span', '162', 'Span', 'in') ?? NaN, 162, { abs: 1e-12 });
+    expectApprox(r.parsedLength('span', '13-6', 'Span', 'ft') ?? NaN, 13.5, { abs: 1e-12 });
+    expect(r.errors).toEqual({});
+    expect(r.parsedLength('sill', 'high', 'Sill height', 'in')).toBeUndefined();
+    expect(r.errors.sill?.[0]).toMatch(/^Sill height/);
+    expect(r.parsedLength('height', '', 'Rough opening height', 'in')).toBeUndefined();
+    expect(r.errors.height).toHaveLength(1);
   });
 });
