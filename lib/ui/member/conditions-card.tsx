@@ -9,6 +9,7 @@ import type { MountKind, SupportKind } from './member-draft';
 import { sameCardSlice } from './card-memo';
 import type { FieldErrors } from './member-input';
 import { MeasureField } from './measure-field';
+import { fieldProps } from '@/lib/ui/field-props';
 
 const mountChoices = [
   { value: 'dropped' as MountKind, label: 'Dropped', description: 'Below the joists: check the headroom' },
@@ -26,20 +27,7 @@ const supportChoices = [
 
 /** Bracing, deflection use, mount, what the ends bear on, service conditions and posts under the ends. */
 function ConditionsCardView({ form, errors }: { form: MemberDraftState; errors: FieldErrors }) {
-  const { draft, set, setFlag } = form;
-  const flagProps = (
-    field:
-      | 'unbracedLength'
-      | 'deflectionCap'
-      | 'joistDepth'
-      | 'underJoistsHeight'
-      | 'atticClearance'
-      | 'supportWidth'
-      | 'temperature',
-  ) => ({
-    flag: draft.flags[field] ?? 'default',
-    onFlag: (f: 'measured' | 'assumed' | 'default') => setFlag(field, f),
-  });
+  const { draft, set } = form;
   return (
     <Card title="Conditions">
       <CheckRow
@@ -54,11 +42,8 @@ function ConditionsCardView({ form, errors }: { form: MemberDraftState; errors: 
           label="Unbraced length"
           unit="ft"
           tape
-          value={draft.unbracedLength}
-          onChangeText={set('unbracedLength')}
-          errors={errors.unbracedLength}
+          {...fieldProps(form, errors, 'unbracedLength')}
           testID="unbraced-length"
-          {...flagProps('unbracedLength')}
         />
       )}
       <PickerField
@@ -72,11 +57,8 @@ function ConditionsCardView({ form, errors }: { form: MemberDraftState; errors: 
         label="Deflection cap (optional)"
         hint="E.g. 3/8 in for a flush beam under a finished floor."
         unit="in"
-        value={draft.deflectionCap}
-        onChangeText={set('deflectionCap')}
-        errors={errors.deflectionCap}
+        {...fieldProps(form, errors, 'deflectionCap')}
         testID="deflection-cap"
-        {...flagProps('deflectionCap')}
       />
       <ChoiceGroup
         label="Mount"
@@ -90,22 +72,16 @@ function ConditionsCardView({ form, errors }: { form: MemberDraftState; errors: 
           <MeasureField
             label="Ceiling joist depth"
             unit="in"
-            value={draft.joistDepth}
-            onChangeText={set('joistDepth')}
-            errors={errors.joistDepth}
+            {...fieldProps(form, errors, 'joistDepth')}
             testID="joist-depth"
-            {...flagProps('joistDepth')}
           />
           <MeasureField
             label="Attic clearance (optional)"
             hint="From the ceiling line up to the underside of the roof framing where the member goes."
             unit="in"
             tape
-            value={draft.atticClearance}
-            onChangeText={set('atticClearance')}
-            errors={errors.atticClearance}
+            {...fieldProps(form, errors, 'atticClearance')}
             testID="attic-clearance"
-            {...flagProps('atticClearance')}
           />
         </>
       ) : draft.mount === 'flush' ? (
@@ -113,11 +89,8 @@ function ConditionsCardView({ form, errors }: { form: MemberDraftState; errors: 
           label="Joist depth"
           hint="The deepest a flush member may be."
           unit="in"
-          value={draft.joistDepth}
-          onChangeText={set('joistDepth')}
-          errors={errors.joistDepth}
+          {...fieldProps(form, errors, 'joistDepth')}
           testID="joist-depth"
-          {...flagProps('joistDepth')}
         />
       ) : (
         <MeasureField
@@ -125,11 +98,8 @@ function ConditionsCardView({ form, errors }: { form: MemberDraftState; errors: 
           hint="For the headroom under a dropped member."
           unit="in"
           tape
-          value={draft.underJoistsHeight}
-          onChangeText={set('underJoistsHeight')}
-          errors={errors.underJoistsHeight}
+          {...fieldProps(form, errors, 'underJoistsHeight')}
           testID="under-joists"
-          {...flagProps('underJoistsHeight')}
         />
       )}
       <ChoiceGroup
@@ -143,11 +113,8 @@ function ConditionsCardView({ form, errors }: { form: MemberDraftState; errors: 
         label="Support width"
         hint="Wall depth (3-1/2 in for 2x4, 5-1/2 in for 2x6) or post face."
         unit="in"
-        value={draft.supportWidth}
-        onChangeText={set('supportWidth')}
-        errors={errors.supportWidth}
+        {...fieldProps(form, errors, 'supportWidth')}
         testID="support-width"
-        {...flagProps('supportWidth')}
       />
       {draft.supportKind === 'jacks' ? (
         <PickerField
@@ -167,11 +134,8 @@ function ConditionsCardView({ form, errors }: { form: MemberDraftState; errors: 
       <MeasureField
         label="Sustained temperature (optional)"
         unit="°F"
-        value={draft.temperature}
-        onChangeText={set('temperature')}
-        errors={errors.temperature}
+        {...fieldProps(form, errors, 'temperature')}
         testID="temperature"
-        {...flagProps('temperature')}
       />
       <CheckRow
         label="Posts under the ends"

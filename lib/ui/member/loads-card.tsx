@@ -13,6 +13,7 @@ import { PickerField } from '@/lib/ui/picker-field';
 import { sameCardSlice } from './card-memo';
 import type { FieldErrors } from './member-input';
 import { MeasureField } from './measure-field';
+import { fieldProps } from '@/lib/ui/field-props';
 import { SourceCard } from './source-card';
 import { sourceKindLabels, type SourceKind } from './source-draft';
 import { WhatsAboveCard } from './whats-above-card';
@@ -40,7 +41,7 @@ const thermalChoices = roofThermalConditions.map((value) => ({ value, ...thermal
 
 /** The job's load context (shown, overridable here) and the member's load sources. */
 function LoadsCardView({ form, errors, job }: { form: MemberDraftState; errors: FieldErrors; job: Job }) {
-  const { draft, set, setFlag } = form;
+  const { draft, set } = form;
   const [above, setAbove] = useState(false);
   const editionChoices = [
     { value: 'job' as EditionChoice, label: `From the job (${job.loadStandard})` },
@@ -65,11 +66,7 @@ function LoadsCardView({ form, errors, job }: { form: MemberDraftState; errors: 
           <MeasureField
             label="Ground snow"
             unit="psf"
-            value={draft.groundSnow}
-            onChangeText={set('groundSnow')}
-            errors={errors.groundSnow}
-            flag={draft.flags.groundSnow ?? 'default'}
-            onFlag={(f) => setFlag('groundSnow', f)}
+            {...fieldProps(form, errors, 'groundSnow')}
             testID="ground-snow"
           />
         </View>
@@ -77,11 +74,7 @@ function LoadsCardView({ form, errors, job }: { form: MemberDraftState; errors: 
           <MeasureField
             label="Roof slope"
             unit="in 12"
-            value={draft.roofPitch}
-            onChangeText={set('roofPitch')}
-            errors={errors.roofPitch}
-            flag={draft.flags.roofPitch ?? 'default'}
-            onFlag={(f) => setFlag('roofPitch', f)}
+            {...fieldProps(form, errors, 'roofPitch')}
             testID="roof-pitch"
           />
         </View>

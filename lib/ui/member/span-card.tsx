@@ -7,6 +7,7 @@ import type { MeasuredTo } from './member-draft';
 import { sameCardSlice } from './card-memo';
 import type { FieldErrors } from './member-input';
 import { MeasureField } from './measure-field';
+import { fieldProps } from '@/lib/ui/field-props';
 
 const measuredToChoices = [
   { value: 'framing' as MeasuredTo, label: 'Framing to framing' },
@@ -20,7 +21,7 @@ const measuredToChoices = [
 
 /** The clear span off the tape, what it was measured between, and the bearing at each end. */
 function SpanCardView({ form, errors }: { form: MemberDraftState; errors: FieldErrors }) {
-  const { draft, set, setFlag } = form;
+  const { draft, set } = form;
   return (
     <Card title="Span and bearing">
       <MeasureField
@@ -28,11 +29,7 @@ function SpanCardView({ form, errors }: { form: MemberDraftState; errors: FieldE
         hint={`Between the faces of the supports: 13' 6-3/8", 13-6-3/8, 13 6 3/8, 162 in or 4.1 m.`}
         unit="ft"
         tape
-        value={draft.clearSpan}
-        onChangeText={set('clearSpan')}
-        errors={errors.clearSpan}
-        flag={draft.flags.clearSpan ?? 'default'}
-        onFlag={(f) => setFlag('clearSpan', f)}
+        {...fieldProps(form, errors, 'clearSpan')}
         testID="clear-span"
       />
       <ChoiceGroup
@@ -46,21 +43,13 @@ function SpanCardView({ form, errors }: { form: MemberDraftState; errors: FieldE
         label="Bearing length, left end"
         hint="3 in is two jack studs."
         unit="in"
-        value={draft.bearingLeft}
-        onChangeText={set('bearingLeft')}
-        errors={errors.bearingLeft}
-        flag={draft.flags.bearingLeft ?? 'default'}
-        onFlag={(f) => setFlag('bearingLeft', f)}
+        {...fieldProps(form, errors, 'bearingLeft')}
         testID="bearing-left"
       />
       <MeasureField
         label="Bearing length, right end"
         unit="in"
-        value={draft.bearingRight}
-        onChangeText={set('bearingRight')}
-        errors={errors.bearingRight}
-        flag={draft.flags.bearingRight ?? 'default'}
-        onFlag={(f) => setFlag('bearingRight', f)}
+        {...fieldProps(form, errors, 'bearingRight')}
         testID="bearing-right"
       />
       <CheckRow
@@ -76,22 +65,14 @@ function SpanCardView({ form, errors }: { form: MemberDraftState; errors: FieldE
             label="Second clear span"
             unit="ft"
             tape
-            value={draft.secondSpan}
-            onChangeText={set('secondSpan')}
-            errors={errors.secondSpan}
-            flag={draft.flags.secondSpan ?? 'default'}
-            onFlag={(f) => setFlag('secondSpan', f)}
+            {...fieldProps(form, errors, 'secondSpan')}
             testID="second-span"
           />
           <MeasureField
             label="Bearing on the centre post"
             hint="3-1/2 in is a 4x4 post's face."
             unit="in"
-            value={draft.centreBearing}
-            onChangeText={set('centreBearing')}
-            errors={errors.centreBearing}
-            flag={draft.flags.centreBearing ?? 'default'}
-            onFlag={(f) => setFlag('centreBearing', f)}
+            {...fieldProps(form, errors, 'centreBearing')}
             testID="centre-bearing"
           />
         </>
@@ -100,21 +81,13 @@ function SpanCardView({ form, errors }: { form: MemberDraftState; errors: FieldE
         label="Overhang past the left support (optional)"
         hint="From the support's face to the tip. Load positions are then measured from the tip."
         unit="ft"
-        value={draft.overhangLeft}
-        onChangeText={set('overhangLeft')}
-        errors={errors.overhangLeft}
-        flag={draft.flags.overhangLeft ?? 'default'}
-        onFlag={(f) => setFlag('overhangLeft', f)}
+        {...fieldProps(form, errors, 'overhangLeft')}
         testID="overhang-left"
       />
       <MeasureField
         label="Overhang past the right support (optional)"
         unit="ft"
-        value={draft.overhangRight}
-        onChangeText={set('overhangRight')}
-        errors={errors.overhangRight}
-        flag={draft.flags.overhangRight ?? 'default'}
-        onFlag={(f) => setFlag('overhangRight', f)}
+        {...fieldProps(form, errors, 'overhangRight')}
         testID="overhang-right"
       />
     </Card>

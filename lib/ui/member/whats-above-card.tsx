@@ -14,6 +14,7 @@ import { Button } from '@/lib/ui/button';
 import { CheckRow } from '@/lib/ui/check-row';
 import { ChoiceGroup } from '@/lib/ui/choice-group';
 import { FieldMessages } from '@/lib/ui/field-messages';
+import { fieldProps, type TextKeys } from '@/lib/ui/field-props';
 import { Text } from '@/lib/ui/text';
 import { TextField } from '@/lib/ui/text-field';
 import { loadSourceSchema } from '@/shared/schemas/calc/loads';
@@ -166,14 +167,12 @@ export function WhatsAboveCard({
     onAdd(sources.map((s, i) => ({ ...sourceDraft(loadSourceSchema.parse(s)), note: notes[i] ?? '' })));
     onClose();
   };
-  const span = (key: keyof Form, label: string) => (
+  const span = (key: TextKeys<Form>, label: string) => (
     <View style={styles.cell}>
       <TextField
         label={label}
         unit="ft"
-        value={String(form[key])}
-        onChangeText={(t) => set(key)(t as never)}
-        errors={errors[key]}
+        {...fieldProps({ draft: form, set }, errors, key)}
         testID={`above-${key}`}
         keyboardType="numbers-and-punctuation"
       />

@@ -4,6 +4,7 @@ import { Card } from '@/lib/ui/card';
 import { CheckRow } from '@/lib/ui/check-row';
 import { ChoiceGroup } from '@/lib/ui/choice-group';
 import { FieldMessages } from '@/lib/ui/field-messages';
+import { fieldProps } from '@/lib/ui/field-props';
 import {
   deflectionChoices,
   familyChoices,
@@ -38,6 +39,7 @@ export function SpanTableForm({ draft, errors, onChange }: FormProps) {
     <K extends keyof SpanTableDraft>(key: K) =>
     (value: SpanTableDraft[K]) =>
       onChange({ ...draft, [key]: value });
+  const form = { draft, set };
   const plies = plyCounts(draft.materialId);
   const togglePly = (count: number) =>
     onChange({
@@ -108,9 +110,7 @@ export function SpanTableForm({ draft, errors, onChange }: FormProps) {
           hint="Light-frame floor: 12 psf (HUD RSDG Table 3.2)."
           unit="psf"
           inputMode="decimal"
-          value={draft.deadPsf}
-          onChangeText={set('deadPsf')}
-          errors={errors.deadPsf}
+          {...fieldProps(form, errors, 'deadPsf')}
           testID="span-dead"
         />
         <TextField
@@ -118,18 +118,14 @@ export function SpanTableForm({ draft, errors, onChange }: FormProps) {
           hint="Floor or attic. Dwelling rooms: 40 psf (ASCE 7-16 Table 4.3-1)."
           unit="psf"
           inputMode="decimal"
-          value={draft.livePsf}
-          onChangeText={set('livePsf')}
-          errors={errors.livePsf}
+          {...fieldProps(form, errors, 'livePsf')}
           testID="span-live"
         />
         <TextField
           label="Roof live load"
           unit="psf"
           inputMode="decimal"
-          value={draft.roofLivePsf}
-          onChangeText={set('roofLivePsf')}
-          errors={errors.roofLivePsf}
+          {...fieldProps(form, errors, 'roofLivePsf')}
           testID="span-roof-live"
         />
         <TextField
@@ -137,9 +133,7 @@ export function SpanTableForm({ draft, errors, onChange }: FormProps) {
           hint="The design roof snow, not the ground snow."
           unit="psf"
           inputMode="decimal"
-          value={draft.roofSnowPsf}
-          onChangeText={set('roofSnowPsf')}
-          errors={errors.roofSnowPsf}
+          {...fieldProps(form, errors, 'roofSnowPsf')}
           testID="span-snow"
         />
         <ChoiceGroup
@@ -156,9 +150,7 @@ export function SpanTableForm({ draft, errors, onChange }: FormProps) {
           label="Tributary widths"
           hint={`In feet, with commas between: 4, 8, 12, 16 or 6' 6", 13' 4"`}
           unit="ft"
-          value={draft.widths}
-          onChangeText={set('widths')}
-          errors={errors.widths}
+          {...fieldProps(form, errors, 'widths')}
           testID="span-widths"
         />
         {widths.widthsFt.length && !errors.widths ? (
@@ -170,9 +162,7 @@ export function SpanTableForm({ draft, errors, onChange }: FormProps) {
           label="Bearing length at each end"
           hint={`Two jack studs: 3 in. Empty: ${formatIn(DEFAULT_BEARING_IN)}.`}
           unit="in"
-          value={draft.bearing}
-          onChangeText={set('bearing')}
-          errors={errors.bearing}
+          {...fieldProps(form, errors, 'bearing')}
           testID="span-bearing"
         />
         <PickerField
