@@ -8,14 +8,13 @@ import {
   type SpanState,
 } from '@/lib/calc/analysis/span-state';
 import { supportedBeamState, type SupportedBeam } from '@/lib/calc/analysis/supported-beam-state';
-import { GLULAM_VOLUME_REFERENCE } from '@/lib/calc/factors';
 import { liveLoadPatterns, patternedName, patternFactor } from '@/lib/calc/loads';
-import { materialSpec, type MemberSize } from '@/lib/calc/materials';
+import type { MemberSize } from '@/lib/calc/materials';
 import { LOAD_TYPES, type LoadCombination } from '@/lib/calc/types';
-import type { CheckId } from '@/shared/schemas/calc/member';
 import type { SpanTableLayout } from '@/shared/schemas/calc/span-table';
 import type { SectionFactors } from '@/lib/calc/checks/section-factors';
-import { glulamBendingSpan, type UniformSpanCase, type UniformSpanLimits } from './uniform-span-limits';
+import { spanLimitSolver } from './span-limit-solver';
+import type { UniformSpanCase, UniformSpanLimits } from './uniform-span-limits';
 
 const IN_PER_FT = 12;
 
@@ -158,34 +157,9 @@ export function patternedSpanLimits(
   spanCase: UniformSpanCase,
   unit: PatternedLayout,
 ): UniformSpanLimits {
-  const { wPlfByType: w, selfWeightPlf: sw, preset, support } = spanCase;
-  const ei = section.EPrimePsi * section.ixIn4;
-  const dFt = spanCase.shearAtD ? section.dIn / IN_PER_FT : 0;
-  const perInLb = Math.min(
-    Math.min(section.bIn, support.widthIn) * section.FcPerpPrimePsi,
-    support.plateFcPerpPsi === null ? Infinity : support.widthIn * support.plateFcPerpPsi,
-  );
-  const spec = materialSpec(materialId);
-  const byCheck: Record<CheckId, number> = {
-    bending: Infinity,
-    shear: Infinity,
-    'deflection-live': Infinity,
-    'deflection-total': Infinity,
-    bearing: Infinity,
-  };
-  const combos: Record<CheckId, string> = {
-    bending: '',
-    shear: '',
-    'deflection-live': '',
-    'deflection-total': '',
-    bearing: '',
-  };
-  const take = (id: CheckId, spanFt: number, name: string) => {
-    if (spanFt < byCheck[id]) {
-      byCheck[id] = spanFt;
-      combos[id] = name;
-    }
-  };
+  const { wPlfByType: w, selfWeightPlf: sw, preset } = spanCase;
+  const solver = spanLimitSolver(materialId, size, section, spanCase);
+  const { eiLbIn2: ei, dFt, bearingLbPerIn: perInLb, take } = solver;
   const regionCount = unit.regions.length;
   const states = [unit.whole, ...unit.byRegion];
   const coeffs = states.map(() => 0);
@@ -209,25 +183,7 @@ export function patternedSpanLimits(
     const state = combineStates(unit.scratch, states, coeffs);
     const momentUnit = Math.abs(stateMaxMoment(state).value);
     if (momentUnit <= 0) continue;
-    const FbNoCv = section.FbBasePsi * c.CD;
-    const bendingSpan = (FbPsi: number) => Math.sqrt((section.sxIn3 * FbPsi) / (IN_PER_FT * momentUnit));
-    if (spec.family === 'glulam') {
-      take(
-        'bending',
-        glulamBendingSpan(
-          bendingSpan(FbNoCv),
-          size,
-          GLULAM_VOLUME_REFERENCE.exponent[spec.stressClass.speciesGroup],
-        ),
-        c.name,
-      );
-    } else {
-      take(
-        'bending',
-        bendingSpan(FbNoCv * (section.volumeLesserOfCL ? section.sizeFactor.value : 1)),
-        c.name,
-      );
-    }
+    solver.takeBending(c, (FbPsi) => Math.sqrt((section.sxIn3 * FbPsi) / (IN_PER_FT * momentUnit)));
     const vAllowLb = (section.FvBasePsi * c.CD * section.areaIn2) / 1.5;
     unit.supportsFt.forEach((s, i) => {
       for (const side of ['before', 'after'] as const) {
@@ -257,7 +213,5 @@ export function patternedSpanLimits(
       );
     }
   }
-  let governedBy: CheckId = 'bending';
-  for (const id of Object.keys(byCheck) as CheckId[]) if (byCheck[id] < byCheck[governedBy]) governedBy = id;
-  return { byCheck, spanFt: byCheck[governedBy], governedBy, combination: combos[governedBy] };
+  return solver.result();
 }

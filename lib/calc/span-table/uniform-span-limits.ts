@@ -1,11 +1,11 @@
 import { IN3_PER_FT3 } from '@/lib/calc/analysis/simple-span';
-import { GLULAM_VOLUME_REFERENCE } from '@/lib/calc/factors';
-import { materialSpec, type MemberSize } from '@/lib/calc/materials';
+import type { MemberSize } from '@/lib/calc/materials';
 import { LOAD_TYPES, type LoadCombination, type LoadType } from '@/lib/calc/types';
 import type { CheckId } from '@/shared/schemas/calc/member';
 import type { DeflectionPreset } from '@/lib/calc/checks/deflection-presets';
 import type { SupportSpec } from '@/lib/calc/checks/evaluate-size';
 import type { SectionFactors } from '@/lib/calc/checks/section-factors';
+import { spanLimitSolver } from './span-limit-solver';
 
 const IN_PER_FT = 12;
 
@@ -57,57 +57,13 @@ export function uniformSpanLimits(
   section: SectionFactors,
   spanCase: UniformSpanCase,
 ): UniformSpanLimits {
-  const { wPlfByType: w, selfWeightPlf: sw, preset, support } = spanCase;
-  const ei = section.EPrimePsi * section.ixIn4;
-  const dFt = spanCase.shearAtD ? section.dIn / IN_PER_FT : 0;
-  const perInLb = Math.min(
-    Math.min(section.bIn, support.widthIn) * section.FcPerpPrimePsi,
-    support.plateFcPerpPsi === null ? Infinity : support.widthIn * support.plateFcPerpPsi,
-  );
-  const spec = materialSpec(materialId);
-  const byCheck: Record<CheckId, number> = {
-    bending: Infinity,
-    shear: Infinity,
-    'deflection-live': Infinity,
-    'deflection-total': Infinity,
-    bearing: Infinity,
-  };
-  const combos: Record<CheckId, string> = {
-    bending: '',
-    shear: '',
-    'deflection-live': '',
-    'deflection-total': '',
-    bearing: '',
-  };
-  const take = (id: CheckId, spanFt: number, name: string) => {
-    if (spanFt < byCheck[id]) {
-      byCheck[id] = spanFt;
-      combos[id] = name;
-    }
-  };
+  const { wPlfByType: w, selfWeightPlf: sw, preset } = spanCase;
+  const solver = spanLimitSolver(materialId, size, section, spanCase);
+  const { eiLbIn2: ei, dFt, bearingLbPerIn: perInLb, take } = solver;
   for (const c of spanCase.combinations) {
     const wc = lineLoad(c, w, sw, false);
     if (wc <= 0) continue;
-    const FbNoCv = section.FbBasePsi * c.CD;
-    const bendingSpan = (FbPsi: number) => Math.sqrt((8 * section.sxIn3 * FbPsi) / (IN_PER_FT * wc));
-    if (spec.family === 'glulam') {
-      take(
-        'bending',
-        glulamBendingSpan(
-          bendingSpan(FbNoCv),
-          size,
-          GLULAM_VOLUME_REFERENCE.exponent[spec.stressClass.speciesGroup],
-        ),
-        c.name,
-      );
-    } else {
-      // C_L = 1.0 here, so where C_V and C_L are not combined (LVL with C_V ≤ 1.0) the lesser is C_V.
-      take(
-        'bending',
-        bendingSpan(FbNoCv * (section.volumeLesserOfCL ? section.sizeFactor.value : 1)),
-        c.name,
-      );
-    }
+    solver.takeBending(c, (FbPsi) => Math.sqrt((8 * section.sxIn3 * FbPsi) / (IN_PER_FT * wc)));
     take('shear', 2 * ((section.FvBasePsi * c.CD * section.areaIn2) / (1.5 * wc) + dFt), c.name);
     take('bearing', (2 * perInLb * spanCase.bearingIn) / wc, c.name);
     const wVar = lineLoad(c, w, sw, true);
@@ -118,9 +74,7 @@ export function uniformSpanLimits(
     const wTotal = wc + (spanCase.creepKcr - 1) * sustained;
     take('deflection-total', deflectionSpan(ei, wTotal, preset.totalRatio, spanCase.deflectionCapIn), c.name);
   }
-  let governedBy: CheckId = 'bending';
-  for (const id of Object.keys(byCheck) as CheckId[]) if (byCheck[id] < byCheck[governedBy]) governedBy = id;
-  return { byCheck, spanFt: byCheck[governedBy], governedBy, combination: combos[governedBy] };
+  return solver.result();
 }
 
 /** Largest span with 5wL⁴/384EI ≤ L/ratio (and ≤ cap in), ft; ei in lb·in², w in plf. */
@@ -129,21 +83,4 @@ function deflectionSpan(eiLbIn2: number, wPlf: number, ratio: number, capIn: num
   if (capIn === null) return byRatio;
   const byCap = Math.pow((capIn * 384 * eiLbIn2) / (5 * IN3_PER_FT3 * wPlf), 0.25);
   return Math.min(byRatio, byCap);
-}
-
-/**
- * Largest glulam bending span, ft, in closed form (any layout whose moment grows as the span squared). With C_V = (A/L)^e ≤ 1, A = 21 ft·(12/d)(5.125/b),
- * e = 1/10 western or 1/20 Southern Pine (NDS 2018 eq. 5.3-1): the span without C_V is L₀ = √(8·S·F_b/w);
- * if L₀ ≤ A then C_V = 1 there and L₀ is the span, else w·L²/(8S) = F_b·(A/L)^e gives
- * L = (L₀²·A^e)^(1/(2 + e)).
- * @param spanWithoutCvFt the bending span with C_V = 1, ft; size the glulam size (in); exponent e
- * @example glulamBendingSpan(30, getSize('glulam-24f-v4-df', '5.125x12'), 0.1); // < 30
- * Reference: NDS 2018 §5.3.6, equation 5.3-1.
- */
-export function glulamBendingSpan(spanWithoutCvFt: number, size: MemberSize, exponent: number): number {
-  const ref = GLULAM_VOLUME_REFERENCE;
-  const bIn = Math.min(size.bIn, ref.maxWidthIn);
-  const aFt = ref.lengthFt * (ref.depthIn / size.dIn) * (ref.widthIn / bIn);
-  if (spanWithoutCvFt <= aFt) return spanWithoutCvFt;
-  return Math.pow(spanWithoutCvFt * spanWithoutCvFt * Math.pow(aFt, exponent), 1 / (2 + exponent));
 }
