@@ -48,7 +48,4 @@ function BasicsCardView({ form, errors }: { form: MemberDraftState; errors: Fiel
 }
 
 /** Basics inputs of the member editor; renders again only when its own fields change. */
-export const BasicsCard = memo(
-  BasicsCardView,
-  sameCardSlice(['kind', 'label', 'wall'], ['kind', 'label', 'wall']),
-);
+export const BasicsCard = memo(BasicsCardView, sameCardSlice('basics'));

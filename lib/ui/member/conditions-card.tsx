@@ -176,35 +176,4 @@ function ConditionsCardView({ form, errors }: { form: MemberDraftState; errors: 
 }
 
 /** Conditions inputs of the member editor; renders again only when its own fields change. */
-export const ConditionsCard = memo(
-  ConditionsCardView,
-  sameCardSlice(
-    [
-      'braced',
-      'unbracedLength',
-      'deflectionUse',
-      'deflectionCap',
-      'mount',
-      'joistDepth',
-      'underJoistsHeight',
-      'atticClearance',
-      'supportKind',
-      'supportWidth',
-      'plateMaterialId',
-      'wetService',
-      'temperature',
-      'posts',
-      'flags',
-    ],
-    [
-      'unbracedLength',
-      'deflectionCap',
-      'joistDepth',
-      'underJoistsHeight',
-      'atticClearance',
-      'supportWidth',
-      'temperature',
-      'posts',
-    ],
-  ),
-);
+export const ConditionsCard = memo(ConditionsCardView, sameCardSlice('conditions'));

@@ -137,10 +137,4 @@ const styles = StyleSheet.create({
 });
 
 /** Loads inputs of the member editor; renders again only when its own fields change. */
-export const LoadsCard = memo(
-  LoadsCardView,
-  sameCardSlice(
-    ['edition', 'groundSnow', 'thermal', 'roofPitch', 'sources', 'flags'],
-    ['groundSnow', 'roofPitch', 'sources'],
-  ),
-);
+export const LoadsCard = memo(LoadsCardView, sameCardSlice('loads'));

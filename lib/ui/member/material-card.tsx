@@ -72,7 +72,4 @@ function MaterialCardView({ form, errors }: { form: MemberDraftState; errors: Fi
 }
 
 /** Material inputs of the member editor; renders again only when its own fields change. */
-export const MaterialCard = memo(
-  MaterialCardView,
-  sameCardSlice(['materialId', 'sizeId', 'gradeUnknown', 'selfWeight'], ['materialId', 'sizeId']),
-);
+export const MaterialCard = memo(MaterialCardView, sameCardSlice('material'));

@@ -95,29 +95,4 @@ function SpanCardView({ form, errors }: { form: MemberDraftState; errors: FieldE
 }
 
 /** Span inputs of the member editor; renders again only when its own fields change. */
-export const SpanCard = memo(
-  SpanCardView,
-  sameCardSlice(
-    [
-      'clearSpan',
-      'measuredTo',
-      'bearingLeft',
-      'bearingRight',
-      'overhangLeft',
-      'overhangRight',
-      'continuous',
-      'secondSpan',
-      'centreBearing',
-      'flags',
-    ],
-    [
-      'clearSpan',
-      'bearingLeft',
-      'bearingRight',
-      'overhangLeft',
-      'overhangRight',
-      'secondSpan',
-      'centreBearing',
-    ],
-  ),
-);
+export const SpanCard = memo(SpanCardView, sameCardSlice('span'));
