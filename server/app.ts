@@ -65,6 +65,9 @@ export function createApp(options: AppOptions): Express {
 
   const app = express();
   app.set('trust proxy', options.trustProxy ?? false);
+  // API answers are never cached (no-store), so an ETag would be a hash of every body for nothing.
+  app.set('etag', false);
+  app.disable('x-powered-by');
   app.use(requestId);
   if (options.log) app.use(requestLog(options.log));
   app.use(securityHeaders(production));
