@@ -40,3 +40,29 @@ export const spanTableCase = spanTableInputSchema.parse({
   tributaryWidthsFt: [2, 4, 6, 8, 10, 12, 14, 16],
   materialIds: listMaterials('sawn').map((m) => m.id),
 });
+
+/**
+ * The heaviest span table the API allows: every size of every material × 12 tributary widths under dead
+ * and floor live load (about 20,000 checks, under the engine's per-request cap).
+ */
+export const heaviestSpanTableCase = spanTableInputSchema.parse({
+  edition: 'ASCE 7-22',
+  deadPsf: 12,
+  livePsf: 40,
+  tributaryWidthsFt: [1, 2, 3, 4, 5, 6, 8, 10, 12, 14, 16, 20],
+  materialIds: listMaterials().map((m) => m.id),
+});
+
+/** The heaviest shortlist the API allows: every size of every material under 40 point loads. */
+export const heaviestShortlistCase = shortlistInputSchema.parse({
+  ...memberCase,
+  sources: Array.from({ length: 40 }, (_, i) => ({
+    kind: 'point',
+    pointKind: 'post-above',
+    atFt: 0.25 + i * 0.28,
+    deadLb: 300,
+    liveLb: 400,
+  })),
+  materialIds: listMaterials().map((m) => m.id),
+  sortBy: 'lightest',
+});

@@ -1,34 +1,41 @@
-import { buildShortlist, buildSpanTable, checkMember, listMaterials, listSizes } from '@/lib/calc';
-import { memberCase, shortlistCase, spanTableCase } from './cases';
-import { measure } from './measure';
+import { existsSync } from 'node:fs';
+import { apiFigures } from './api';
+import { engineFigures } from './engine';
+import { printTable, type Figure } from './figures';
+import { webFigures } from './web';
 
-// Engine benchmark (npm run bench). Targets: one member check < 50 µs, a full shortlist < 5 ms (DESIGN.md
-// §9: well under 10 ms), a span table of all sawn sizes × 8 widths < 50 ms (DESIGN.md §9: well under 100 ms).
-// The best round shows the engine's own speed when other processes share the cores.
-const sizeCount = listMaterials().reduce((n, m) => n + listSizes(m.id).length, 0);
-const sawnCount = listMaterials('sawn').reduce((n, m) => n + listSizes(m.id).length, 0);
+// npm run bench: the engine, the API (bench/api.ts) and the first screen (bench/web.ts, when the web app is
+// exported and chromium is there; `-- --no-web` skips it), then one table of every figure and the machine.
+// The browser part is heavy: on a shared machine run it under the browser lock (README).
 
-const member = measure(() => checkMember(memberCase), 31, 500);
-const shortlist = measure(() => buildShortlist(shortlistCase), 31, 5);
-const spanTable = measure(() => buildSpanTable(spanTableCase), 21, 3);
+const CHROMIUM = process.env.CHROMIUM_PATH || '/usr/bin/chromium';
 
-const us = (ms: number) => `${(ms * 1000).toFixed(1)} µs`;
-const ms = (value: number) => `${value.toFixed(2)} ms`;
-const line = (label: string, median: string, best: string, target: string) =>
-  console.log(
-    `${label.padEnd(54)} median ${median.padStart(9)}   best ${best.padStart(9)}   (target ${target})`,
-  );
+async function main(): Promise<void> {
+  const figures: Figure[] = [];
+  const engine = engineFigures();
+  printTable('engine', engine);
+  figures.push(...engine);
 
-line('member check', us(member.medianMs), us(member.minMs), '< 50 µs');
-line(
-  `shortlist, every size of every material (${sizeCount})`,
-  ms(shortlist.medianMs),
-  ms(shortlist.minMs),
-  '< 5 ms',
-);
-line(
-  `span table, all sawn sizes (${sawnCount}) × 8 widths`,
-  ms(spanTable.medianMs),
-  ms(spanTable.minMs),
-  '< 50 ms',
-);
+  const api = await apiFigures();
+  printTable('API', api);
+  figures.push(...api);
+
+  const web = process.argv.includes('--no-web')
+    ? 'skipped (--no-web)'
+    : !existsSync('dist/index.html')
+      ? 'not run: export the web app first (npm run build:web)'
+      : !existsSync(CHROMIUM)
+        ? `not run: no chromium at ${CHROMIUM}`
+        : undefined;
+  if (web)
+    figures.push({ task: 'first screen and member editor (bench/web.ts)', measured: web, target: '—' });
+  else figures.push(...(await webFigures()));
+
+  figures.push({ task: 'design request PDF package', measured: 'not built yet', target: '—' });
+  printTable('Tributary benchmarks (npm run bench)', figures);
+}
+
+main().catch((error: unknown) => {
+  console.error(error);
+  process.exit(1);
+});

@@ -38,7 +38,7 @@ export interface AppOptions {
   devMailKey?: string;
   /** Folder of the exported web app; served with an SPA fallback when it holds an index.html. */
   webDir?: string;
-  /** Request and error log; silent when omitted. */
+  /** Request log (one JSON line per request, 5xx stacks included); silent when omitted. */
   log?: (line: string) => void;
 }
 
@@ -58,7 +58,6 @@ function cacheHeaders(res: Response, path: string): void {
 /** Builds the Express app without listening, so tests drive it with supertest. */
 export function createApp(options: AppOptions): Express {
   const production = options.production ?? false;
-  const log = options.log ?? (() => undefined);
   const sessions = createSessions(options.db, {
     sessionDays: options.sessionDays ?? 30,
     secureCookies: production,
@@ -66,6 +65,9 @@ export function createApp(options: AppOptions): Express {
 
   const app = express();
   app.set('trust proxy', options.trustProxy ?? false);
+  // API answers are never cached (no-store), so an ETag would be a hash of every body for nothing.
+  app.set('etag', false);
+  app.disable('x-powered-by');
   app.use(requestId);
   if (options.log) app.use(requestLog(options.log));
   app.use(securityHeaders(production));
@@ -98,6 +100,6 @@ export function createApp(options: AppOptions): Express {
     });
   }
 
-  app.use(errorHandler(log));
+  app.use(errorHandler());
   return app;
 }

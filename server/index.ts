@@ -9,6 +9,7 @@ import { evaluate } from './api/members/member-evaluation';
 import { createApp } from './app';
 import { loadEnv } from './env';
 import { startFakeSmtp, type FakeSmtp } from './services/fake-smtp';
+import { startCalcPool } from './services/calc-pool';
 import { createSmtpMailer } from './services/mail/mailer';
 import { hashPassword } from './services/password';
 
@@ -54,6 +55,7 @@ async function main(): Promise<void> {
     log: env.NODE_ENV === 'test' ? undefined : log,
   });
 
+  startCalcPool();
   const server = createServer(app);
   server.listen(env.PORT, env.HOST, () => {
     const { port } = server.address() as AddressInfo;

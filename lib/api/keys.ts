@@ -13,9 +13,14 @@ export const keys = {
   member: (orgId: string, memberId: string) => ['member', orgId, memberId] as const,
   invitation: (token: string) => ['invitation', token] as const,
   devMail: () => ['dev-mail'] as const,
+  /** The signed-in person's sessions (browsers). */
+  sessions: () => ['sessions'] as const,
 };
 
-/** True for keys that belong to a firm, so a firm switch or sign-out can drop them. */
+/** True for keys that belong to a firm or a session, so a firm switch or sign-out can drop them. */
 export function isFirmScopedKey(key: unknown): boolean {
-  return Array.isArray(key) && ['me', 'jobs', 'job', 'members', 'job-members', 'member'].includes(key[0]);
+  return (
+    Array.isArray(key) &&
+    ['me', 'jobs', 'job', 'members', 'job-members', 'member', 'sessions'].includes(key[0])
+  );
 }

@@ -6,6 +6,7 @@ import { useFormSubmit } from '@/lib/hooks/use-form-submit';
 import { useSessionActions } from '@/lib/hooks/use-session-actions';
 import { useSubmit } from '@/lib/hooks/use-submit';
 import { spacing } from '@/lib/theme';
+import { PASSWORD_RULE } from '@/shared/schemas/auth';
 import {
   acceptInvitationSchema,
   type AcceptInvitationInput,
@@ -97,7 +98,7 @@ export function AcceptInvitation({ token, preview }: Props) {
       />
       <TextField
         label="Choose a password"
-        hint="At least 10 characters."
+        hint={PASSWORD_RULE}
         testID="invite-password"
         value={password}
         onChangeText={setPassword}

@@ -7,8 +7,9 @@ import { FieldList } from './field-list';
 import { FirmSwitcher } from './firm-switcher';
 import { Notice } from './notice';
 import { orgKindLabel, roleLabel } from './role-label';
+import { SessionsCard } from './sessions-card';
 
-/** Who is signed in, in which firm and role; firm switching and sign-out. */
+/** Who is signed in, in which firm and role; firm switching, the person's sessions and sign-out. */
 export function AccountPanel({ me }: { me: Me }) {
   const { signOut } = useSessionActions();
   const signingOut = useSubmit(signOut);
@@ -19,7 +20,10 @@ export function AccountPanel({ me }: { me: Me }) {
         <FieldList
           items={[
             { label: 'Name', value: me.user.name },
-            { label: 'E-mail', value: me.user.email },
+            {
+              label: 'E-mail',
+              value: me.user.emailVerified ? me.user.email : `${me.user.email} (not confirmed yet)`,
+            },
             { label: 'Firm', value: firm ? `${firm.orgName} (${orgKindLabel(firm.orgKind)})` : 'None' },
             { label: 'Role', value: roleLabel(me.role) },
           ]}
@@ -30,6 +34,7 @@ export function AccountPanel({ me }: { me: Me }) {
           <FirmSwitcher me={me} />
         </Card>
       ) : null}
+      <SessionsCard />
       {signingOut.error ? <Notice tone="error">{signingOut.error.message}</Notice> : null}
       <Button
         label="Sign out"

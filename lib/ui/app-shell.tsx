@@ -8,6 +8,7 @@ import { NavLink } from './nav-link';
 import { isNavItemActive, navItemsForRole } from './nav-items';
 import { roleLabel } from './role-label';
 import { Text } from './text';
+import { UnconfirmedEmailNotice } from './unconfirmed-email-notice';
 import { Wordmark } from './wordmark';
 
 /**
@@ -42,7 +43,10 @@ export function AppShell({ me, children }: { me: Me; children: ReactNode }) {
           </Text>
           <View style={styles.sideLinks}>{links}</View>
         </View>
-        <View style={styles.content}>{children}</View>
+        <View style={styles.content}>
+          <UnconfirmedEmailNotice me={me} />
+          {children}
+        </View>
       </View>
     );
   }
@@ -55,6 +59,7 @@ export function AppShell({ me, children }: { me: Me; children: ReactNode }) {
           {firmLine}
         </Text>
       </View>
+      <UnconfirmedEmailNotice me={me} />
       <View style={styles.content}>{children}</View>
       <View style={[styles.tabBar, { paddingBottom: insets.bottom }]} role="navigation" aria-label="Main">
         {links}

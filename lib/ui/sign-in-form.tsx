@@ -46,6 +46,11 @@ export function SignInForm() {
         secureTextEntry
         onSubmitEditing={submit}
       />
+      <TextLink
+        href={{ pathname: '/forgot-password', params: email.trim() ? { email: email.trim() } : {} }}
+        label="Forgot your password?"
+        testID="sign-in-forgot"
+      />
       <Button label="Sign in" testID="sign-in-submit" busy={busy} onPress={submit} block />
       <View>
         <Text tone="muted">New to Tributary?</Text>

@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { useSessionActions } from '@/lib/hooks/use-session-actions';
 import { useFormSubmit } from '@/lib/hooks/use-form-submit';
 import { spacing } from '@/lib/theme';
-import { signUpSchema, type OrgKind } from '@/shared/schemas/auth';
+import { PASSWORD_RULE, signUpSchema, type OrgKind } from '@/shared/schemas/auth';
 import { Button } from './button';
 import { ChoiceGroup, type Choice } from './choice-group';
 import { FormProblem } from './form-problem';
@@ -59,7 +59,7 @@ export function SignUpForm() {
       />
       <TextField
         label="Password"
-        hint="At least 10 characters."
+        hint={PASSWORD_RULE}
         testID="sign-up-password"
         value={password}
         onChangeText={setPassword}

@@ -2,7 +2,6 @@ import type { ErrorRequestHandler } from 'express';
 import { AppError } from '@/server/app-error';
 import { CalcInputError } from '@/lib/calc/types';
 import type { ApiErrorBody, ApiErrorCode } from '@/shared/errors';
-import { logLine, loggedPath } from './request-log';
 
 const STATUS: Record<ApiErrorCode, number> = {
   bad_request: 400,
@@ -70,18 +69,16 @@ function describe(error: unknown): { status: number; body: ApiErrorBody } {
 }
 
 /**
- * Last handler: answers every error with the shared error body, which names the request id; stack traces
- * of 5xx errors go to the log only, as one JSON line with the same id.
+ * Last handler: answers every error with the shared error body, which names the request id. A 5xx error is
+ * handed to the request log as `res.err` (pino-http's place for it), so its stack goes into that request's
+ * line and never to the client.
  */
-export function errorHandler(log: (message: string) => void): ErrorRequestHandler {
-  return (error, req, res, next) => {
+export function errorHandler(): ErrorRequestHandler {
+  return (error, _req, res, next) => {
     if (res.headersSent) return next(error);
     const { status, body } = describe(error);
     const requestId: string | undefined = res.locals.requestId;
-    if (status >= 500) {
-      const stack = error instanceof Error ? error.stack : String(error);
-      log(logLine('error', requestId ?? '', { method: req.method, path: loggedPath(req), error: stack }));
-    }
+    if (status >= 500) res.err = error instanceof Error ? error : new Error(String(error));
     res.status(status).json(requestId ? { error: { ...body.error, requestId } } : body);
   };
 }

@@ -1,7 +1,6 @@
-import { DrizzleSQLiteAdapter } from '@lucia-auth/adapter-drizzle';
 import { Lucia, TimeSpan } from 'lucia';
 import type { Db } from '@/db/client';
-import { sessions, users } from '@/db/schema';
+import { createSessionAdapter } from './session-adapter';
 
 export const SESSION_COOKIE = 'tributary_session';
 
@@ -10,9 +9,9 @@ export interface SessionOptions {
   secureCookies: boolean;
 }
 
-/** lucia v3 over the Drizzle adapter: sliding expiry of `sessionDays`, httpOnly SameSite=Lax cookie. */
+/** lucia v3 over prepared statements (session-adapter.ts): sliding expiry of `sessionDays`, httpOnly SameSite=Lax cookie. */
 export function createSessions(db: Db, options: SessionOptions) {
-  return new Lucia(new DrizzleSQLiteAdapter(db, sessions, users), {
+  return new Lucia(createSessionAdapter(db), {
     sessionExpiresIn: new TimeSpan(options.sessionDays, 'd'),
     sessionCookie: {
       name: SESSION_COOKIE,

@@ -14,11 +14,15 @@ export const emailSchema = z
   .trim()
   .toLowerCase()
   .pipe(z.email({ message: 'Enter a valid e-mail address' }));
+/** Fewest characters a password may have. */
+export const PASSWORD_MIN_LENGTH = 10;
 export const passwordSchema = z
   .string()
-  .min(10, { message: 'Use at least 10 characters' })
+  .min(PASSWORD_MIN_LENGTH, { message: `Use at least ${PASSWORD_MIN_LENGTH} characters` })
   .max(200, { message: 'Use at most 200 characters' });
 export const PASSWORD_IS_EMAIL = 'Use a password that is not your e-mail address';
+/** The password rule as shown at every field that sets a password; the server checks each part. */
+export const PASSWORD_RULE = `At least ${PASSWORD_MIN_LENGTH} characters; not your e-mail address and not a common password. A few unrelated words make a good one.`;
 
 /** True when the password is the e-mail address or the part before its @, in any case or spacing. */
 export function passwordMatchesEmail(password: string, email: string): boolean {

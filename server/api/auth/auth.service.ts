@@ -6,13 +6,9 @@ import type { Mailer } from '@/server/services/mail/mailer';
 import { enqueueMail } from '@/server/services/mail/outbox.repository';
 import { passwordResetMail } from '@/server/services/mail/password-reset-mail';
 import { verificationMail } from '@/server/services/mail/verification-mail';
+import { refusePassword } from '@/server/services/password-rules';
 import { hashPassword, verifyPassword } from '@/server/services/password';
-import {
-  PASSWORD_IS_EMAIL,
-  passwordMatchesEmail,
-  type SignInInput,
-  type signUpSchema,
-} from '@/shared/schemas/auth';
+import type { SignInInput, signUpSchema } from '@/shared/schemas/auth';
 import type { z } from 'zod';
 import {
   deleteSessionsOf,
@@ -64,6 +60,7 @@ export function createAuthService(deps: { db: Db; mailer: Mailer; appOrigin: str
           email: ['An account with this e-mail already exists'],
         });
       }
+      refusePassword(input.password, { email: input.email, name: input.name });
       const passwordHash = await hashPassword(input.password);
       const created = db.transaction((tx) => {
         const userId = insertUser(tx, { email: input.email, name: input.name, passwordHash });
@@ -137,9 +134,7 @@ export function createAuthService(deps: { db: Db; mailer: Mailer; appOrigin: str
       const found = findOpenToken(db, hashLinkToken(token), 'password-reset', new Date());
       const user = found && findUser(db, found.userId);
       if (!found || !user) throw new AppError('not_found', RESET_GONE);
-      if (passwordMatchesEmail(password, user.email)) {
-        throw new AppError('bad_request', 'Some fields need attention', { password: [PASSWORD_IS_EMAIL] });
-      }
+      refusePassword(password, user);
       const passwordHash = await hashPassword(password);
       db.transaction((tx) => {
         if (!markTokenUsed(tx, found.id, new Date())) throw new AppError('not_found', RESET_GONE);

@@ -15,12 +15,12 @@ export function calcRouter(deps: { calc: CalcService }): Router {
     res.json(deps.calc.check(req.body));
   });
 
-  router.post('/shortlist', validate({ body: shortlistInputSchema }), (req, res) => {
-    res.json(deps.calc.shortlist(req.body));
+  router.post('/shortlist', validate({ body: shortlistInputSchema }), async (req, res) => {
+    res.type('json').send(await deps.calc.shortlist(req.body));
   });
 
-  router.post('/span-table', validate({ body: spanTableInputSchema }), (req, res) => {
-    res.json(deps.calc.spanTable(req.body));
+  router.post('/span-table', validate({ body: spanTableInputSchema }), async (req, res) => {
+    res.type('json').send(await deps.calc.spanTable(req.body));
   });
 
   return router;

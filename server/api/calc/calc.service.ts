@@ -1,12 +1,15 @@
-import { buildShortlist, buildSpanTable, checkMember } from '@/lib/calc';
+import { checkMember } from '@/lib/calc';
+import { runInPool } from '@/server/services/calc-pool';
 import type { MemberCheckResult } from '@/shared/schemas/calc/member';
 import type { MemberCheckRequest } from '@/shared/schemas/calc/requests';
-import type { ShortlistInput, ShortlistResult } from '@/shared/schemas/calc/shortlist';
-import type { SpanTableInput, SpanTableResult } from '@/shared/schemas/calc/span-table';
+import type { ShortlistInput } from '@/shared/schemas/calc/shortlist';
+import type { SpanTableInput } from '@/shared/schemas/calc/span-table';
 
 /**
- * The engine behind the stateless calculation routes: nothing is read or stored. The engine's
- * CalcInputError passes through to the error handler, which answers 400 naming the field.
+ * The engine behind the stateless calculation routes: nothing is read or stored. One member check is
+ * quick and runs here; a shortlist or span table can take a few hundred milliseconds, so it runs in the
+ * worker pool and comes back as JSON text. The engine's CalcInputError reaches the error handler either
+ * way, which answers 400 naming the field.
  */
 export function createCalcService() {
   return {
@@ -15,12 +18,14 @@ export function createCalcService() {
       return checkMember(input, { diagrams });
     },
 
-    shortlist(input: ShortlistInput): ShortlistResult {
-      return buildShortlist(input);
+    /** The shortlist result (ShortlistResult) as JSON text. */
+    shortlist(input: ShortlistInput): Promise<string> {
+      return runInPool('shortlist', input);
     },
 
-    spanTable(input: SpanTableInput): SpanTableResult {
-      return buildSpanTable(input);
+    /** The span table result (SpanTableResult) as JSON text. */
+    spanTable(input: SpanTableInput): Promise<string> {
+      return runInPool('spanTable', input);
     },
   };
 }

@@ -10,7 +10,7 @@ import {
 import { listMemberships } from '@/server/api/me/me.repository';
 import { hashLinkToken } from '@/server/services/link-token';
 import { hashPassword } from '@/server/services/password';
-import { PASSWORD_IS_EMAIL, passwordMatchesEmail } from '@/shared/schemas/auth';
+import { passwordRuleProblem } from '@/server/services/password-rules';
 import type { AcceptInvitationInput, InvitationPreview } from '@/shared/schemas/orgs';
 import { findOpenInvitation, markAccepted } from './invitations.repository';
 
@@ -28,12 +28,15 @@ async function newAccountFields(
   input: AcceptInvitationInput,
   email: string,
 ): Promise<{ name: string; passwordHash: string }> {
-  const passwordIsEmail = input.password !== undefined && passwordMatchesEmail(input.password, email);
-  if (!input.name || !input.password || passwordIsEmail) {
+  const passwordProblem =
+    input.password === undefined
+      ? undefined
+      : passwordRuleProblem(input.password, { email, name: input.name });
+  if (!input.name || !input.password || passwordProblem) {
     const fields: Record<string, string[]> = {};
     if (!input.name) fields.name = ['Enter your name'];
     if (!input.password) fields.password = ['Choose a password'];
-    if (passwordIsEmail) fields.password = [PASSWORD_IS_EMAIL];
+    if (passwordProblem) fields.password = [passwordProblem];
     throw new AppError('bad_request', 'Some fields need attention', fields);
   }
   return { name: input.name, passwordHash: await hashPassword(input.password) };

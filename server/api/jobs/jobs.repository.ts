@@ -1,6 +1,7 @@
 import { and, desc, eq, isNotNull, isNull, sql } from 'drizzle-orm';
 import type { DbOrTx } from '@/db/client';
 import { newId } from '@/db/new-id';
+import { preparedPerDb } from '@/db/prepared';
 import { jobs } from '@/db/schema';
 import type { Job, JobPatch, jobInputSchema } from '@/shared/schemas/jobs';
 import type { z } from 'zod';
@@ -12,26 +13,39 @@ function toJob(row: typeof jobs.$inferSelect): Job {
   return job;
 }
 
-export function listJobs(db: DbOrTx, orgId: string, archived: boolean): Job[] {
-  return (
+const jobsOf = (archived: boolean) =>
+  preparedPerDb((db) =>
     db
       .select()
       .from(jobs)
-      .where(and(eq(jobs.orgId, orgId), archived ? isNotNull(jobs.archivedAt) : isNull(jobs.archivedAt)))
+      .where(
+        and(
+          eq(jobs.orgId, sql.placeholder('orgId')),
+          archived ? isNotNull(jobs.archivedAt) : isNull(jobs.archivedAt),
+        ),
+      )
       // rowid breaks ties between rows written in the same millisecond, keeping insertion order.
       .orderBy(desc(jobs.createdAt), desc(sql`${jobs}.rowid`))
-      .all()
-      .map(toJob)
+      .prepare(),
   );
+const openJobsOf = jobsOf(false);
+const archivedJobsOf = jobsOf(true);
+
+const jobById = preparedPerDb((db) =>
+  db
+    .select()
+    .from(jobs)
+    .where(and(eq(jobs.id, sql.placeholder('jobId')), eq(jobs.orgId, sql.placeholder('orgId'))))
+    .prepare(),
+);
+
+export function listJobs(db: DbOrTx, orgId: string, archived: boolean): Job[] {
+  return (archived ? archivedJobsOf : openJobsOf)(db).all({ orgId }).map(toJob);
 }
 
 /** Only a job of `orgId`: another firm's id reads as missing. */
 export function findJob(db: DbOrTx, orgId: string, jobId: string): Job | undefined {
-  const row = db
-    .select()
-    .from(jobs)
-    .where(and(eq(jobs.id, jobId), eq(jobs.orgId, orgId)))
-    .get();
+  const row = jobById(db).get({ jobId, orgId });
   return row && toJob(row);
 }
 

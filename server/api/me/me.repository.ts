@@ -1,11 +1,11 @@
 import { asc, eq, sql } from 'drizzle-orm';
 import type { DbOrTx } from '@/db/client';
+import { preparedPerDb } from '@/db/prepared';
 import { memberships, organizations, users } from '@/db/schema';
 import type { Membership } from '@/shared/schemas/auth';
 
-/** The user's firms, earliest membership first. */
-export function listMemberships(db: DbOrTx, userId: string): Membership[] {
-  return db
+const membershipsOf = preparedPerDb((db) =>
+  db
     .select({
       orgId: organizations.id,
       orgName: organizations.name,
@@ -14,9 +14,14 @@ export function listMemberships(db: DbOrTx, userId: string): Membership[] {
     })
     .from(memberships)
     .innerJoin(organizations, eq(organizations.id, memberships.orgId))
-    .where(eq(memberships.userId, userId))
+    .where(eq(memberships.userId, sql.placeholder('userId')))
     .orderBy(asc(memberships.createdAt), asc(sql`${memberships}.rowid`))
-    .all();
+    .prepare(),
+);
+
+/** The user's firms, earliest membership first (every signed-in firm request reads this). */
+export function listMemberships(db: DbOrTx, userId: string): Membership[] {
+  return membershipsOf(db).all({ userId });
 }
 
 export function findUser(db: DbOrTx, userId: string) {

@@ -1,6 +1,7 @@
 import { and, asc, eq, getTableColumns, sql } from 'drizzle-orm';
 import type { DbOrTx } from '@/db/client';
 import { newId } from '@/db/new-id';
+import { preparedPerDb } from '@/db/prepared';
 import { members } from '@/db/schema';
 import type { Member, MemberListItem } from '@/shared/schemas/members';
 
@@ -22,26 +23,32 @@ export type MemberFields = Pick<
 const { orgId: _orgId, ...memberColumns } = getTableColumns(members);
 const { input: _input, result: _result, prescriptive: _prescriptive, ...listColumns } = memberColumns;
 
+const membersOfJob = preparedPerDb((db) =>
+  db
+    .select(listColumns)
+    .from(members)
+    .where(and(eq(members.jobId, sql.placeholder('jobId')), eq(members.orgId, sql.placeholder('orgId'))))
+    // rowid breaks ties between rows written in the same millisecond, keeping insertion order.
+    .orderBy(asc(members.createdAt), asc(sql`${members}.rowid`))
+    .prepare(),
+);
+
+const memberById = preparedPerDb((db) =>
+  db
+    .select(memberColumns)
+    .from(members)
+    .where(and(eq(members.id, sql.placeholder('memberId')), eq(members.orgId, sql.placeholder('orgId'))))
+    .prepare(),
+);
+
 /** The job's members in the order they were made, without inputs and results. */
 export function listMembers(db: DbOrTx, orgId: string, jobId: string): MemberListItem[] {
-  return (
-    db
-      .select(listColumns)
-      .from(members)
-      .where(and(eq(members.jobId, jobId), eq(members.orgId, orgId)))
-      // rowid breaks ties between rows written in the same millisecond, keeping insertion order.
-      .orderBy(asc(members.createdAt), asc(sql`${members}.rowid`))
-      .all()
-  );
+  return membersOfJob(db).all({ jobId, orgId });
 }
 
 /** Only a member of `orgId`: another firm's id reads as missing. */
 export function findMember(db: DbOrTx, orgId: string, memberId: string): Member | undefined {
-  return db
-    .select(memberColumns)
-    .from(members)
-    .where(and(eq(members.id, memberId), eq(members.orgId, orgId)))
-    .get();
+  return memberById(db).get({ memberId, orgId });
 }
 
 export function insertMember(
@@ -65,19 +72,24 @@ export function insertMember(
   return member;
 }
 
+/**
+ * Writes a recomputed member over `saved` (read in the same transaction) and answers the member as stored,
+ * built from what was written rather than read back: the result's JSON is not parsed again.
+ */
 export function updateMember(
   db: DbOrTx,
   orgId: string,
-  memberId: string,
+  saved: Member,
   updatedBy: string,
   fields: MemberFields,
 ): Member | undefined {
-  return db
+  const changes = { ...fields, updatedBy, updatedAt: new Date().toISOString() };
+  const { changes: written } = db
     .update(members)
-    .set({ ...fields, updatedBy, updatedAt: new Date().toISOString() })
-    .where(and(eq(members.id, memberId), eq(members.orgId, orgId)))
-    .returning(memberColumns)
-    .get();
+    .set(changes)
+    .where(and(eq(members.id, saved.id), eq(members.orgId, orgId)))
+    .run();
+  return written > 0 ? { ...saved, ...changes } : undefined;
 }
 
 /** True when a member of `orgId` was deleted. */

@@ -59,7 +59,7 @@ export function createMembersService(db: Db) {
           patch.wall ?? saved.wall,
           patch.input ?? saved.input,
         );
-        const member = updateMember(tx, actor.orgId, memberId, actor.userId, fields);
+        const member = updateMember(tx, actor.orgId, saved, actor.userId, fields);
         if (!member) throw notFound('Member');
         recordAudit(tx, actor, {
           action: 'member.update',

@@ -19,6 +19,7 @@ describe('SWR keys', () => {
     expect(isFirmScopedKey(keys.members('a'))).toBe(true);
     expect(isFirmScopedKey(keys.jobMembers('a', 'j1'))).toBe(true);
     expect(isFirmScopedKey(keys.member('a', 'm1'))).toBe(true);
+    expect(isFirmScopedKey(keys.sessions()), 'sessions go with the session').toBe(true);
     expect(isFirmScopedKey(keys.invitation('t'))).toBe(false);
     expect(isFirmScopedKey(keys.devMail())).toBe(false);
     expect(isFirmScopedKey('me')).toBe(false);

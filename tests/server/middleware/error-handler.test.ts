@@ -4,13 +4,15 @@ import { describe, expect, it } from 'vitest';
 import { CalcInputError } from '@/lib/calc/types';
 import { AppError } from '@/server/app-error';
 import { errorHandler } from '@/server/middleware/error-handler';
+import { requestLog } from '@/server/middleware/request-log';
 
 function appThrowing(error: unknown, logged: string[] = []) {
   const app = express();
+  app.use(requestLog((line) => logged.push(line)));
   app.get('/boom', () => {
     throw error;
   });
-  app.use(errorHandler((line) => logged.push(line)));
+  app.use(errorHandler());
   return app;
 }
 
@@ -64,7 +66,10 @@ describe('error handler', () => {
     const res = await request(appThrowing(notAllowed, logged)).get('/boom');
     expect(res.status).toBe(405);
     expect(res.body).toEqual({ error: { code: 'bad_request', message: 'The request could not be read' } });
-    expect(logged).toEqual([]);
+    expect(logged).toHaveLength(1);
+    expect(JSON.parse(logged[0])).toMatchObject({ level: 'warn', status: 405 });
+    expect(logged[0]).not.toContain('internal detail');
+    expect(JSON.parse(logged[0])).not.toHaveProperty('error');
   });
 
   it('keeps a 5xx error with a status a bare 500 and logs it', async () => {
