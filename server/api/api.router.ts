@@ -20,6 +20,10 @@ import { createMembersService } from './members/members.service';
 import { createMeService } from './me/me.service';
 import { orgsRouter } from './orgs/orgs.router';
 import { createOrgsService } from './orgs/orgs.service';
+import { requestInvitationsRouter } from './requests/request-invitations.router';
+import { createRequestInvitationsService } from './requests/request-invitations.service';
+import { jobRequestsRouter, requestsRouter } from './requests/requests.router';
+import { createRequestsService } from './requests/requests.service';
 
 export interface ApiOptions {
   db: Db;
@@ -55,6 +59,13 @@ export function apiRouter(options: ApiOptions): Router {
   const members = { db, members: createMembersService(db) };
   router.use('/jobs/:jobId/members', jobMembersRouter(members));
   router.use('/members', membersRouter(members));
+  const requests = { db, requests: createRequestsService(options) };
+  router.use('/jobs/:jobId/requests', jobRequestsRouter(requests));
+  router.use('/requests', requestsRouter(requests));
+  router.use(
+    '/request-invitations',
+    requestInvitationsRouter({ invitations: createRequestInvitationsService(db), me, sessions }),
+  );
   router.use('/jobs', jobsRouter({ db, jobs: createJobsService(db) }));
   router.use('/calc', calcRouter({ calc: createCalcService() }));
   if (options.devMailKey) router.use('/dev/mail', devMailRouter({ db, key: options.devMailKey }));

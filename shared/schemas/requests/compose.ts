@@ -9,7 +9,11 @@ import { inputFlagSchema } from '@/shared/schemas/calc/loads';
  * Lengths in ft unless the name says in, weights in lb.
  */
 
-const note = (max = 2000) => z.string().trim().max(max, { message: `At most ${max} characters` });
+const note = (max = 2000) =>
+  z
+    .string()
+    .trim()
+    .max(max, { message: `At most ${max} characters` });
 const shortNote = note(300);
 const idSchema = z.string().min(1).max(100);
 

@@ -6,7 +6,11 @@ import { z } from 'zod';
  * items to verify in the field, fee, turnaround and site visit. Lengths in in, fee in US dollars.
  */
 
-const text = (max = 1000) => z.string().trim().max(max, { message: `At most ${max} characters` });
+const text = (max = 1000) =>
+  z
+    .string()
+    .trim()
+    .max(max, { message: `At most ${max} characters` });
 
 /** Wood (sawn, LVL, PSL, glulam), a steel W shape or a flitch beam (steel plate bolted between wood plies). */
 export const designedMaterials = ['sawn', 'lvl', 'psl', 'glulam', 'steel-w', 'flitch'] as const;
@@ -22,7 +26,10 @@ export const DESIGNED_MATERIAL_LABELS: Record<DesignedMaterial, string> = {
   flitch: 'Flitch beam',
 };
 
-const inches = z.number().positive({ message: 'Enter a value above 0' }).max(120, { message: 'At most 120 in' });
+const inches = z
+  .number()
+  .positive({ message: 'Enter a value above 0' })
+  .max(120, { message: 'At most 120 in' });
 
 /** One designed member, answering the request member `memberId` (its id in the snapshot). */
 export const designedMemberSchema = z

@@ -1,5 +1,9 @@
 import { z } from 'zod';
-import { memberCheckInputSchema, memberCheckResultSchema, prescriptiveResultSchema } from '@/shared/schemas/calc/member';
+import {
+  memberCheckInputSchema,
+  memberCheckResultSchema,
+  prescriptiveResultSchema,
+} from '@/shared/schemas/calc/member';
 import { jobInputSchema } from '@/shared/schemas/jobs';
 import { memberKinds } from '@/shared/schemas/calc/member';
 import { memberSummarySchema } from '@/shared/schemas/members';
