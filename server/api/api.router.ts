@@ -4,6 +4,7 @@ import { AppError } from '@/server/app-error';
 import type { RateLimitOptions } from '@/server/middleware/auth-limits';
 import type { Mailer } from '@/server/services/mail/mailer';
 import type { Sessions } from '@/server/services/sessions';
+import type { FileStorage } from '@/server/services/storage/file-storage';
 import { authRouter } from './auth/auth.router';
 import { createAuthService } from './auth/auth.service';
 import { calcRouter } from './calc/calc.router';
@@ -22,12 +23,15 @@ import { orgsRouter } from './orgs/orgs.router';
 import { createOrgsService } from './orgs/orgs.service';
 import { requestInvitationsRouter } from './requests/request-invitations.router';
 import { createRequestInvitationsService } from './requests/request-invitations.service';
+import { attachmentsRouter } from './requests/attachments.router';
+import { createAttachmentsService } from './requests/attachments.service';
 import { jobRequestsRouter, requestsRouter } from './requests/requests.router';
 import { createRequestsService } from './requests/requests.service';
 
 export interface ApiOptions {
   db: Db;
   mailer: Mailer;
+  storage: FileStorage;
   sessions: Sessions;
   appOrigin: string;
   signInLimit: RateLimitOptions;
@@ -61,6 +65,10 @@ export function apiRouter(options: ApiOptions): Router {
   router.use('/members', membersRouter(members));
   const requests = { db, requests: createRequestsService(options) };
   router.use('/jobs/:jobId/requests', jobRequestsRouter(requests));
+  router.use(
+    '/requests/:requestId/attachments',
+    attachmentsRouter({ db, attachments: createAttachmentsService({ db, storage: options.storage }) }),
+  );
   router.use('/requests', requestsRouter(requests));
   router.use(
     '/request-invitations',

@@ -1,7 +1,9 @@
 import { notFound } from '@/server/app-error';
 import type { Role } from '@/shared/schemas/auth';
 import type { RequestSide } from '@/shared/schemas/requests/workflow';
-import type { RequestRow } from './requests.repository';
+import type { DbOrTx } from '@/db/client';
+import { recordAudit } from '@/server/api/audit/audit.repository';
+import { findRequest, type RequestRow } from './requests.repository';
 
 /** The signed-in person as a request route sees them: their active firm and role. */
 export interface RequestViewer {
@@ -23,4 +25,34 @@ export function sideOf(row: RequestRow | undefined, viewer: RequestViewer): Requ
     return 'engineer';
   }
   throw notFound('Design request');
+}
+
+/** The request and the viewer's side of it; anything not theirs is "not found". */
+export function openRequest(
+  db: DbOrTx,
+  viewer: RequestViewer,
+  requestId: string,
+): { row: RequestRow; side: RequestSide } {
+  const row = findRequest(db, requestId);
+  const side = sideOf(row, viewer);
+  return { row: row as RequestRow, side };
+}
+
+/**
+ * One audit event of an action on the request, in the sending firm's log whichever side acted, so the firm
+ * sees the whole story (who: the user; which side: in the detail).
+ */
+export function auditRequest(
+  tx: DbOrTx,
+  viewer: RequestViewer,
+  row: RequestRow,
+  action: string,
+  detail: Record<string, unknown> = {},
+): void {
+  const side: RequestSide = FIRM_ROLES.includes(viewer.role) ? 'firm' : 'engineer';
+  recordAudit(
+    tx,
+    { userId: viewer.userId, orgId: row.orgId },
+    { action, subject: row.id, detail: { side, ...detail } },
+  );
 }

@@ -2,7 +2,6 @@ import type { Db, DbOrTx } from '@/db/client';
 import { newId } from '@/db/new-id';
 import { requestInvitations } from '@/db/schema';
 import { AppError, notFound } from '@/server/app-error';
-import { recordAudit } from '@/server/api/audit/audit.repository';
 import { findUserByEmail } from '@/server/api/auth/auth.repository';
 import { findJob } from '@/server/api/jobs/jobs.repository';
 import { findUser, listMemberships } from '@/server/api/me/me.repository';
@@ -25,13 +24,12 @@ import {
 } from '@/shared/schemas/requests/workflow';
 import { changesBetween } from './request-changes';
 import { describeRequest, toListItem } from './request-detail';
-import { FIRM_ROLES, sideOf, type RequestViewer } from './request-access';
+import { auditRequest, openRequest, type RequestViewer } from './request-access';
 import { buildSnapshot } from './request-snapshot';
 import { assertMay, statusAction } from './request-transitions';
 import {
   claimForMessage,
   findNames,
-  findRequest,
   insertReply,
   insertRequest,
   insertThreadEntry,
@@ -75,26 +73,6 @@ function confirmedEngineer(tx: DbOrTx, email: string): string | null {
 export function createRequestsService(deps: { db: Db; mailer: Mailer; appOrigin: string }) {
   const { db } = deps;
   const link = (row: RequestRow) => `${deps.appOrigin}/requests/${row.id}`;
-
-  /** The request and the viewer's side of it; anything not theirs is "not found". */
-  function open(
-    tx: DbOrTx,
-    viewer: RequestViewer,
-    requestId: string,
-  ): { row: RequestRow; side: RequestSide } {
-    const row = findRequest(tx, requestId);
-    return { row: row as RequestRow, side: sideOf(row, viewer) };
-  }
-
-  function audit(tx: DbOrTx, viewer: RequestViewer, row: RequestRow, action: string, detail = {}) {
-    // Recorded in the sending firm's log whichever side acted, so the firm sees the whole story.
-    const side = FIRM_ROLES.includes(viewer.role) ? 'firm' : 'engineer';
-    recordAudit(
-      tx,
-      { userId: viewer.userId, orgId: row.orgId },
-      { action, subject: row.id, detail: { side, ...detail } },
-    );
-  }
 
   /** Mails the other side of `side` about `news` and marks the request unread for it. */
   function tellOtherSide(tx: DbOrTx, row: RequestRow, side: RequestSide, news: string): RequestRow {
@@ -186,7 +164,7 @@ export function createRequestsService(deps: { db: Db; mailer: Mailer; appOrigin:
     change: (tx: DbOrTx, row: RequestRow, side: RequestSide) => RequestRow,
   ): RequestDetail {
     const detail = db.transaction((tx) => {
-      const { row, side } = open(tx, viewer, requestId);
+      const { row, side } = openRequest(tx, viewer, requestId);
       return describeRequest(tx, change(tx, row, side), side);
     });
     deps.mailer.wake();
@@ -210,7 +188,7 @@ export function createRequestsService(deps: { db: Db; mailer: Mailer; appOrigin:
       return db.transaction((tx) => {
         checkJobAndMembers(tx, viewer.orgId, jobId, body.memberIds);
         const row = insertRequest(tx, { orgId: viewer.orgId, jobId, userId: viewer.userId }, body);
-        audit(tx, viewer, row, 'request.create', { jobId, number: row.number });
+        auditRequest(tx, viewer, row, 'request.create', { jobId, number: row.number });
         return describeRequest(tx, row, 'firm');
       });
     },
@@ -218,14 +196,14 @@ export function createRequestsService(deps: { db: Db; mailer: Mailer; appOrigin:
     /** Opening a request clears the viewer's unread mark. */
     get(viewer: RequestViewer, requestId: string): RequestDetail {
       return db.transaction((tx) => {
-        const { row, side } = open(tx, viewer, requestId);
+        const { row, side } = openRequest(tx, viewer, requestId);
         const seen = row[unreadFlag(side)] ? updateRequest(tx, row.id, { [unreadFlag(side)]: false }) : row;
         return describeRequest(tx, seen, side);
       });
     },
 
     thread(viewer: RequestViewer, requestId: string): ThreadEntry[] {
-      const { row, side } = open(db, viewer, requestId);
+      const { row, side } = openRequest(db, viewer, requestId);
       return describeRequest(db, row, side).thread;
     },
 
@@ -250,7 +228,7 @@ export function createRequestsService(deps: { db: Db; mailer: Mailer; appOrigin:
           ...Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined)),
         };
         checkJobAndMembers(tx, row.orgId, row.jobId, draft.memberIds);
-        audit(tx, viewer, row, 'request.update', { fields: Object.keys(patch) });
+        auditRequest(tx, viewer, row, 'request.update', { fields: Object.keys(patch) });
         return updateRequest(tx, row.id, { draft, engineerEmail: draft.engineerEmail });
       });
     },
@@ -269,7 +247,10 @@ export function createRequestsService(deps: { db: Db; mailer: Mailer; appOrigin:
         });
         event(tx, viewer, sent, side, 'sent');
         mailVersion(tx, sent, viewer.userId);
-        audit(tx, viewer, frozen, 'request.send', { version: sent.version, bound: engineerUserId !== null });
+        auditRequest(tx, viewer, frozen, 'request.send', {
+          version: sent.version,
+          bound: engineerUserId !== null,
+        });
         return sent;
       });
     },
@@ -298,7 +279,9 @@ export function createRequestsService(deps: { db: Db; mailer: Mailer; appOrigin:
           });
         }
         mailVersion(tx, next, viewer.userId);
-        audit(tx, viewer, next, reopening ? 'request.reopen' : 'request.revise', { version: next.version });
+        auditRequest(tx, viewer, next, reopening ? 'request.reopen' : 'request.revise', {
+          version: next.version,
+        });
         return updateRequest(tx, row.id, { engineerUnread: true });
       });
     },
@@ -323,7 +306,7 @@ export function createRequestsService(deps: { db: Db; mailer: Mailer; appOrigin:
           declineReason: change.to === 'declined' ? change.reason : row.declineReason,
         });
         event(tx, viewer, moved, side, change.to, change.reason);
-        audit(tx, viewer, moved, 'request.status', { from: row.status, to: change.to });
+        auditRequest(tx, viewer, moved, 'request.status', { from: row.status, to: change.to });
         return tellOtherSide(
           tx,
           moved,
@@ -352,7 +335,7 @@ export function createRequestsService(deps: { db: Db; mailer: Mailer; appOrigin:
           'fee-quoted',
           `$${quote.feeUsd}, ${quote.turnaroundDays} working days`,
         );
-        audit(tx, viewer, quoted, 'request.fee-quote', {
+        auditRequest(tx, viewer, quoted, 'request.fee-quote', {
           feeUsd: quote.feeUsd,
           turnaroundDays: quote.turnaroundDays,
         });
@@ -372,7 +355,7 @@ export function createRequestsService(deps: { db: Db; mailer: Mailer; appOrigin:
         if (row.feeAcceptedAt) throw new AppError('conflict', 'The fee is accepted already');
         const accepted = updateRequest(tx, row.id, { feeAcceptedAt: new Date().toISOString() });
         event(tx, viewer, accepted, side, 'fee-accepted');
-        audit(tx, viewer, accepted, 'request.fee-accept', { feeUsd: row.feeUsd });
+        auditRequest(tx, viewer, accepted, 'request.fee-accept', { feeUsd: row.feeUsd });
         return tellOtherSide(tx, accepted, side, 'fee accepted: design work can start');
       });
     },
@@ -394,7 +377,10 @@ export function createRequestsService(deps: { db: Db; mailer: Mailer; appOrigin:
           throw new AppError('bad_request', 'Some fields need attention', fields);
         insertReply(tx, { requestId: row.id, version: row.version, reply, userId: viewer.userId });
         event(tx, viewer, row, side, 'replied', reply.note);
-        audit(tx, viewer, row, 'request.reply', { version: row.version, members: reply.members.length });
+        auditRequest(tx, viewer, row, 'request.reply', {
+          version: row.version,
+          members: reply.members.length,
+        });
         return tellOtherSide(tx, row, side, `the engineer replied to version ${row.version}`);
       });
     },
@@ -415,7 +401,7 @@ export function createRequestsService(deps: { db: Db; mailer: Mailer; appOrigin:
             attachmentIds: ['Attach files you uploaded to this request for a message'],
           });
         }
-        audit(tx, viewer, row, 'request.message', { files: message.attachmentIds.length });
+        auditRequest(tx, viewer, row, 'request.message', { files: message.attachmentIds.length });
         return tellOtherSide(
           tx,
           row,

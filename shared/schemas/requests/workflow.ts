@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { photoPlaceSchema } from './snapshot';
 
 /**
  * A design request's states (DESIGN.md §3) and the bodies that move it. The fee is a step inside In review
@@ -83,3 +84,21 @@ export type MessageCreate = z.output<typeof messageCreateSchema>;
 
 /** `GET /api/requests`: optionally one state only. */
 export const requestListQuerySchema = z.object({ state: requestStateSchema.optional() });
+
+/**
+ * The text fields of `POST /api/requests/:requestId/attachments` (multipart, beside the `file` part): what
+ * the file is for, where a photo was taken and its caption. The file name must be a plain name.
+ */
+export const uploadFieldsSchema = z.object({
+  purpose: z.enum(['photo', 'message', 'design']).default('photo'),
+  place: photoPlaceSchema.default('other'),
+  caption: z.string().trim().max(300, { message: 'At most 300 characters' }).default(''),
+});
+export type UploadFields = z.output<typeof uploadFieldsSchema>;
+
+/** A plain file name: no folder parts, no `..`, no control characters, at most 200 characters. */
+export const uploadFileNameSchema = z
+  .string()
+  .min(1, { message: 'The file has no name' })
+  .max(200, { message: 'Use a file name of at most 200 characters' })
+  .refine((name) => !/[\\/]|\.\.|[\p{Cc}]/u.test(name), { message: 'Use a plain file name without folders' });
