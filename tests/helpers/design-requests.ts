@@ -1,5 +1,5 @@
 import request from 'supertest';
-import { SAMPLE_HEADER } from './sample-bodies';
+import { SAMPLE_HEADER, SAMPLE_PNG } from './sample-bodies';
 import { signedUpAgent, type Agent, type TestServer } from './server';
 
 /** A contracting firm with a job and one member, and an engineer with a confirmed account of their own. */
@@ -54,10 +54,7 @@ export async function mailTo(server: TestServer, to: string) {
 }
 
 /** A tiny valid PNG (1 x 1, one grey pixel). */
-export const ONE_PIXEL_PNG = Buffer.from(
-  'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAAAAAA6fptVAAAACklEQVR4nGNoAAAAggCBd81ytgAAAABJRU5ErkJggg==',
-  'base64',
-);
+export const ONE_PIXEL_PNG = SAMPLE_PNG;
 
 export const get = (server: TestServer, path: string, cookie?: string) => {
   const req = request(server.app).get(path);
