@@ -25,6 +25,8 @@ import { requestInvitationsRouter } from './requests/request-invitations.router'
 import { createRequestInvitationsService } from './requests/request-invitations.service';
 import { attachmentsRouter } from './requests/attachments.router';
 import { createAttachmentsService } from './requests/attachments.service';
+import { packageRouter } from './requests/package.router';
+import { createPackageService } from './requests/package.service';
 import { jobRequestsRouter, requestsRouter } from './requests/requests.router';
 import { createRequestsService } from './requests/requests.service';
 
@@ -68,6 +70,10 @@ export function apiRouter(options: ApiOptions): Router {
   router.use(
     '/requests/:requestId/attachments',
     attachmentsRouter({ db, attachments: createAttachmentsService({ db, storage: options.storage }) }),
+  );
+  router.use(
+    '/requests/:requestId',
+    packageRouter({ db, packages: createPackageService({ db, storage: options.storage }) }),
   );
   router.use('/requests', requestsRouter(requests));
   router.use(
