@@ -104,7 +104,8 @@ function loads(writer: PdfWriter, frame: Frame, result: MemberCheckResult): void
   const maxPlf = Math.max(...uniform.map((g) => g.plf), 1);
   let stack = beamY;
   for (const g of uniform) {
-    const h = Math.max(4, (g.plf / maxPlf) * 16);
+    // A band is tall enough for its label, taller by its share of the largest load.
+    const h = 9 + (g.plf / maxPlf) * 8;
     writer.page.drawRectangle({
       x: xAt(frame, g.start),
       y: stack,

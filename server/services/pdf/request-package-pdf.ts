@@ -40,7 +40,7 @@ function cover(w: PdfWriter, pkg: RequestPackage): void {
     ['Adopted code', r.job.adoptedCode],
     [
       'House',
-      `built ${orDash(r.job.yearBuilt)}, ${r.job.stories} stories, ${r.job.roofType} roof at ${r.job.roofPitchIn12} in 12, foundation ${r.job.foundation}`,
+      `built ${orDash(r.job.yearBuilt)}, ${r.job.stories} ${r.job.stories === 1 ? 'story' : 'stories'}, ${r.job.roofType} roof at ${r.job.roofPitchIn12} in 12, foundation ${r.job.foundation}`,
     ],
     [
       'Building width',
@@ -59,7 +59,7 @@ function cover(w: PdfWriter, pkg: RequestPackage): void {
       `${m.summary.sizeLabel} ${m.summary.materialLabel}`,
       m.summary.governingCheck,
       formatNumber(m.summary.governingRatio, 2),
-      m.summary.state,
+      m.summary.state.replace('-', ' '),
       `${formatLb(m.result.reactions.leftLb)} / ${formatLb(m.result.reactions.rightLb)}`,
     ]),
     [0.15, 0.09, 0.24, 0.14, 0.08, 0.13, 0.17],
