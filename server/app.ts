@@ -1,4 +1,5 @@
-import { existsSync } from 'node:fs';
+import { existsSync, mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import compression from 'compression';
 import express, { type Express, type RequestHandler, type Response } from 'express';
@@ -16,10 +17,16 @@ import {
 } from './middleware/auth-limits';
 import type { Mailer } from './services/mail/mailer';
 import { createSessions } from './services/sessions';
+import { createLocalStorage, type FileStorage } from './services/storage/file-storage';
 
 export interface AppOptions {
   db: Db;
   mailer: Mailer;
+  /**
+   * Uploaded files (design request photos and documents). Without one, a fresh folder under the system's
+   * temp folder: for tests and benches, which keep no files; the server passes its STORAGE_DIR.
+   */
+  storage?: FileStorage;
   /** Public origin of the web app: invitation links and the CSRF origin check use it. */
   appOrigin: string;
   production?: boolean;
@@ -84,6 +91,7 @@ export function createApp(options: AppOptions): Express {
     apiRouter({
       db: options.db,
       mailer: options.mailer,
+      storage: options.storage ?? createLocalStorage(mkdtempSync(join(tmpdir(), 'tributary-storage-'))),
       sessions,
       appOrigin: options.appOrigin,
       signInLimit: options.signInLimit ?? DEFAULT_SIGN_IN_LIMIT,

@@ -12,6 +12,7 @@ import { startFakeSmtp, type FakeSmtp } from './services/fake-smtp';
 import { startCalcPool } from './services/calc-pool';
 import { createSmtpMailer } from './services/mail/mailer';
 import { hashPassword } from './services/password';
+import { createLocalStorage } from './services/storage/file-storage';
 
 async function main(): Promise<void> {
   const env = loadEnv();
@@ -46,6 +47,7 @@ async function main(): Promise<void> {
   const app = createApp({
     db: database.db,
     mailer,
+    storage: createLocalStorage(env.STORAGE_DIR),
     appOrigin: env.APP_ORIGIN,
     production,
     sessionDays: env.SESSION_DAYS,

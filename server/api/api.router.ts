@@ -4,6 +4,7 @@ import { AppError } from '@/server/app-error';
 import type { RateLimitOptions } from '@/server/middleware/auth-limits';
 import type { Mailer } from '@/server/services/mail/mailer';
 import type { Sessions } from '@/server/services/sessions';
+import type { FileStorage } from '@/server/services/storage/file-storage';
 import { authRouter } from './auth/auth.router';
 import { createAuthService } from './auth/auth.service';
 import { calcRouter } from './calc/calc.router';
@@ -20,10 +21,19 @@ import { createMembersService } from './members/members.service';
 import { createMeService } from './me/me.service';
 import { orgsRouter } from './orgs/orgs.router';
 import { createOrgsService } from './orgs/orgs.service';
+import { requestInvitationsRouter } from './requests/request-invitations.router';
+import { createRequestInvitationsService } from './requests/request-invitations.service';
+import { attachmentsRouter } from './requests/attachments.router';
+import { createAttachmentsService } from './requests/attachments.service';
+import { packageRouter } from './requests/package.router';
+import { createPackageService } from './requests/package.service';
+import { jobRequestsRouter, requestsRouter } from './requests/requests.router';
+import { createRequestsService } from './requests/requests.service';
 
 export interface ApiOptions {
   db: Db;
   mailer: Mailer;
+  storage: FileStorage;
   sessions: Sessions;
   appOrigin: string;
   signInLimit: RateLimitOptions;
@@ -55,6 +65,21 @@ export function apiRouter(options: ApiOptions): Router {
   const members = { db, members: createMembersService(db) };
   router.use('/jobs/:jobId/members', jobMembersRouter(members));
   router.use('/members', membersRouter(members));
+  const requests = { db, requests: createRequestsService(options) };
+  router.use('/jobs/:jobId/requests', jobRequestsRouter(requests));
+  router.use(
+    '/requests/:requestId/attachments',
+    attachmentsRouter({ db, attachments: createAttachmentsService({ db, storage: options.storage }) }),
+  );
+  router.use(
+    '/requests/:requestId',
+    packageRouter({ db, packages: createPackageService({ db, storage: options.storage }) }),
+  );
+  router.use('/requests', requestsRouter(requests));
+  router.use(
+    '/request-invitations',
+    requestInvitationsRouter({ invitations: createRequestInvitationsService(db), me, sessions }),
+  );
   router.use('/jobs', jobsRouter({ db, jobs: createJobsService(db) }));
   router.use('/calc', calcRouter({ calc: createCalcService() }));
   if (options.devMailKey) router.use('/dev/mail', devMailRouter({ db, key: options.devMailKey }));

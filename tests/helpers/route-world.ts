@@ -4,7 +4,7 @@ import { createApp } from '@/server/app';
 import type { Mailer } from '@/server/services/mail/mailer';
 import type { Role } from '@/shared/schemas/auth';
 import { listApiRoutes, routeParams, type ApiRoute } from './api-routes';
-import { sampleBody } from './sample-bodies';
+import { SAMPLE_HEADER, SAMPLE_PNG, SAMPLE_UPLOADS, sampleBody } from './sample-bodies';
 import { confirmEmail, signUpBody, type TestServer } from './server';
 
 const noMail: Mailer = {
@@ -70,6 +70,12 @@ export async function createRouteWorld(server: TestServer) {
     const req = request(server.app)[route.method](path);
     if (options.cookie) req.set('Cookie', options.cookie);
     if (options.orgId) req.set('X-Org-Id', options.orgId);
+    const upload = SAMPLE_UPLOADS.get(routeLabel(route));
+    if (upload && !('body' in options)) {
+      const { fields, fileName } = upload();
+      for (const [key, value] of Object.entries(fields)) req.field(key, value);
+      return req.attach('file', SAMPLE_PNG, fileName);
+    }
     const body =
       'body' in options
         ? options.body
@@ -87,7 +93,30 @@ export async function createRouteWorld(server: TestServer) {
    * `<thing>Id` is the id the route `POST …/<thing>s` answers, made with its sample body (its own
    * parameters made the same way). A parameter that fits neither needs a line here.
    */
-  async function makeParam(name: string, owner: Person): Promise<string> {
+  async function makeParam(name: string, owner: Person, made: Record<string, string> = {}): Promise<string> {
+    if (name === 'requestId') return makeDesignRequest(owner);
+    if (name === 'attachmentId') {
+      const requestId = made.requestId ?? (await makeDesignRequest(owner));
+      const res = await request(server.app)
+        .post(`/api/requests/${requestId}/attachments`)
+        .set('Cookie', owner.cookie)
+        .field('caption', `World photo ${(tokenCount += 1)}`)
+        .attach('file', SAMPLE_PNG, 'world.png')
+        .expect(201);
+      return res.body.id;
+    }
+    if (name === 'requestToken') {
+      const email = `world-engineer-${(tokenCount += 1)}-${owner.firm.toLowerCase()}@example.test`;
+      const requestId = await makeDesignRequest(owner, email);
+      await request(server.app)
+        .post(`/api/requests/${requestId}/send`)
+        .set('Cookie', owner.cookie)
+        .expect(200);
+      const mail = (await server.capturedMail()).find((m) => m.to === email);
+      const token = mail?.text.match(/\/request-invite\/([\w-]+)/)?.[1];
+      if (!token) throw new Error(`no request invitation mailed to ${email}`);
+      return token;
+    }
     if (name === 'token') {
       const email = `world-token-${(tokenCount += 1)}-${owner.firm.toLowerCase()}@example.test`;
       await invite(owner, email, 'estimator');
@@ -127,8 +156,31 @@ export async function createRouteWorld(server: TestServer) {
 
   async function makeParams(route: ApiRoute, owner: Person): Promise<Record<string, string>> {
     const params: Record<string, string> = {};
-    for (const name of routeParams(route.path)) params[name] = await makeParam(name, owner);
+    for (const name of routeParams(route.path)) params[name] = await makeParam(name, owner, params);
     return params;
+  }
+
+  /**
+   * A Draft design request of a new job of `owner`'s firm with one member, ready to send to `engineerEmail`
+   * (by default an address nobody in the world has, so the world's engineer is never addressed).
+   */
+  async function makeDesignRequest(owner: Person, engineerEmail?: string): Promise<string> {
+    const as = <T extends request.Test>(req: T) => req.set('Cookie', owner.cookie);
+    const job = await as(request(server.app).post('/api/jobs')).send({
+      name: `Request job ${owner.firm}-${(tokenCount += 1)}`,
+    });
+    const member = await as(request(server.app).post(`/api/jobs/${job.body.id}/members`)).send({
+      label: `Request member ${owner.firm}-${tokenCount}`,
+      input: SAMPLE_HEADER,
+    });
+    const res = await as(request(server.app).post(`/api/jobs/${job.body.id}/requests`)).send({
+      memberIds: [member.body.id],
+      engineerEmail: engineerEmail ?? `outside-engineer-${tokenCount}@example.test`,
+      jurisdiction: { state: 'PA' },
+    });
+    if (res.status !== 201) throw new Error(`a design request could not be made: ${res.text}`);
+    if (owner.firm === 'B') firmBMarkers.push(job.body.id, job.body.name, member.body.id, res.body.id);
+    return res.body.id;
   }
 
   async function join(owner: Person, name: string, role: Role): Promise<Person> {

@@ -12,6 +12,15 @@ import { spanTableInputSchema } from '@/shared/schemas/calc/span-table';
 import { jobInputSchema, jobPatchSchema } from '@/shared/schemas/jobs';
 import { memberCreateSchema, memberPatchSchema } from '@/shared/schemas/members';
 import { acceptInvitationSchema, createInvitationSchema } from '@/shared/schemas/orgs';
+import { requestComposeSchema, requestPatchSchema } from '@/shared/schemas/requests/compose';
+import { engineerReplySchema } from '@/shared/schemas/requests/reply';
+import { acceptRequestInvitationSchema } from '@/shared/schemas/requests/views';
+import {
+  feeQuoteSchema,
+  messageCreateSchema,
+  revisionSchema,
+  statusChangeSchema,
+} from '@/shared/schemas/requests/workflow';
 import { signUpBody } from './server';
 
 /** Invented demo header: 2-ply 2x10 Douglas Fir-Larch No.2 over 6 ft, under 13 ft of roof and 6 ft of ceiling. */
@@ -65,6 +74,39 @@ export const SAMPLE_BODIES = new Map<z.ZodType, () => unknown>([
       tributaryWidthsFt: [4, 8],
       materialIds: ['sawn-douglas-fir-larch-no2'],
       plies: [2],
+    }),
+  ],
+  [requestComposeSchema, () => ({ questions: `Sample question ${unique()}` })],
+  [requestPatchSchema, () => ({ questions: `Patched question ${unique()}` })],
+  [revisionSchema, () => ({ note: `Revised ${unique()}` })],
+  [statusChangeSchema, () => ({ to: 'in-review' })],
+  [feeQuoteSchema, () => ({ feeUsd: 500, turnaroundDays: 5 })],
+  [
+    engineerReplySchema,
+    () => ({
+      members: [{ memberId: 'sample-member', material: 'lvl', designation: '2-ply 1-3/4 x 9-1/4 LVL' }],
+    }),
+  ],
+  [messageCreateSchema, () => ({ body: `Sample message ${unique()}` })],
+  [
+    acceptRequestInvitationSchema,
+    () => ({ name: 'Invited Engineer', password: 'a long enough password', firmName: 'Sample Structural' }),
+  ],
+]);
+
+/** A tiny valid PNG (1 x 1, one grey pixel). */
+export const SAMPLE_PNG = Buffer.from(
+  'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAAAAAA6fptVAAAACklEQVR4nGNoAAAAggCBd81ytgAAAABJRU5ErkJggg==',
+  'base64',
+);
+
+/** Multipart routes (no JSON body schema): the fields and the file the access matrix sends them. */
+export const SAMPLE_UPLOADS = new Map<string, () => { fields: Record<string, string>; fileName: string }>([
+  [
+    'POST /api/requests/:requestId/attachments',
+    () => ({
+      fields: { place: 'attic-over-wall', caption: `Sample photo ${unique()}` },
+      fileName: 'sample.png',
     }),
   ],
 ]);

@@ -1,3 +1,6 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import type { Express } from 'express';
 import request from 'supertest';
 import { openDatabase, type Db } from '@/db/client';
@@ -6,6 +9,7 @@ import { createApp, type AppOptions } from '@/server/app';
 import { listCapturedMail } from '@/server/api/dev-mail/dev-mail.repository';
 import { startFakeSmtp, type FakeSmtp } from '@/server/services/fake-smtp';
 import { createSmtpMailer, type Mailer, type RetryPolicy } from '@/server/services/mail/mailer';
+import { createLocalStorage } from '@/server/services/storage/file-storage';
 import type { CapturedMail, CapturedMailList } from '@/shared/schemas/mail';
 import type { SignUpInput } from '@/shared/schemas/auth';
 
@@ -21,6 +25,8 @@ export interface TestServer {
   db: Db;
   smtp: FakeSmtp;
   mailer: Mailer;
+  /** The folder the app's file storage writes uploads to (removed on close). */
+  storageDir: string;
   /** What the fake SMTP server received, newest first, once the outbox has nothing left to deliver now. */
   capturedMail(): Promise<CapturedMail[]>;
   close(): Promise<void>;
@@ -39,9 +45,11 @@ export async function createTestServer(options: Partial<AppOptions> = {}): Promi
     { host: smtp.host, port: smtp.port, from: 'test@tributary.test' },
     { retry: TEST_RETRY, pollMs: 25, log: options.log },
   );
+  const storageDir = mkdtempSync(join(tmpdir(), 'tributary-test-storage-'));
   const app = createApp({
     db: database.db,
     mailer,
+    storage: createLocalStorage(storageDir),
     appOrigin: TEST_APP_ORIGIN,
     devMailKey: TEST_DEV_MAIL_KEY,
     // Suites sign up many people from one address; the sign-up limit has its own tests.
@@ -53,6 +61,7 @@ export async function createTestServer(options: Partial<AppOptions> = {}): Promi
     db: database.db,
     smtp,
     mailer,
+    storageDir,
     async capturedMail() {
       await mailer.idle();
       return listCapturedMail(database.db, 1000);
@@ -61,6 +70,7 @@ export async function createTestServer(options: Partial<AppOptions> = {}): Promi
       await mailer.close();
       await smtp.close();
       database.close();
+      rmSync(storageDir, { recursive: true, force: true });
     },
   };
 }

@@ -12,7 +12,11 @@ import { createTestServer, type TestServer } from '@/tests/helpers/server';
  */
 
 type Rule =
-  { kind: 'public' } | { kind: 'signed-in' } | { kind: 'firm'; roles: Role[] } | { kind: 'dev-mail-key' };
+  | { kind: 'public' }
+  | { kind: 'signed-in' }
+  | { kind: 'firm'; roles: Role[] }
+  | { kind: 'dev-mail-key' }
+  | { kind: 'request' };
 
 const CONTRACTING: Role[] = ['owner', 'contractor', 'estimator'];
 
@@ -27,7 +31,24 @@ const PUBLIC = new Set([
   'POST /api/auth/verify-email/:verifyToken',
   'GET /api/invitations/:token',
   'POST /api/invitations/:token/accept',
+  'GET /api/request-invitations/:requestToken',
+  'POST /api/request-invitations/:requestToken/accept',
 ]);
+
+/**
+ * Design request routes (`request` rule): open to every role at the door, the service decides by the
+ * viewer's side. On a fresh Draft of firm A, its roles get a 2xx, or here the answer the Draft's state or
+ * the firm's side gives (409: not in this state; 403: the engineer's to do). An engineer the request is not
+ * addressed to gets 404 on every route with a request id, and their own (empty) inbox.
+ */
+const REQUEST_FIRM_ANSWER: Record<string, 403 | 409> = {
+  'POST /api/requests/:requestId/revisions': 409,
+  'POST /api/requests/:requestId/status': 409,
+  'POST /api/requests/:requestId/fee': 403,
+  'POST /api/requests/:requestId/fee/accept': 409,
+  'POST /api/requests/:requestId/reply': 403,
+  'POST /api/requests/:requestId/messages': 409,
+};
 
 /** Areas by path: a route is in an area when its path is the area's or lies below it. */
 const AREAS: [area: string, rule: Rule][] = [
@@ -40,6 +61,7 @@ const AREAS: [area: string, rule: Rule][] = [
   ['/api/jobs', { kind: 'firm', roles: CONTRACTING }],
   ['/api/members', { kind: 'firm', roles: CONTRACTING }],
   ['/api/dev/mail', { kind: 'dev-mail-key' }],
+  ['/api/requests', { kind: 'request' }],
 ];
 
 /** Routes that end the caller's sessions: each try gets a session of its own, and a new one after. */
@@ -67,8 +89,10 @@ const firmA = ['owner', 'contractor', 'estimator'] as const;
 function expectSafe(res: request.Response, what: string) {
   expect(res.status, `${what}: ${res.text}`).toBeLessThan(500);
   expect(res.headers['cache-control'], what).toBe('no-store');
+  // A file download (an image) has no text: its bytes are read as Latin-1 so a leaked name still shows.
+  const text = res.text ?? (Buffer.isBuffer(res.body) ? res.body.toString('latin1') : '');
   for (const marker of world.firmBMarkers)
-    expect(res.text, `${what} leaks firm B's ${marker}`).not.toContain(marker);
+    expect(text, `${what} leaks firm B's ${marker}`).not.toContain(marker);
 }
 
 describe('the route list comes from the router', () => {
@@ -96,7 +120,9 @@ describe.each(routes.map((route) => [label(route), route] as const))('%s', (_lab
     const params = await world.makeParams(route, world.people.owner);
     const res = await world.send(route, params);
     expectSafe(res, 'signed out');
-    if (rule.kind === 'signed-in' || rule.kind === 'firm') expect(res.status).toBe(401);
+    if (rule.kind === 'signed-in' || rule.kind === 'firm' || rule.kind === 'request') {
+      expect(res.status).toBe(401);
+    }
     if (rule.kind === 'dev-mail-key') expect(res.status).toBe(404);
   });
 
@@ -115,10 +141,45 @@ describe.each(routes.map((route) => [label(route), route] as const))('%s', (_lab
       if (rule.roles.includes(person.role)) expect(res.status, res.text).toBeLessThan(300);
       else expect(res.status, res.text).toBe(403);
     }
+    if (rule.kind === 'request') expectRequestAnswer(res, person.role);
   });
 
-  if (rule.kind !== 'firm') return;
   const hasIds = routeParams(route.path).length > 0;
+
+  /** What firm A's roles and the engineer get on a fresh Draft of firm A (see REQUEST_FIRM_ANSWER). */
+  function expectRequestAnswer(res: request.Response, role: Role) {
+    if (role === 'engineer') {
+      if (hasIds) expect(res.status, res.text).toBe(404);
+      else expect(res.status, res.text).toBeLessThan(300);
+      return;
+    }
+    const answer = REQUEST_FIRM_ANSWER[label(route)];
+    if (answer) expect(res.status, res.text).toBe(answer);
+    else expect(res.status, res.text).toBeLessThan(300);
+  }
+
+  if (rule.kind === 'request') {
+    it.each(firmA)("as firm A's %s naming firm B in X-Org-Id: its own firm's answer", async (who) => {
+      const person = world.people[who];
+      const res = await world.send(route, await world.makeParams(route, world.people.owner), {
+        cookie: person.cookie,
+        orgId: world.firmBOrgId,
+      });
+      expectSafe(res, `${who} naming firm B`);
+      expectRequestAnswer(res, person.role);
+    });
+    if (!hasIds) return;
+    it.each(firmA)("as firm A's %s with firm B's ids: 404", async (who) => {
+      const res = await world.send(route, await world.makeParams(route, world.people.ownerOfB), {
+        cookie: world.people[who].cookie,
+      });
+      expectSafe(res, `${who} with firm B's ids`);
+      expect(res.status, res.text).toBe(404);
+    });
+    return;
+  }
+
+  if (rule.kind !== 'firm') return;
 
   it.each(firmA)("as firm A's %s naming firm B in X-Org-Id: its own firm, never B's", async (who) => {
     const person = world.people[who];

@@ -35,6 +35,7 @@ const PUBLIC_BODY_ROUTES = new Set([
   'POST /api/auth/sign-up',
   'POST /api/auth/sign-in',
   'POST /api/invitations/:token/accept',
+  'POST /api/request-invitations/:requestToken/accept',
 ]);
 
 async function caller(route: ApiRoute) {

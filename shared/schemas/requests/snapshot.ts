@@ -1,0 +1,93 @@
+import { z } from 'zod';
+import {
+  memberCheckInputSchema,
+  memberCheckResultSchema,
+  prescriptiveResultSchema,
+} from '@/shared/schemas/calc/member';
+import { jobInputSchema } from '@/shared/schemas/jobs';
+import { memberKinds } from '@/shared/schemas/calc/member';
+import { memberSummarySchema } from '@/shared/schemas/members';
+import { requestComposeSchema } from './compose';
+
+/** Where a photo was taken (DESIGN.md §7). */
+export const photoPlaces = [
+  'attic-over-wall',
+  'ridge',
+  'joist-laps',
+  'below-wall',
+  'roofline',
+  'grade-stamp',
+  'other',
+] as const;
+export const photoPlaceSchema = z.enum(photoPlaces);
+export type PhotoPlace = z.infer<typeof photoPlaceSchema>;
+
+export const PHOTO_PLACE_LABELS: Record<PhotoPlace, string> = {
+  'attic-over-wall': 'Attic over the wall',
+  ridge: 'Ridge',
+  'joist-laps': 'Joist laps',
+  'below-wall': 'Below the wall',
+  roofline: 'Roofline',
+  'grade-stamp': 'Grade stamp',
+  other: 'Other',
+};
+
+/** A file of the request as the snapshot lists it (the bytes stay in storage, found by id). */
+export const snapshotFileSchema = z.object({
+  id: z.string(),
+  place: photoPlaceSchema,
+  caption: z.string(),
+  fileName: z.string(),
+  mimeType: z.string(),
+  sizeBytes: z.number().int(),
+  sha256: z.string(),
+});
+export type SnapshotFile = z.infer<typeof snapshotFileSchema>;
+
+/** A member as it was when the version was sent: its inputs with their flags and the server's result. */
+export const snapshotMemberSchema = z.object({
+  id: z.string(),
+  kind: z.enum(memberKinds),
+  label: z.string(),
+  wall: z.string(),
+  input: memberCheckInputSchema,
+  summary: memberSummarySchema,
+  result: memberCheckResultSchema,
+  prescriptive: prescriptiveResultSchema.nullable(),
+  engineVersion: z.string(),
+});
+export type SnapshotMember = z.infer<typeof snapshotMemberSchema>;
+
+const compose = requestComposeSchema.shape;
+
+/**
+ * One sent version of a request, frozen when it was sent and never changed after: the job, the members
+ * with their inputs, flags and results, what the contractor composed, and the file list.
+ */
+export const requestSnapshotSchema = z.object({
+  number: z.number().int().min(1),
+  version: z.number().int().min(1),
+  sentAt: z.string(),
+  firm: z.object({ name: z.string() }),
+  contractor: z.object({ name: z.string(), email: z.string() }),
+  engineerEmail: z.string(),
+  job: jobInputSchema.extend({ id: z.string() }),
+  jurisdiction: compose.jurisdiction.unwrap(),
+  conditions: compose.conditions.unwrap(),
+  constraints: compose.constraints.unwrap(),
+  phoneBack: compose.phoneBack.unwrap(),
+  questions: z.string(),
+  members: z.array(snapshotMemberSchema).min(1),
+  /** lib/calc ENGINE_VERSION of the server that froze the snapshot. */
+  engineVersion: z.string(),
+  files: z.array(snapshotFileSchema),
+});
+export type RequestSnapshot = z.infer<typeof requestSnapshotSchema>;
+
+/** One line of what changed between two versions: a dotted path with the value before and after. */
+export const changeLineSchema = z.object({
+  path: z.string(),
+  before: z.union([z.string(), z.number(), z.boolean(), z.null()]),
+  after: z.union([z.string(), z.number(), z.boolean(), z.null()]),
+});
+export type ChangeLine = z.infer<typeof changeLineSchema>;
