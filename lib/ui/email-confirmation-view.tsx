@@ -50,7 +50,7 @@ export function EmailConfirmationView({ token }: { token: string }) {
   return (
     <AuthFrame title="E-mail confirmed">
       <Notice tone="success" title="Your e-mail address is confirmed" testID="email-confirmed">
-        You can now invite people to your firm.
+        Nothing in Tributary waits on it any more.
       </Notice>
       <LinkButton href="/" label="Continue to Tributary" testID="email-confirmed-continue" block />
     </AuthFrame>

@@ -14,7 +14,9 @@ export function UnconfirmedEmailNotice({ me }: { me: Me }) {
         <Icon name="mail" color={colors.warning} />
         <Text variant="caption" style={styles.text}>
           <Text variant="label">Confirm your e-mail address. </Text>
-          {`Follow the link we sent to ${me.user.email}. Until then you can look around but cannot invite anyone.`}
+          {me.role === 'owner'
+            ? 'Follow the link we mailed you. Until then you can look around but cannot invite anyone.'
+            : 'Follow the link we mailed you. Until then some actions wait for it.'}
         </Text>
       </View>
       <ResendConfirmation email={me.user.email} compact />

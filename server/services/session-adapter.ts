@@ -11,6 +11,12 @@ function toDatabaseSession({ id, userId, expiresAt, ...attributes }: SessionRow)
 
 const unixSeconds = (date: Date) => Math.floor(date.getTime() / 1000);
 
+/** Prepares on first use, so an app can be built over a database not migrated yet (route listings do). */
+function once<T>(build: () => T): () => T {
+  let statement: T | undefined;
+  return () => (statement ??= build());
+}
+
 /**
  * lucia's storage over the sessions and users tables, with every statement built and prepared once
  * (drizzle `.prepare()`): a signed-in request reads its session and user in one prepared join instead of
@@ -18,60 +24,74 @@ const unixSeconds = (date: Date) => Math.floor(date.getTime() / 1000);
  * lucia hands on are read, never the password hash.
  */
 export function createSessionAdapter(db: Db): Adapter {
-  const sessionAndUser = db
-    .select({
-      session: sessions,
-      user: { id: users.id, email: users.email, name: users.name, emailVerifiedAt: users.emailVerifiedAt },
-    })
-    .from(sessions)
-    .innerJoin(users, eq(users.id, sessions.userId))
-    .where(eq(sessions.id, sql.placeholder('id')))
-    .prepare();
-  const userSessions = db
-    .select()
-    .from(sessions)
-    .where(eq(sessions.userId, sql.placeholder('userId')))
-    .prepare();
-  const insertSession = db
-    .insert(sessions)
-    .values({
-      id: sql.placeholder('id'),
-      userId: sql.placeholder('userId'),
-      expiresAt: sql.placeholder('expiresAt'),
-      createdAt: sql.placeholder('createdAt'),
-      userAgent: sql.placeholder('userAgent'),
-    })
-    .prepare();
-  const updateExpiry = db
-    .update(sessions)
-    .set({ expiresAt: sql.placeholder('expiresAt') as unknown as number })
-    .where(eq(sessions.id, sql.placeholder('id')))
-    .prepare();
-  const deleteOne = db
-    .delete(sessions)
-    .where(eq(sessions.id, sql.placeholder('id')))
-    .prepare();
-  const deleteOfUser = db
-    .delete(sessions)
-    .where(eq(sessions.userId, sql.placeholder('userId')))
-    .prepare();
-  const deleteExpired = db
-    .delete(sessions)
-    .where(lte(sessions.expiresAt, sql.placeholder('now')))
-    .prepare();
+  const sessionAndUser = once(() =>
+    db
+      .select({
+        session: sessions,
+        user: { id: users.id, email: users.email, name: users.name, emailVerifiedAt: users.emailVerifiedAt },
+      })
+      .from(sessions)
+      .innerJoin(users, eq(users.id, sessions.userId))
+      .where(eq(sessions.id, sql.placeholder('id')))
+      .prepare(),
+  );
+  const userSessions = once(() =>
+    db
+      .select()
+      .from(sessions)
+      .where(eq(sessions.userId, sql.placeholder('userId')))
+      .prepare(),
+  );
+  const insertSession = once(() =>
+    db
+      .insert(sessions)
+      .values({
+        id: sql.placeholder('id'),
+        userId: sql.placeholder('userId'),
+        expiresAt: sql.placeholder('expiresAt'),
+        createdAt: sql.placeholder('createdAt'),
+        userAgent: sql.placeholder('userAgent'),
+      })
+      .prepare(),
+  );
+  const updateExpiry = once(() =>
+    db
+      .update(sessions)
+      .set({ expiresAt: sql.placeholder('expiresAt') as unknown as number })
+      .where(eq(sessions.id, sql.placeholder('id')))
+      .prepare(),
+  );
+  const deleteOne = once(() =>
+    db
+      .delete(sessions)
+      .where(eq(sessions.id, sql.placeholder('id')))
+      .prepare(),
+  );
+  const deleteOfUser = once(() =>
+    db
+      .delete(sessions)
+      .where(eq(sessions.userId, sql.placeholder('userId')))
+      .prepare(),
+  );
+  const deleteExpired = once(() =>
+    db
+      .delete(sessions)
+      .where(lte(sessions.expiresAt, sql.placeholder('now')))
+      .prepare(),
+  );
 
   return {
     async getSessionAndUser(id): Promise<[DatabaseSession | null, DatabaseUser | null]> {
-      const row = sessionAndUser.get({ id });
+      const row = sessionAndUser().get({ id });
       if (!row) return [null, null];
       const { id: userId, ...attributes } = row.user;
       return [toDatabaseSession(row.session), { id: userId, attributes }];
     },
     async getUserSessions(userId) {
-      return userSessions.all({ userId }).map(toDatabaseSession);
+      return userSessions().all({ userId }).map(toDatabaseSession);
     },
     async setSession(session) {
-      insertSession.run({
+      insertSession().run({
         id: session.id,
         userId: session.userId,
         expiresAt: unixSeconds(session.expiresAt),
@@ -80,16 +100,16 @@ export function createSessionAdapter(db: Db): Adapter {
       });
     },
     async updateSessionExpiration(id, expiresAt) {
-      updateExpiry.run({ id, expiresAt: unixSeconds(expiresAt) });
+      updateExpiry().run({ id, expiresAt: unixSeconds(expiresAt) });
     },
     async deleteSession(id) {
-      deleteOne.run({ id });
+      deleteOne().run({ id });
     },
     async deleteUserSessions(userId) {
-      deleteOfUser.run({ userId });
+      deleteOfUser().run({ userId });
     },
     async deleteExpiredSessions() {
-      deleteExpired.run({ now: unixSeconds(new Date()) });
+      deleteExpired().run({ now: unixSeconds(new Date()) });
     },
   };
 }

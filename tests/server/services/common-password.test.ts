@@ -1,3 +1,5 @@
+import { readFileSync, readdirSync } from 'node:fs';
+import { join } from 'node:path';
 import { dictionary } from '@zxcvbn-ts/language-common';
 import { describe, expect, it } from 'vitest';
 import { PASSWORD_IS_COMMON, isCommonPassword } from '@/server/services/common-password';
@@ -61,5 +63,20 @@ describe('passwordRuleProblem', () => {
     expect(passwordRuleProblem('janedoe2024', person)).toBe(PASSWORD_IS_COMMON);
     expect(passwordRuleProblem('JaneDoe1990', person)).toBe(PASSWORD_IS_COMMON);
     expect(passwordRuleProblem('janedoe2024', { email: 'pat@example.test', name: 'Pat' })).toBeUndefined();
+  });
+});
+
+describe('placement', () => {
+  it('stays out of the client: nothing under app/, lib/ or shared/ imports the check or its dictionary', () => {
+    const clientFiles = ['app', 'lib', 'shared'].flatMap((dir) =>
+      readdirSync(dir, { recursive: true, encoding: 'utf8' })
+        .filter((file) => /\.tsx?$/.test(file))
+        .map((file) => join(dir, file)),
+    );
+    expect(clientFiles.length).toBeGreaterThan(50);
+    const importers = clientFiles.filter((file) =>
+      /@zxcvbn-ts|services\/common-password|services\/password-rules/.test(readFileSync(file, 'utf8')),
+    );
+    expect(importers).toEqual([]);
   });
 });
