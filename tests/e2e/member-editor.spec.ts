@@ -168,6 +168,7 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
       try {
         await signInAsContractor(page);
         await openJob(page, 'Ranch');
+        await page.getByTestId('member-row').first().waitFor(); // the demo members, loaded before counting
         const membersBefore = await page.getByTestId('member-row').count();
         await page.getByTestId('add-beam').click();
         await page.getByTestId('clear-span').fill('twelve');
@@ -189,6 +190,7 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         expect(page.url()).toContain('/members/new');
         await page.goBack();
         await page.getByTestId('job-members').waitFor();
+        await page.getByTestId('member-row').first().waitFor();
         expect(await page.getByTestId('member-row').count()).toBe(membersBefore);
       } finally {
         await close();

@@ -89,7 +89,8 @@ export function sameCardSlice<P extends CardProps>(card: CardName) {
   return (a: P, b: P): boolean => {
     if (a.form.set !== b.form.set) return false;
     if (keys.some((k) => a.form.draft[k] !== b.form.draft[k])) return false;
-    if (errorSlice(a.errors, errorPrefixes) !== errorSlice(b.errors, errorPrefixes)) return false;
+    if (a.errors !== b.errors && errorSlice(a.errors, errorPrefixes) !== errorSlice(b.errors, errorPrefixes))
+      return false;
     return (Object.keys(a) as (keyof P)[]).every((k) => k === 'form' || k === 'errors' || a[k] === b[k]);
   };
 }

@@ -14,6 +14,7 @@ import { BasicsCard } from './basics-card';
 import { ConditionsCard } from './conditions-card';
 import { draftFromInput } from './draft-from-input';
 import { FramingCard } from './framing-card';
+import { jsonEqual } from '@/lib/ui/json-equal';
 import { liveCheck } from './live-check';
 import { LoadsCard } from './loads-card';
 import { MaterialCard } from './material-card';
@@ -77,7 +78,8 @@ export function MemberEditor({ job, member, kind, storageKey, onSave, justSaved 
     justSaved ? savedStatus : null,
   );
   const [busy, setBusy] = useState(false);
-  const savedJson = useRef(member ? JSON.stringify(initial) : '');
+  /** The draft as last saved (null for a member not saved yet): "dirty" compares with it. */
+  const savedDraft = useRef<MemberDraft | null>(member ? initial : null);
   const scroll = useRef<ScrollView>(null);
   const latestDraft = useRef(form.draft);
   const resultY = useRef(0);
@@ -85,21 +87,31 @@ export function MemberEditor({ job, member, kind, storageKey, onSave, justSaved 
   const contentWidth = width >= layout.wideBreakpoint ? width - layout.sideNavWidth : width;
   const twoPane = contentWidth >= TWO_PANE_MIN;
 
-  const dirty = JSON.stringify(form.draft) !== savedJson.current;
+  const dirty = savedDraft.current === null || !jsonEqual(form.draft, savedDraft.current);
   const showSaved = member && !dirty;
   const result = showSaved ? member.result : live.ok ? live.result : null;
   const prescriptive = showSaved ? member.prescriptive : live.ok ? live.prescriptive : null;
-  const errors = { ...visibleErrors(live.ok ? {} : live.errors, attempted), ...serverErrors };
-  const differs =
-    showSaved && live.ok && JSON.stringify(live.result) !== JSON.stringify(member.result)
-      ? `This device computes a different result from the one saved (engine ${member.engineVersion} on the server). The server's saved result is shown.`
-      : null;
+  // One errors object per change of what it is made of, so the memoised cards compare it by identity.
+  const errors = useMemo(
+    () => ({ ...visibleErrors(live.ok ? {} : live.errors, attempted), ...serverErrors }),
+    [live, attempted, serverErrors],
+  );
+  // Compared once per new check or saved member, not on every keystroke's render.
+  const differs = useMemo(
+    () =>
+      showSaved && live.ok && !jsonEqual(live.result, member.result)
+        ? `This device computes a different result from the one saved (engine ${member.engineVersion} on the server). The server's saved result is shown.`
+        : null,
+    [showSaved, live, member],
+  );
 
   const save = async (draft: MemberDraft = form.draft) => {
     setAttempted(true);
     setStatus(null);
     const reading = readMemberDraft(draft, job);
-    if (Object.keys(reading.errors).length > 0 || !liveCheck(draft, job).ok) {
+    // The live check already ran on this very draft unless the person typed since (or a size was just chosen).
+    const checked = draft === deferred ? live : liveCheck(draft, job);
+    if (Object.keys(reading.errors).length > 0 || !checked.ok) {
       setStatus({ tone: 'error', text: 'Nothing was saved: fix the fields marked below.' });
       return;
     }
@@ -108,7 +120,7 @@ export function MemberEditor({ job, member, kind, storageKey, onSave, justSaved 
     setBusy(false);
     if (outcome.ok) {
       setServerErrors({});
-      savedJson.current = JSON.stringify(draft);
+      savedDraft.current = draft;
       form.forget();
       setStatus(savedStatus);
     } else {

@@ -33,7 +33,8 @@ export default function JobPage() {
 
   if (editing) {
     return (
-      <Screen title={`Edit ${job.name}`} narrow>
+      // Keys apart, so the page opens at its top after a save (where the members checked again are named).
+      <Screen key="edit" title={`Edit ${job.name}`} narrow>
         <JobForm
           initial={jobToDraft(job)}
           submitLabel="Save changes"
@@ -49,6 +50,7 @@ export default function JobPage() {
 
   return (
     <Screen
+      key="view"
       title={job.name}
       actions={
         <Button
