@@ -84,7 +84,7 @@ export function recomputeJobMembers(tx: DbOrTx, actor: Actor, before: Job, after
       const message = `${member.label} can't be checked with this value: ${error.message}`;
       throw new AppError('bad_request', message, { [taken.fields[0]]: [message] });
     }
-    updateMember(tx, actor.orgId, member.id, actor.userId, fields);
+    updateMember(tx, actor.orgId, member, actor.userId, fields);
     recordAudit(tx, actor, {
       action: 'member.recompute',
       subject: member.id,
