@@ -5,3 +5,6 @@ export * from './mail-outbox';
 export * from './members';
 export * from './organizations';
 export * from './users';
+export * from './bearing-screens';
+export * from './job-checklist';
+export * from './shoring-plans';
