@@ -19,6 +19,12 @@ import { jobMembersRouter, membersRouter } from './members/members.router';
 import { createMembersService } from './members/members.service';
 import { createMeService } from './me/me.service';
 import { orgsRouter } from './orgs/orgs.router';
+import { jobChecklistRouter, jobProgressRouter } from './checklist/checklist.router';
+import { createChecklistService } from './checklist/checklist.service';
+import { jobScreensRouter, screensRouter } from './screens/screens.router';
+import { createScreensService } from './screens/screens.service';
+import { memberShoringRouter } from './shoring/shoring.router';
+import { createShoringService } from './shoring/shoring.service';
 import { createOrgsService } from './orgs/orgs.service';
 
 export interface ApiOptions {
@@ -54,6 +60,13 @@ export function apiRouter(options: ApiOptions): Router {
   router.use('/invitations', invitationsRouter({ invitations: createInvitationsService(db), me, sessions }));
   const members = { db, members: createMembersService(db) };
   router.use('/jobs/:jobId/members', jobMembersRouter(members));
+  const screens = { db, screens: createScreensService(db) };
+  router.use('/jobs/:jobId/screens', jobScreensRouter(screens));
+  router.use('/screens', screensRouter(screens));
+  const checklist = { db, checklist: createChecklistService(db) };
+  router.use('/jobs/:jobId/checklist', jobChecklistRouter(checklist));
+  router.use('/job-progress', jobProgressRouter(checklist));
+  router.use('/members/:memberId/shoring', memberShoringRouter({ db, shoring: createShoringService(db) }));
   router.use('/members', membersRouter(members));
   router.use('/jobs', jobsRouter({ db, jobs: createJobsService(db) }));
   router.use('/calc', calcRouter({ calc: createCalcService() }));

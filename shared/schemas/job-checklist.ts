@@ -97,8 +97,10 @@ export const checklistItemSchema = z.object({
   detail: z.string(),
   state: checklistStateSchema,
   note: z.string(),
-  /** Raised by the job itself (the year built, an engineer-required screen): why. Empty when not raised. */
-  raisedBecause: z.string(),
+  /** Raised by the job itself: lead-safe by the year built, the engineer's design by a screen. */
+  raised: z.boolean(),
+  /** Why the item starts where it does (the year built, the screens), in words; empty for plain items. */
+  because: z.string(),
   /** Who set it and when; null while nobody has. */
   updatedBy: z.string().nullable(),
   updatedByName: z.string().nullable(),

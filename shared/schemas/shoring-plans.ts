@@ -48,28 +48,31 @@ export const shoringPlanBodySchema = z
 export type ShoringPlanBody = z.infer<typeof shoringPlanBodySchema>;
 export type ShoringPlanBodyInput = z.input<typeof shoringPlanBodySchema>;
 
-const lookOfWall = z.looseObject({
+const lookOfWall = z.object({
   side: z.enum(['A', 'B']),
   loadPlf: z.number(),
-  check: z.looseObject({
+  check: z.object({
     loadPerStudLb: z.number(),
     capacityPerStudLb: z.number(),
     ratio: z.number(),
     pass: z.boolean(),
     layoutSpacingIn: z.number().nullable(),
   }),
-  standing: z.looseObject({
+  standing: z.object({
     verdict: z.enum(['spread-load', 'check-floor-below', 'not-acceptable']),
     summary: z.string(),
     actions: z.array(z.string()),
   }),
 });
 
-/** What the server stored: the engine's plan, the takeoff or the shores per wall, and the sequence. */
+/**
+ * What the server stored: the engine's plan, the takeoff or the shores per wall, and the sequence. The
+ * stored JSON holds the engine's whole plan; a client reading it keeps the fields named here.
+ */
 export const shoringResultSchema = z.object({
   pass: z.boolean(),
   wallLengthFt: z.number(),
-  plan: z.looseObject({
+  plan: z.object({
     caution: z.string(),
     walls: z.array(lookOfWall),
     warnings: z.array(z.string()),
@@ -79,18 +82,21 @@ export const shoringResultSchema = z.object({
   }),
   takeoff: z
     .array(
-      z.looseObject({
+      z.object({
         side: z.enum(['A', 'B']),
+        spacingIn: z.number(),
         studCount: z.number(),
         studLengthIn: z.number(),
+        studStock: z.object({ label: z.string(), count: z.number() }),
         plates: z.number(),
         plateLengthIn: z.number(),
+        plateStock: z.object({ label: z.string(), count: z.number() }),
       }),
     )
     .nullable(),
   shores: z
     .array(
-      z.looseObject({
+      z.object({
         side: z.enum(['A', 'B']),
         count: z.number(),
         spacingFt: z.number(),
