@@ -11,11 +11,32 @@ export const keys = {
   /** A job's structural members: headers and beams (structural-members.ts). */
   jobMembers: (orgId: string, jobId: string) => ['job-members', orgId, jobId] as const,
   member: (orgId: string, memberId: string) => ['member', orgId, memberId] as const,
+  /** A job's bearing screens and its engineer-needed mark (bearing-screens.ts). */
+  jobScreens: (orgId: string, jobId: string) => ['job-screens', orgId, jobId] as const,
+  screen: (orgId: string, screenId: string) => ['screen', orgId, screenId] as const,
+  checklist: (orgId: string, jobId: string) => ['checklist', orgId, jobId] as const,
+  jobProgress: (orgId: string) => ['job-progress', orgId] as const,
+  shoring: (orgId: string, memberId: string) => ['shoring', orgId, memberId] as const,
   invitation: (token: string) => ['invitation', token] as const,
   devMail: () => ['dev-mail'] as const,
 };
 
 /** True for keys that belong to a firm, so a firm switch or sign-out can drop them. */
 export function isFirmScopedKey(key: unknown): boolean {
-  return Array.isArray(key) && ['me', 'jobs', 'job', 'members', 'job-members', 'member'].includes(key[0]);
+  return (
+    Array.isArray(key) &&
+    [
+      'me',
+      'jobs',
+      'job',
+      'members',
+      'job-members',
+      'member',
+      'job-screens',
+      'screen',
+      'checklist',
+      'job-progress',
+      'shoring',
+    ].includes(key[0])
+  );
 }
