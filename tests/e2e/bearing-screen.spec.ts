@@ -77,7 +77,7 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         await shot(page, `${name}-screen-question`);
         await page.goBack();
         await screenWall(page, 'Hall / bedroom', 'no');
-        await page.getByTestId('screen-outcome').getByText('Likely nonbearing').waitFor();
+        await page.getByTestId('screen-outcome').getByText('Likely nonbearing', { exact: true }).waitFor();
         await page
           .getByTestId('nonbearing-rule')
           .getByText(/single flat 2x4 header is allowed/)
@@ -88,6 +88,8 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
           .waitFor();
         await page.getByTestId('caution-note').waitFor();
         await shot(page, `${name}-screen-nonbearing`);
+        await page.getByTestId('nonbearing-framing-list').scrollIntoViewIfNeeded();
+        await shot(page, `${name}-screen-nonbearing-framing`);
       } finally {
         await close();
       }
@@ -99,7 +101,7 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         await signInAsContractor(page);
         await openJob(page, 'Bungalow');
         await screenWall(page, 'Living / dining', 'yes');
-        await page.getByTestId('screen-outcome').getByText('Engineer required').waitFor();
+        await page.getByTestId('screen-outcome').getByText('Engineer required', { exact: true }).waitFor();
         await page
           .getByTestId('screen-reasons')
           .getByText(/Roof thrust/)
@@ -110,6 +112,8 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
           .getByText(/cutting those joists/)
           .waitFor();
         await shot(page, `${name}-screen-engineer`);
+        await page.getByTestId('screen-reasons').scrollIntoViewIfNeeded();
+        await shot(page, `${name}-screen-engineer-reasons`);
         await page.getByText('Back to the job').click();
         await page
           .getByTestId('job-engineer-needed')
@@ -152,6 +156,8 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
           .getByText(/plate along the joists/)
           .waitFor();
         await page.getByTestId('shoring-result').getByText('Plan does not hold').waitFor();
+        await page.getByTestId('standing-A').scrollIntoViewIfNeeded();
+        await shot(page, `${name}-shoring-not-acceptable`);
         await page.getByTestId('shoring-stands-on-floor-framing-perpendicular').click();
         await page.getByTestId('shoring-save').click();
         await page
@@ -167,6 +173,7 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
           .getByTestId('caution-note')
           .getByText(/shoring itself may need/)
           .waitFor();
+        await page.getByTestId('shoring-wall-A').scrollIntoViewIfNeeded();
         await shot(page, `${name}-shoring`);
       } finally {
         await close();

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import Svg, { Line, Path, Rect, Text as SvgText } from 'react-native-svg';
-import { colors } from '@/lib/theme';
+import { colors, fonts } from '@/lib/theme';
 import type { ScreenQuestionId } from '@/shared/schemas/bearing-screen-answers';
 
 const W = 240;
@@ -34,7 +34,7 @@ const rafters = (
   </>
 );
 const label = (x: number, y: number, text: string) => (
-  <SvgText x={x} y={y} fontSize={11} fill={mark} fontWeight="bold" textAnchor="middle">
+  <SvgText x={x} y={y} fontSize={11} fill={mark} fontFamily={fonts.semibold} textAnchor="middle">
     {text}
   </SvgText>
 );

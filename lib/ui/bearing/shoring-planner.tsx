@@ -15,12 +15,20 @@ import type { ShoringSurface } from '@/shared/schemas/calc/shoring';
 import type { ShoringRecord } from '@/shared/schemas/shoring-plans';
 import { ShoringResult } from './shoring-result';
 
-const SURFACES: { value: ShoringSurface; label: string }[] = [
-  { value: 'floor-framing-perpendicular', label: 'Floor framing, plate across the joists' },
-  { value: 'floor-framing-parallel', label: 'Floor framing, plate along the joists' },
-  { value: 'slab-on-grade', label: 'Slab on grade' },
-  { value: 'basement-slab', label: 'Basement slab' },
-  { value: 'ground', label: 'Bare ground' },
+const SURFACES: { value: ShoringSurface; label: string; description: string }[] = [
+  {
+    value: 'floor-framing-perpendicular',
+    label: 'Floor, across the joists',
+    description: 'The bottom plate crosses the floor joists below',
+  },
+  {
+    value: 'floor-framing-parallel',
+    label: 'Floor, along the joists',
+    description: 'The bottom plate runs on one joist or between them',
+  },
+  { value: 'slab-on-grade', label: 'Slab on grade', description: 'Concrete on the ground' },
+  { value: 'basement-slab', label: 'Basement slab', description: 'Usually a slab on fill, not a footing' },
+  { value: 'ground', label: 'Bare ground', description: 'A crawl space or outside' },
 ];
 
 type Form = {

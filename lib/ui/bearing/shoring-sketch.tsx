@@ -1,5 +1,5 @@
 import Svg, { Line, Path, Rect, Text as SvgText } from 'react-native-svg';
-import { colors } from '@/lib/theme';
+import { colors, fonts } from '@/lib/theme';
 
 const W = 320;
 const H = 170;
@@ -25,7 +25,7 @@ export function ShoringSketch({ bothSides, setbackFt }: { bothSides: boolean; se
       <Line x1={x - 14} y1={44} x2={x + 14} y2={44} stroke={colors.accent} strokeWidth={4} />
       <Line x1={x - 14} y1={140} x2={x + 14} y2={140} stroke={colors.accent} strokeWidth={4} />
       <Line x1={x + 6} y1={60} x2={x + 26} y2={140} stroke={colors.accent} strokeWidth={2} />
-      <SvgText x={x} y={160} fontSize={11} fill={colors.ink} textAnchor="middle" fontWeight="bold">
+      <SvgText x={x} y={160} fontSize={11} fill={colors.ink} textAnchor="middle" fontFamily={fonts.semibold}>
         {name}
       </SvgText>
     </>
@@ -39,7 +39,7 @@ export function ShoringSketch({ bothSides, setbackFt }: { bothSides: boolean; se
       aria-label="Section sketch of the temporary walls"
     >
       <Line x1={8} y1={36} x2={W - 8} y2={36} stroke={colors.lineStrong} strokeWidth={10} />
-      <SvgText x={24} y={22} fontSize={11} fill={colors.ink}>
+      <SvgText x={24} y={22} fontSize={11} fill={colors.ink} fontFamily={fonts.regular}>
         joists above
       </SvgText>
       <Rect
@@ -52,14 +52,21 @@ export function ShoringSketch({ bothSides, setbackFt }: { bothSides: boolean; se
         strokeDasharray="5 4"
         strokeWidth={2}
       />
-      <SvgText x={mid} y={160} fontSize={11} fill={colors.ink} textAnchor="middle">
+      <SvgText x={mid} y={160} fontSize={11} fill={colors.ink} textAnchor="middle" fontFamily={fonts.regular}>
         wall out
       </SvgText>
       <Line x1={0} y1={144} x2={W} y2={144} stroke={colors.lineStrong} strokeWidth={3} />
       {temp(mid - offset, 'wall A')}
       {bothSides ? temp(mid + offset, 'wall B') : null}
       <Path d={`M${mid - offset} 108 L${mid} 108`} stroke={colors.inkMuted} strokeWidth={1} />
-      <SvgText x={mid - offset / 2} y={104} fontSize={10} fill={colors.inkMuted} textAnchor="middle">
+      <SvgText
+        x={mid - offset / 2}
+        y={104}
+        fontSize={10}
+        fill={colors.inkMuted}
+        textAnchor="middle"
+        fontFamily={fonts.regular}
+      >
         {`${setbackFt} ft`}
       </SvgText>
     </Svg>
