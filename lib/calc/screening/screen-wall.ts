@@ -23,7 +23,7 @@ export interface ScreenLookAt {
 
 export interface ScreenResult {
   outcome: BearingScreenOutcome;
-  /** One sentence for the outcome. */
+  /** One sentence for the outcome, shown under its name. */
   headline: string;
   /** Every reason, the deciding ones first. */
   reasons: ScreenReason[];
@@ -118,12 +118,11 @@ function notSeenWhy(answers: ScreenAnswers, id: ScreenQuestionId): string | null
 }
 
 const HEADLINES: Record<BearingScreenOutcome, string> = {
-  'engineer-required':
-    'Engineer required: what this wall carries or holds together needs a licensed engineer’s design.',
-  'likely-bearing': 'Likely bearing: treat the wall as carrying load and size the header or beam for it.',
+  'engineer-required': 'What this wall carries or holds together needs a licensed engineer’s design.',
+  'likely-bearing': 'Treat the wall as carrying load and size the header or beam for it.',
   'likely-nonbearing':
-    'Likely nonbearing: every deciding answer was seen and none points to load. Confirm as you open the wall.',
-  'cant-tell': 'Can’t tell yet: open an inspection hole and look at the places listed.',
+    'Every deciding answer was seen and none points to load. Confirm as you open the wall.',
+  'cant-tell': 'Open an inspection hole and look at the places listed before you decide.',
 };
 
 /**
