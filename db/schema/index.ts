@@ -6,3 +6,6 @@ export * from './members';
 export * from './organizations';
 export * from './users';
 export * from './design-requests';
+export * from './bearing-screens';
+export * from './job-checklist';
+export * from './shoring-plans';

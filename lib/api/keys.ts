@@ -11,6 +11,12 @@ export const keys = {
   /** A job's structural members: headers and beams (structural-members.ts). */
   jobMembers: (orgId: string, jobId: string) => ['job-members', orgId, jobId] as const,
   member: (orgId: string, memberId: string) => ['member', orgId, memberId] as const,
+  /** A job's bearing screens and its engineer-needed mark (bearing-screens.ts). */
+  jobScreens: (orgId: string, jobId: string) => ['job-screens', orgId, jobId] as const,
+  screen: (orgId: string, screenId: string) => ['screen', orgId, screenId] as const,
+  checklist: (orgId: string, jobId: string) => ['checklist', orgId, jobId] as const,
+  jobProgress: (orgId: string) => ['job-progress', orgId] as const,
+  shoring: (orgId: string, memberId: string) => ['shoring', orgId, memberId] as const,
   invitation: (token: string) => ['invitation', token] as const,
   devMail: () => ['dev-mail'] as const,
   /** The signed-in person's sessions (browsers). */
@@ -21,6 +27,19 @@ export const keys = {
 export function isFirmScopedKey(key: unknown): boolean {
   return (
     Array.isArray(key) &&
-    ['me', 'jobs', 'job', 'members', 'job-members', 'member', 'sessions'].includes(key[0])
+    [
+      'me',
+      'jobs',
+      'job',
+      'members',
+      'job-members',
+      'member',
+      'job-screens',
+      'screen',
+      'checklist',
+      'job-progress',
+      'shoring',
+      'sessions',
+    ].includes(key[0])
   );
 }

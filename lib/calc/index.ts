@@ -22,4 +22,5 @@ export * from './nonbearing';
 export * from './shortlist';
 export * from './span-table';
 export * from './prescriptive';
+export * from './screening';
 export * from './version';

@@ -1,13 +1,15 @@
 import { Link } from 'expo-router';
 import { Pressable, StyleSheet, View } from 'react-native';
+import type { JobProgressList } from '@/shared/schemas/job-checklist';
 import type { Job } from '@/shared/schemas/jobs';
 import { colors, layout, radii, spacing } from '@/lib/theme';
 import { Icon } from './icon';
+import { progressText } from './bearing/progress-text';
 import { yearBuiltLabel } from './job-labels';
 import { Text } from './text';
 
-/** One job in the list: name, address, year built and load standard; opens the job. */
-export function JobRow({ job }: { job: Job }) {
+/** One job in the list: name, address, year built, load standard and checklist progress; opens the job. */
+export function JobRow({ job, progress }: { job: Job; progress?: JobProgressList['jobs'][number] }) {
   return (
     <Link href={{ pathname: '/jobs/[jobId]', params: { jobId: job.id } }} asChild>
       <Pressable
@@ -27,6 +29,12 @@ export function JobRow({ job }: { job: Job }) {
               <Text variant="caption" tone="muted">
                 {yearBuiltLabel(job)} · {job.loadStandard}
               </Text>
+              {progress ? (
+                <Text variant="caption" testID="job-progress">
+                  {progressText(progress.progress)}
+                  {progress.engineerNeeded ? ' · Engineer needed' : ''}
+                </Text>
+              ) : null}
             </View>
             <Icon name="chevronRight" color={colors.inkMuted} />
           </View>

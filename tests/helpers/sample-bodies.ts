@@ -21,6 +21,9 @@ import {
   revisionSchema,
   statusChangeSchema,
 } from '@/shared/schemas/requests/workflow';
+import { screenCreateSchema, screenPatchSchema } from '@/shared/schemas/bearing-screens';
+import { checklistItemPatchSchema } from '@/shared/schemas/job-checklist';
+import { shoringPlanBodySchema } from '@/shared/schemas/shoring-plans';
 import { signUpBody } from './server';
 
 /** Invented demo header: 2-ply 2x10 Douglas Fir-Larch No.2 over 6 ft, under 13 ft of roof and 6 ft of ceiling. */
@@ -74,6 +77,30 @@ export const SAMPLE_BODIES = new Map<z.ZodType, () => unknown>([
       tributaryWidthsFt: [4, 8],
       materialIds: ['sawn-douglas-fir-larch-no2'],
       plies: [2],
+    }),
+  ],
+  [
+    screenCreateSchema,
+    () => ({
+      wallLabel: `Sample wall ${unique()}`,
+      answers: { sag: { value: 'no', basis: 'seen' }, joistSpanAFt: 12 },
+    }),
+  ],
+  [screenPatchSchema, () => ({ answers: { bracedWall: { value: 'unsure' } } })],
+  [checklistItemPatchSchema, () => ({ state: 'done', note: `Checked ${unique()}` })],
+  [
+    shoringPlanBodySchema,
+    () => ({
+      layout: 'both-sides',
+      joistSpanAFt: 12,
+      joistSpanBFt: 10,
+      studs: {
+        materialId: 'sawn-spruce-pine-fir-no1-no2',
+        studSizeId: '2x4',
+        studSpacingIn: 16,
+        heightFt: 8,
+      },
+      standsOn: 'floor-framing-perpendicular',
     }),
   ],
   [requestComposeSchema, () => ({ questions: `Sample question ${unique()}` })],

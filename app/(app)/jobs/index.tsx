@@ -1,3 +1,4 @@
+import { useJobProgress } from '@/lib/hooks/use-job-progress';
 import { useJobs } from '@/lib/hooks/use-jobs';
 import { ErrorView } from '@/lib/ui/error-view';
 import { JobRow } from '@/lib/ui/job-row';
@@ -8,6 +9,7 @@ import { Screen } from '@/lib/ui/screen';
 
 export default function Jobs() {
   const { data: jobs, error, mutate } = useJobs();
+  const { data: progress } = useJobProgress();
   const newJob = jobs?.length ? (
     <LinkButton href="/jobs/new" label="New job" icon="plus" testID="jobs-new" />
   ) : null;
@@ -21,7 +23,9 @@ export default function Jobs() {
       ) : jobs.length === 0 ? (
         <JobsEmptyState />
       ) : (
-        jobs.map((job) => <JobRow key={job.id} job={job} />)
+        jobs.map((job) => (
+          <JobRow key={job.id} job={job} progress={progress?.find((p) => p.jobId === job.id)} />
+        ))
       )}
     </Screen>
   );

@@ -25,3 +25,11 @@ export {
   type FootingPad,
   type FootingPadInput,
 } from './footing-pad';
+export {
+  SHORING_END_RUN_FT,
+  SHORING_SEQUENCE,
+  rentedShores,
+  studWallTakeoff,
+  type ShoreLayout,
+  type StudWallTakeoff,
+} from './shoring-takeoff';

@@ -18,6 +18,7 @@ import { jsonEqual } from '@/lib/ui/json-equal';
 import { liveCheck } from './live-check';
 import { LoadsCard } from './loads-card';
 import { MaterialCard } from './material-card';
+import { draftFromScreen, type ScreenPrefill } from '@/lib/ui/bearing/member-prefill';
 import { emptyMemberDraft, type MemberDraft, type MemberKind } from './member-draft';
 import { draftPathOf, readMemberDraft, type FieldErrors } from './member-input';
 import { ResultPane } from './result-pane';
@@ -38,6 +39,8 @@ type MemberEditorProps = {
   onSave: (body: MemberCreateBody) => Promise<SaveOutcome>;
   /** The member was created just before this page opened: say it was saved. */
   justSaved?: boolean;
+  /** A new member started from a bearing screen's answers. */
+  prefill?: ScreenPrefill;
 };
 
 const NO_ERRORS: FieldErrors = {};
@@ -61,13 +64,23 @@ function visibleErrors(errors: FieldErrors, all: boolean): FieldErrors {
  * The member editor: inputs, and the check recomputed on the device as the person types (same schema and
  * engine as the server). Saving sends the input; the server recomputes and its result is what is stored.
  */
-export function MemberEditor({ job, member, kind, storageKey, onSave, justSaved }: MemberEditorProps) {
+export function MemberEditor({
+  job,
+  member,
+  kind,
+  storageKey,
+  onSave,
+  justSaved,
+  prefill,
+}: MemberEditorProps) {
   const initial = useMemo<MemberDraft>(
     () =>
       member
         ? { ...draftFromInput(member.input, job), label: member.label, wall: member.wall }
-        : emptyMemberDraft(kind, job),
-    [member, job, kind],
+        : prefill
+          ? draftFromScreen(kind, job, prefill)
+          : emptyMemberDraft(kind, job),
+    [member, job, kind, prefill],
   );
   const form = useMemberDraft(initial, storageKey);
   const deferred = useDeferredValue(form.draft);

@@ -59,6 +59,7 @@ export const bearingScreenOutcomes = [
   'cant-tell',
 ] as const;
 export const bearingScreenOutcomeSchema = z.enum(bearingScreenOutcomes);
+export type BearingScreenOutcome = z.infer<typeof bearingScreenOutcomeSchema>;
 
 /** Input of the nonbearing header rule: the screen's outcome, the opening width and the gap to nailing above. */
 export const nonbearingHeaderInputSchema = z.object({

@@ -20,6 +20,14 @@ describe('SWR keys', () => {
     expect(isFirmScopedKey(keys.jobMembers('a', 'j1'))).toBe(true);
     expect(isFirmScopedKey(keys.member('a', 'm1'))).toBe(true);
     expect(isFirmScopedKey(keys.sessions()), 'sessions go with the session').toBe(true);
+    for (const key of [
+      keys.jobScreens('a', 'j1'),
+      keys.screen('a', 's1'),
+      keys.checklist('a', 'j1'),
+      keys.jobProgress('a'),
+      keys.shoring('a', 'm1'),
+    ])
+      expect(isFirmScopedKey(key)).toBe(true);
     expect(isFirmScopedKey(keys.invitation('t'))).toBe(false);
     expect(isFirmScopedKey(keys.devMail())).toBe(false);
     expect(isFirmScopedKey('me')).toBe(false);

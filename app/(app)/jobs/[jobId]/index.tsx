@@ -4,6 +4,9 @@ import type { MemberRecompute } from '@/shared/schemas/job-update';
 import { useJob } from '@/lib/hooks/use-job';
 import { useJobMutations } from '@/lib/hooks/use-job-mutations';
 import { ArchiveJobControl } from '@/lib/ui/archive-job-control';
+import { ChecklistPanel } from '@/lib/ui/bearing/checklist-panel';
+import { JobScreensPanel } from '@/lib/ui/bearing/job-screens-panel';
+import { ShoringPanel } from '@/lib/ui/bearing/shoring-panel';
 import { Button } from '@/lib/ui/button';
 import { ErrorView } from '@/lib/ui/error-view';
 import { jobToDraft } from '@/lib/ui/job-draft';
@@ -63,7 +66,10 @@ export default function JobPage() {
       }
     >
       <TextLink href="/jobs" label="All jobs" />
+      <JobScreensPanel jobId={job.id} />
       <JobMembersPanel job={job} recomputed={recomputed} />
+      <ShoringPanel jobId={job.id} />
+      <ChecklistPanel jobId={job.id} />
       <JobSummary job={job} />
       <ArchiveJobControl jobName={job.name} onArchive={() => archive(job.id)} />
     </Screen>

@@ -1,0 +1,53 @@
+import { useLocalSearchParams, useRouter } from 'expo-router';
+import { useScreen } from '@/lib/hooks/use-screen';
+import { useScreenSave } from '@/lib/hooks/use-screen-save';
+import { LazyScreenOutcome, LazyScreenWizard } from '@/lib/ui/bearing/lazy-bearing';
+import { Button } from '@/lib/ui/button';
+import { ErrorView } from '@/lib/ui/error-view';
+import { WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
+import { LoadingView } from '@/lib/ui/loading-view';
+import { Screen } from '@/lib/ui/screen';
+import { TextLink } from '@/lib/ui/text-link';
+
+export default function BearingScreenPage() {
+  const { jobId, screenId, edit } = useLocalSearchParams<{
+    jobId: string;
+    screenId: string;
+    edit?: string;
+  }>();
+  const { data: screen, error, mutate } = useScreen(screenId);
+  const save = useScreenSave(jobId, screenId);
+  const router = useRouter();
+  if (error) return <ErrorView error={error} onRetry={() => mutate()} />;
+  if (!screen) return <LoadingView />;
+  const back = <TextLink href={{ pathname: '/jobs/[jobId]', params: { jobId } }} label="Back to the job" />;
+  if (edit === '1') {
+    return (
+      <Screen title={`Screen again: ${screen.wallLabel}`} narrow>
+        {back}
+        <WorkspaceSuspense>
+          <LazyScreenWizard initialLabel={screen.wallLabel} initialAnswers={screen.answers} onSave={save} />
+        </WorkspaceSuspense>
+      </Screen>
+    );
+  }
+  return (
+    <Screen
+      title={screen.wallLabel}
+      actions={
+        <Button
+          label="Answer again"
+          icon="edit"
+          variant="secondary"
+          onPress={() => router.setParams({ edit: '1' })}
+          testID="screen-edit"
+        />
+      }
+    >
+      {back}
+      <WorkspaceSuspense>
+        <LazyScreenOutcome screen={screen} />
+      </WorkspaceSuspense>
+    </Screen>
+  );
+}

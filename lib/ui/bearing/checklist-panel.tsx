@@ -1,0 +1,111 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { ApiError } from '@/lib/api/client';
+import { useChecklist } from '@/lib/hooks/use-checklist';
+import { colors, radii, spacing } from '@/lib/theme';
+import { Button } from '@/lib/ui/button';
+import { Card } from '@/lib/ui/card';
+import { ChoiceGroup } from '@/lib/ui/choice-group';
+import { ErrorView } from '@/lib/ui/error-view';
+import { FieldMessages } from '@/lib/ui/field-messages';
+import { Text } from '@/lib/ui/text';
+import { TextField } from '@/lib/ui/text-field';
+import type { ChecklistItem, ChecklistState } from '@/shared/schemas/job-checklist';
+import { progressText } from './progress-text';
+
+const STATES = [
+  { value: 'to-do' as const, label: 'To do' },
+  { value: 'done' as const, label: 'Done' },
+  { value: 'not-needed' as const, label: 'Not needed' },
+];
+
+function ItemRow({
+  item,
+  onSet,
+}: {
+  item: ChecklistItem;
+  onSet: (patch: { state?: ChecklistState; note?: string }) => Promise<string[] | null>;
+}) {
+  const [note, setNote] = useState(item.note);
+  const [errors, setErrors] = useState<string[] | null>(null);
+  const set = async (patch: { state?: ChecklistState; note?: string }) => setErrors(await onSet(patch));
+  return (
+    <View style={styles.item} testID={`checklist-${item.key}`}>
+      <Text variant="bodyStrong">{item.title}</Text>
+      <Text variant="caption" tone="muted">
+        {item.detail}
+      </Text>
+      {item.because ? (
+        <Text variant="caption" style={item.raised ? styles.raised : undefined}>
+          {item.raised ? 'Raised: ' : ''}
+          {item.because}
+        </Text>
+      ) : null}
+      <ChoiceGroup
+        label="Where it stands"
+        choices={STATES}
+        value={item.state}
+        onChange={(state) => void set({ state, note })}
+        testID={`checklist-${item.key}-state`}
+      />
+      <View style={styles.noteRow}>
+        <View style={styles.noteField}>
+          <TextField label="Note" value={note} onChangeText={setNote} testID={`checklist-${item.key}-note`} />
+        </View>
+        {note !== item.note ? (
+          <Button label="Save note" variant="secondary" onPress={() => void set({ note })} />
+        ) : null}
+      </View>
+      <FieldMessages messages={errors ?? undefined} />
+      {item.updatedByName && item.updatedAt ? (
+        <Text variant="caption" tone="muted">
+          Set by {item.updatedByName}, {new Date(item.updatedAt).toLocaleString()}
+        </Text>
+      ) : null}
+    </View>
+  );
+}
+
+/** The job checklist: every item with its state, note, who and when, and the progress. */
+export function ChecklistPanel({ jobId }: { jobId: string }) {
+  const { data, error, mutate, setItem } = useChecklist(jobId);
+  return (
+    <Card title="Job checklist" testID="job-checklist">
+      {error ? <ErrorView error={error} onRetry={() => mutate()} /> : null}
+      {data ? (
+        <Text variant="label" testID="checklist-progress">
+          {progressText(data.progress)}
+        </Text>
+      ) : null}
+      {data?.items.map((item) => (
+        <ItemRow
+          key={item.key}
+          item={item}
+          onSet={async (patch) => {
+            try {
+              await setItem(item.key, patch);
+              return null;
+            } catch (e) {
+              if (!(e instanceof ApiError)) throw e;
+              return e.fields.note ?? [e.message];
+            }
+          }}
+        />
+      ))}
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  item: {
+    gap: spacing.xs,
+    padding: spacing.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: radii.md,
+    backgroundColor: colors.paper,
+  },
+  raised: { color: colors.warning },
+  noteRow: { flexDirection: 'row', alignItems: 'flex-end', gap: spacing.sm, flexWrap: 'wrap' },
+  noteField: { flexGrow: 1, flexBasis: 200 },
+});

@@ -1,0 +1,250 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { useSWRConfig } from 'swr';
+import { ApiError } from '@/lib/api/client';
+import { keys } from '@/lib/api/keys';
+import { saveShoring } from '@/lib/api/shoring-plans';
+import { useMe } from '@/lib/hooks/use-me';
+import { spacing } from '@/lib/theme';
+import { Button } from '@/lib/ui/button';
+import { Card } from '@/lib/ui/card';
+import { ChoiceGroup } from '@/lib/ui/choice-group';
+import { Notice } from '@/lib/ui/notice';
+import { TextField } from '@/lib/ui/text-field';
+import type { ShoringSurface } from '@/shared/schemas/calc/shoring';
+import type { ShoringRecord } from '@/shared/schemas/shoring-plans';
+import { ShoringResult } from './shoring-result';
+
+const SURFACES: { value: ShoringSurface; label: string; description: string }[] = [
+  {
+    value: 'floor-framing-perpendicular',
+    label: 'Floor, across the joists',
+    description: 'The bottom plate crosses the floor joists below',
+  },
+  {
+    value: 'floor-framing-parallel',
+    label: 'Floor, along the joists',
+    description: 'The bottom plate runs on one joist or between them',
+  },
+  { value: 'slab-on-grade', label: 'Slab on grade', description: 'Concrete on the ground' },
+  { value: 'basement-slab', label: 'Basement slab', description: 'Usually a slab on fill, not a footing' },
+  { value: 'ground', label: 'Bare ground', description: 'A crawl space or outside' },
+];
+
+type Form = {
+  layout: 'one-side' | 'both-sides';
+  spanA: string;
+  spanB: string;
+  setback: string;
+  method: 'stud-walls' | 'rented-shores';
+  capacity: string;
+  studSizeId: '2x4' | '2x6';
+  materialId: string;
+  spacing: string;
+  height: string;
+  standsOn: ShoringSurface;
+};
+
+const num = (text: string) => (text.trim() === '' ? undefined : Number(text.replace(',', '.')));
+
+function formOf(saved: ShoringRecord | null): Form {
+  const i = saved?.input;
+  return {
+    layout: i?.layout ?? 'both-sides',
+    spanA: i?.joistSpanAFt?.toString() ?? '',
+    spanB: i?.joistSpanBFt?.toString() ?? '',
+    setback: (i?.setbackFt ?? 2).toString(),
+    method: i?.method ?? 'stud-walls',
+    capacity: i?.shoreRatedCapacityLb?.toString() ?? '',
+    studSizeId: i?.studs.studSizeId === '2x6' ? '2x6' : '2x4',
+    materialId: i?.studs.materialId ?? 'sawn-spruce-pine-fir-no1-no2',
+    spacing: (i?.studs.studSpacingIn ?? 16).toString(),
+    height: (i?.studs.heightFt ?? 8).toString(),
+    standsOn: i?.standsOn ?? 'floor-framing-perpendicular',
+  };
+}
+
+/** The temporary shoring planner of a member: layout, studs or rented shores, what the walls stand on. */
+export function ShoringPlanner({ memberId, saved }: { memberId: string; saved: ShoringRecord | null }) {
+  const { data: me } = useMe();
+  const { mutate } = useSWRConfig();
+  const [form, setForm] = useState<Form>(() => formOf(saved));
+  const [record, setRecord] = useState(saved);
+  const [problem, setProblem] = useState<ApiError | null>(null);
+  const [busy, setBusy] = useState(false);
+  const set =
+    <K extends keyof Form>(key: K) =>
+    (value: Form[K]) =>
+      setForm((f) => ({ ...f, [key]: value }));
+  const fields = problem?.fields ?? {};
+
+  const plan = async () => {
+    setBusy(true);
+    try {
+      const next = await saveShoring(memberId, {
+        layout: form.layout,
+        joistSpanAFt: num(form.spanA),
+        joistSpanBFt: form.layout === 'both-sides' ? num(form.spanB) : undefined,
+        setbackFt: num(form.setback),
+        method: form.method,
+        shoreRatedCapacityLb: form.method === 'rented-shores' ? num(form.capacity) : undefined,
+        studs: {
+          materialId: form.materialId,
+          studSizeId: form.studSizeId,
+          studSpacingIn: num(form.spacing) ?? 16,
+          heightFt: num(form.height) ?? 8,
+          weakAxisBracing: 'mid-height-blocking',
+        },
+        standsOn: form.standsOn,
+      });
+      setRecord(next);
+      setProblem(null);
+      if (me) await mutate(keys.shoring(me.activeOrgId, memberId), next, { revalidate: false });
+    } catch (error) {
+      if (!(error instanceof ApiError)) throw error;
+      setProblem(error);
+    } finally {
+      setBusy(false);
+    }
+  };
+
+  return (
+    <View style={styles.wrap}>
+      <Card title="Temporary walls">
+        <ChoiceGroup
+          label="Where"
+          choices={[
+            { value: 'both-sides', label: 'Both sides of the wall' },
+            { value: 'one-side', label: 'One side' },
+          ]}
+          value={form.layout}
+          onChange={set('layout')}
+          testID="shoring-layout"
+        />
+        <View style={styles.grid}>
+          <View style={styles.cell}>
+            <TextField
+              label="Joist span, side A"
+              unit="ft"
+              value={form.spanA}
+              onChangeText={set('spanA')}
+              errors={fields.joistSpanAFt}
+              testID="shoring-span-a"
+            />
+          </View>
+          {form.layout === 'both-sides' ? (
+            <View style={styles.cell}>
+              <TextField
+                label="Joist span, side B"
+                unit="ft"
+                value={form.spanB}
+                onChangeText={set('spanB')}
+                errors={fields.joistSpanBFt}
+                testID="shoring-span-b"
+              />
+            </View>
+          ) : null}
+          <View style={styles.cell}>
+            <TextField
+              label="Setback from the wall"
+              unit="ft"
+              hint="2 to 3 ft is usual."
+              value={form.setback}
+              onChangeText={set('setback')}
+              errors={fields.setbackFt}
+              testID="shoring-setback"
+            />
+          </View>
+        </View>
+        <ChoiceGroup
+          label="Built from"
+          choices={[
+            { value: 'stud-walls', label: 'Stud walls' },
+            { value: 'rented-shores', label: 'Rented adjustable shores' },
+          ]}
+          value={form.method}
+          onChange={set('method')}
+          testID="shoring-method"
+        />
+        {form.method === 'rented-shores' ? (
+          <TextField
+            label="Rated capacity of one shore"
+            hint="Read it off the shore for the height you extend it to."
+            unit="lb"
+            value={form.capacity}
+            onChangeText={set('capacity')}
+            errors={fields.shoreRatedCapacityLb}
+            testID="shoring-capacity"
+          />
+        ) : null}
+        <ChoiceGroup
+          label="Studs"
+          choices={[
+            { value: '2x4', label: '2x4' },
+            { value: '2x6', label: '2x6' },
+          ]}
+          value={form.studSizeId}
+          onChange={set('studSizeId')}
+          testID="shoring-stud-size"
+        />
+        <ChoiceGroup
+          label="Stud lumber"
+          choices={[
+            { value: 'sawn-spruce-pine-fir-no1-no2', label: 'Spruce-Pine-Fir No.1/No.2' },
+            { value: 'sawn-douglas-fir-larch-no2', label: 'Douglas Fir-Larch No.2' },
+          ]}
+          value={form.materialId}
+          onChange={set('materialId')}
+        />
+        <View style={styles.grid}>
+          <View style={styles.cell}>
+            <TextField
+              label="Stud spacing"
+              unit="in"
+              value={form.spacing}
+              onChangeText={set('spacing')}
+              errors={fields['studs.studSpacingIn']}
+              testID="shoring-spacing"
+            />
+          </View>
+          <View style={styles.cell}>
+            <TextField
+              label="Floor to ceiling"
+              unit="ft"
+              value={form.height}
+              onChangeText={set('height')}
+              errors={fields['studs.heightFt']}
+              testID="shoring-height"
+            />
+          </View>
+        </View>
+        <ChoiceGroup
+          label="The walls stand on"
+          choices={SURFACES}
+          value={form.standsOn}
+          onChange={set('standsOn')}
+          testID="shoring-stands-on"
+        />
+        {problem ? (
+          <Notice tone="error" testID="shoring-problem">
+            {`Nothing was saved: ${problem.message}`}
+          </Notice>
+        ) : null}
+        <Button
+          label="Plan the shoring"
+          icon="check"
+          busy={busy}
+          onPress={() => void plan()}
+          testID="shoring-save"
+        />
+      </Card>
+      {record ? <ShoringResult record={record} /> : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: spacing.lg },
+  grid: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
+  cell: { flexGrow: 1, flexBasis: 160 },
+});
