@@ -13,9 +13,18 @@ export const keys = {
   member: (orgId: string, memberId: string) => ['member', orgId, memberId] as const,
   invitation: (token: string) => ['invitation', token] as const,
   devMail: () => ['dev-mail'] as const,
+  /** Design requests: the viewer's list (optionally one state), a job's, and one request (design-requests.ts). */
+  requests: (orgId: string, state: string) => ['requests', orgId, state] as const,
+  jobRequests: (orgId: string, jobId: string) => ['job-requests', orgId, jobId] as const,
+  request: (orgId: string, requestId: string) => ['request', orgId, requestId] as const,
 };
 
 /** True for keys that belong to a firm, so a firm switch or sign-out can drop them. */
 export function isFirmScopedKey(key: unknown): boolean {
-  return Array.isArray(key) && ['me', 'jobs', 'job', 'members', 'job-members', 'member'].includes(key[0]);
+  return (
+    Array.isArray(key) &&
+    ['me', 'jobs', 'job', 'members', 'job-members', 'member', 'requests', 'job-requests', 'request'].includes(
+      key[0],
+    )
+  );
 }

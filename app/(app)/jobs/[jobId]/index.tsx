@@ -9,6 +9,7 @@ import { jobToDraft } from '@/lib/ui/job-draft';
 import { JobForm } from '@/lib/ui/job-form';
 import { JobMembersPanel } from '@/lib/ui/job-members-panel';
 import { JobSummary } from '@/lib/ui/job-summary';
+import { JobRequestsPanel } from '@/lib/ui/requests/job-requests-panel';
 import { LoadingView } from '@/lib/ui/loading-view';
 import { Screen } from '@/lib/ui/screen';
 import { TextLink } from '@/lib/ui/text-link';
@@ -60,6 +61,7 @@ export default function JobPage() {
     >
       <TextLink href="/jobs" label="All jobs" />
       <JobMembersPanel job={job} />
+      <JobRequestsPanel job={job} />
       <JobSummary job={job} />
       <ArchiveJobControl jobName={job.name} onArchive={() => archive(job.id)} />
     </Screen>
