@@ -12,10 +12,12 @@ import {
 import { spacing } from '@/lib/theme';
 import { PHOTO_PLACE_LABELS, photoPlaces, type PhotoPlace } from '@/shared/schemas/requests/snapshot';
 import type { RequestDetail } from '@/shared/schemas/requests/views';
+import { REQUEST_STATE_LABELS } from '@/shared/schemas/requests/workflow';
 import { Button } from '../button';
 import { Card } from '../card';
 import { Notice } from '../notice';
 import { PickerField } from '../picker-field';
+import { Text } from '../text';
 import { TextField } from '../text-field';
 import { pickFile } from './browser-files';
 
@@ -77,6 +79,15 @@ export function RequestActionsCard({
       onPress={onPress}
     />
   );
+
+  // The thread and the reply form have their own cards; with nothing else to do, say so instead of a bare box.
+  if (request.actions.every((action) => action === 'message' || action === 'reply')) {
+    return (
+      <Card title={firm ? 'What you can do' : 'Your answer'} testID="request-actions">
+        <Text tone="muted">{`Nothing to do while the request is ${REQUEST_STATE_LABELS[request.status]}.`}</Text>
+      </Card>
+    );
+  }
 
   return (
     <Card title={firm ? 'What you can do' : 'Your answer'} testID="request-actions">
