@@ -21,6 +21,10 @@ export const keys = {
   devMail: () => ['dev-mail'] as const,
   /** The signed-in person's sessions (browsers). */
   sessions: () => ['sessions'] as const,
+  /** Design requests: the viewer's list (optionally one state), a job's, and one request (design-requests.ts). */
+  requests: (orgId: string, state: string) => ['requests', orgId, state] as const,
+  jobRequests: (orgId: string, jobId: string) => ['job-requests', orgId, jobId] as const,
+  request: (orgId: string, requestId: string) => ['request', orgId, requestId] as const,
 };
 
 /** True for keys that belong to a firm or a session, so a firm switch or sign-out can drop them. */
@@ -40,6 +44,9 @@ export function isFirmScopedKey(key: unknown): boolean {
       'job-progress',
       'shoring',
       'sessions',
+      'requests',
+      'job-requests',
+      'request',
     ].includes(key[0])
   );
 }

@@ -48,6 +48,11 @@ const REQUEST_FIRM_ANSWER: Record<string, 403 | 409> = {
   'POST /api/requests/:requestId/fee/accept': 409,
   'POST /api/requests/:requestId/reply': 403,
   'POST /api/requests/:requestId/messages': 409,
+  // A Draft has no package yet.
+  'GET /api/requests/:requestId/package.pdf': 409,
+  'GET /api/requests/:requestId/package.json': 409,
+  'GET /api/requests/:requestId/loads.csv': 409,
+  'GET /api/requests/:requestId/photos.zip': 409,
 };
 
 /** Areas by path: a route is in an area when its path is the area's or lies below it. */

@@ -13,6 +13,7 @@ import { jobToDraft } from '@/lib/ui/job-draft';
 import { JobForm } from '@/lib/ui/job-form';
 import { JobMembersPanel } from '@/lib/ui/job-members-panel';
 import { JobSummary } from '@/lib/ui/job-summary';
+import { JobRequestsPanel } from '@/lib/ui/requests/job-requests-panel';
 import { LoadingView } from '@/lib/ui/loading-view';
 import { Screen } from '@/lib/ui/screen';
 import { TextLink } from '@/lib/ui/text-link';
@@ -68,6 +69,7 @@ export default function JobPage() {
       <TextLink href="/jobs" label="All jobs" />
       <JobScreensPanel jobId={job.id} />
       <JobMembersPanel job={job} recomputed={recomputed} />
+      <JobRequestsPanel job={job} />
       <ShoringPanel jobId={job.id} />
       <ChecklistPanel jobId={job.id} />
       <JobSummary job={job} />

@@ -1,0 +1,145 @@
+import { describe, expect, inject, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { openBrowser, snap, viewports, type ViewportName } from './browser';
+
+const baseUrl = inject('baseUrl');
+const devMailUrl = inject('devMailUrl');
+
+/** A tiny valid PNG (1 x 1, one grey pixel). */
+const PNG = Buffer.from(
+  'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAAAAAA6fptVAAAACklEQVR4nGNoAAAAggCBd81ytgAAAABJRU5ErkJggg==',
+  'base64',
+);
+
+async function signIn(page: Page, email: string): Promise<void> {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByTestId('sign-in-email').fill(email);
+  await page.getByTestId('sign-in-password').fill('tributary-demo');
+  await page.getByTestId('sign-in-submit').click();
+  await page.getByTestId('job-row').first().waitFor();
+}
+
+async function act(page: Page, action: string, text = ''): Promise<void> {
+  if (text) await page.getByTestId('action-text').fill(text);
+  await page.getByTestId(`action-${action}`).click();
+}
+
+async function upload(page: Page, action: string, name: string): Promise<void> {
+  const chooser = page.waitForEvent('filechooser');
+  await page.getByTestId(`action-${action}`).click();
+  await (await chooser).setFiles({ name, mimeType: 'image/png', buffer: PNG });
+  await page.getByText(name).first().waitFor();
+}
+
+const state = (page: Page, word: string) =>
+  expect.poll(() => page.getByTestId('request-status').innerText()).toBe(word);
+
+for (const name of Object.keys(viewports) as ViewportName[]) {
+  describe(`design request round trip (${name})`, () => {
+    it('contractor sends with a photo; a new engineer signs up from the mail, asks, designs; the contractor sees the member', async () => {
+      const contractor = await openBrowser(name);
+      const engineer = await openBrowser(name);
+      const engineerEmail = `engineer-${name}-${Date.now()}@example.test`;
+      try {
+        const c = contractor.page;
+        await signIn(c, 'contractor@demo.tributary.test');
+        await c.getByTestId('job-row').first().click();
+        await c.getByTestId('job-members').waitFor();
+        const jobId = c.url().split('/jobs/')[1];
+        // A header on the job through the API (the member editor has its own browser test).
+        const made = await c.request.post(`${baseUrl}/api/jobs/${jobId}/members`, {
+          headers: { Origin: baseUrl },
+          data: {
+            label: `Hall header ${name}`,
+            input: {
+              kind: 'header',
+              edition: 'ASCE 7-22',
+              clearSpanFt: 6,
+              sources: [{ kind: 'roof', tributaryFt: 13, deadPsf: 15, roofLivePsf: 20 }],
+              materialId: 'sawn-douglas-fir-larch-no2',
+              sizeId: '2-ply-2x10',
+            },
+          },
+        });
+        expect(made.status()).toBe(201);
+        await c.reload();
+        await c.getByTestId('new-request').click();
+        await c.getByRole('button', { name: new RegExp(`Hall header ${name}`) }).click();
+        await c.getByTestId('compose-engineerEmail').fill(engineerEmail);
+        await c.getByTestId('compose-state').click();
+        await c.getByTestId('compose-state-PA').click();
+        await c.getByTestId('compose-questions').fill('Can it be flush?');
+        await c.getByTestId('compose-save').click();
+        await state(c, 'Draft');
+        await upload(c, 'photo', 'attic.png');
+        await act(c, 'send');
+        await state(c, 'Sent');
+        await snap(c, `handoff/${name}-contractor-sent`);
+
+        const e = engineer.page;
+        await e.goto(devMailUrl);
+        const link = e.getByRole('link', { name: /\/request-invite\// }).first();
+        await link.waitFor();
+        const mails = await e.locator('body').innerText();
+        expect(mails).toContain(engineerEmail);
+        await e.goto((await link.getAttribute('href')) ?? '');
+        await e.getByTestId('request-invite-name').fill('New Engineer');
+        await e.getByTestId('request-invite-firm').fill('New Structural');
+        await e.getByTestId('request-invite-password').fill('a long enough password');
+        await e.getByTestId('request-invite-accept').click();
+        await state(e, 'Sent');
+        await expect.poll(() => e.getByTestId('request-member').first().innerText()).toContain('Preliminary');
+        const pdf = await e.request.get(`${e.url().replace('/requests/', '/api/requests/')}/package.pdf`);
+        expect(pdf.status()).toBe(200);
+        expect(pdf.headers()['content-type']).toBe('application/pdf');
+        await act(e, 'in-review');
+        await state(e, 'In review');
+        await act(e, 'needs-info', 'What is under the left end?');
+        await state(e, 'Needs info');
+
+        await c.reload();
+        await state(c, 'Needs info');
+        await c.getByTestId('message-body').fill('A 4x4 post on the foundation wall');
+        await c.getByTestId('message-send').click();
+        await c.getByText('A 4x4 post on the foundation wall').first().waitFor();
+        await act(c, 'in-review');
+        await state(c, 'In review');
+
+        await e.reload();
+        await e.getByTestId('fee-usd').fill('600');
+        await e.getByTestId('fee-days').fill('5');
+        await act(e, 'quote-fee');
+        await c.reload();
+        await act(c, 'accept-fee');
+        await c
+          .getByText(/accepted/)
+          .first()
+          .waitFor();
+
+        await e.reload();
+        await upload(e, 'design', 'design.png');
+        await e.getByTestId('reply-designation-0').fill('2-ply 1-3/4 x 9-1/4 LVL 2.0E');
+        await e.getByTestId('reply-plies-0').fill('2');
+        await e.getByTestId('reply-verify').fill('Post under the left end (photo)');
+        await e.getByTestId('reply-send').click();
+        await e.getByTestId('engineer-member').waitFor();
+        await act(e, 'designed');
+        await state(e, 'Designed');
+        await snap(e, `handoff/${name}-engineer-designed`);
+
+        await c.reload();
+        await state(c, 'Designed');
+        const member = await c.getByTestId('request-member').first().innerText();
+        expect(member).toContain('Preliminary size superseded');
+        expect(member).toContain('Engineer: LVL, 2-ply 1-3/4 x 9-1/4 LVL 2.0E');
+        expect(await c.getByTestId('verify-in-field').innerText()).toContain(
+          'Post under the left end (photo wanted)',
+        );
+        await snap(c, `handoff/${name}-contractor-designed`);
+      } finally {
+        await contractor.close();
+        await engineer.close();
+      }
+    }, 180_000);
+  });
+}
