@@ -5,3 +5,4 @@ export * from './mail-outbox';
 export * from './members';
 export * from './organizations';
 export * from './users';
+export * from './price-book';

@@ -19,3 +19,4 @@ export * from './types';
 export * from './member-lines';
 export * from './build-budget';
 export * from './budget-range';
+export * from './amount-text';

@@ -122,8 +122,10 @@ export function workLines(facts: BudgetFacts, choices: BudgetChoices, prices: Pr
         `${size.sizeLabel} ${size.materialLabel}`,
         size.plies,
         'each',
-        `sawn/${size.nominal}/${stockFt ?? 20}`,
-        `${size.plies} pieces of ${stockFt ?? 'over 20'} ft (${needed})`,
+        `sawn/${size.nominal}/${stockFt ?? 'over-20'}`,
+        stockFt === null
+          ? `sawn stock ends at 20 ft (${needed}): price it by hand`
+          : `${size.plies} pieces of ${stockFt} ft (${needed})`,
         { taxable: true, lumber: true },
       );
     }
@@ -190,7 +192,7 @@ export function workLines(facts: BudgetFacts, choices: BudgetChoices, prices: Pr
       `${post.label}: ${post.pieces > 1 ? `${post.pieces}-ply ` : ''}${post.nominal} post`,
       post.pieces,
       'each',
-      `sawn/${post.nominal}/${stockFt ?? 20}`,
+      `sawn/${post.nominal}/${stockFt ?? 'over-20'}`,
       `${post.pieces} × ${stockFt ?? 'over 20'} ft for ${ft(post.heightFt)}`,
       { taxable: true, lumber: true },
     );

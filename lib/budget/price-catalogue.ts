@@ -235,8 +235,6 @@ export const FIXED_ITEMS: readonly CatalogueItem[] = Object.freeze([
 
 const FIXED_BY_KEY = new Map(FIXED_ITEMS.map((item) => [item.key, item]));
 
-/** Sawn nominal sizes the price book prices by the piece (plies of 2x, 4x posts, 6x timbers). */
-export const SAWN_NOMINALS = ['2x4', '2x6', '2x8', '2x10', '2x12', '4x4', '4x6', '6x6'] as const;
 /** Even stock lengths of sawn lumber, ft (common practice). */
 export const SAWN_LENGTHS_FT = [8, 10, 12, 14, 16, 18, 20] as const;
 
@@ -275,12 +273,8 @@ export function catalogueItem(key: string): CatalogueItem | undefined {
       label: `Glulam ${key.slice(7).replace('x', ' x ')} in, per lf`,
       unit: 'lf',
     };
-  const sawn = key.match(/^sawn\/(\w+)\/(\d+)$/);
-  if (
-    sawn &&
-    (SAWN_NOMINALS as readonly string[]).includes(sawn[1]) &&
-    (SAWN_LENGTHS_FT as readonly number[]).includes(Number(sawn[2]))
-  )
+  const sawn = key.match(/^sawn\/([2-8]x(?:[2-9]|1[0-6]))\/(\d+)$/);
+  if (sawn && (SAWN_LENGTHS_FT as readonly number[]).includes(Number(sawn[2])))
     return { key, category: 'sawn-lumber', label: `${sawn[1]} × ${sawn[2]} ft, per piece`, unit: 'each' };
   return undefined;
 }

@@ -21,17 +21,14 @@ export interface PriceReader {
 /**
  * A reader over a price book's amounts that remembers every key it could not find.
  * @param amounts item key → stored amount (cents, basis points or thousandths by the item's unit)
- * @returns the reader
- * @throws Error when a key is not in the catalogue (a programming error, not a user's)
+ * @returns the reader; a key the catalogue cannot hold (a sawn length past 20 ft) reads as missing
  * @example priceReader(new Map([['rate/carpenter', 6500]])).cents('rate/carpenter') // 6500
  * Reference: Tributary price book convention (integer amounts).
  */
 export function priceReader(amounts: PriceAmounts): PriceReader {
   const missing: string[] = [];
   const read = (key: string): number | null => {
-    const item = catalogueItem(key);
-    if (!item) throw new Error(`Not a price book item: ${key}`);
-    const amount = amounts.get(key);
+    const amount = catalogueItem(key) ? amounts.get(key) : undefined;
     if (amount === undefined) {
       if (!missing.includes(key)) missing.push(key);
       return null;

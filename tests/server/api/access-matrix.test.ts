@@ -29,6 +29,20 @@ const PUBLIC = new Set([
   'POST /api/invitations/:token/accept',
 ]);
 
+/** Who may change the price book and budgets: the owner and the estimator (contractors read). */
+const BUDGET_WRITERS: Role[] = ['owner', 'estimator'];
+
+/** Routes whose rule differs from their area's, by exact method and path. */
+const BY_ROUTE = new Map<string, Rule>([
+  ['PUT /api/members/:memberId/budget', { kind: 'firm', roles: BUDGET_WRITERS }],
+  ['POST /api/jobs/:jobId/budgets', { kind: 'firm', roles: BUDGET_WRITERS }],
+  ['PATCH /api/price-book/settings', { kind: 'firm', roles: BUDGET_WRITERS }],
+  ['POST /api/price-book/items', { kind: 'firm', roles: BUDGET_WRITERS }],
+  ['PATCH /api/price-book/items/:itemId', { kind: 'firm', roles: BUDGET_WRITERS }],
+  ['DELETE /api/price-book/items/:itemId', { kind: 'firm', roles: BUDGET_WRITERS }],
+  ['POST /api/price-book/import', { kind: 'firm', roles: BUDGET_WRITERS }],
+]);
+
 /** Areas by path: a route is in an area when its path is the area's or lies below it. */
 const AREAS: [area: string, rule: Rule][] = [
   ['/api/me', { kind: 'signed-in' }],
@@ -40,6 +54,8 @@ const AREAS: [area: string, rule: Rule][] = [
   ['/api/jobs', { kind: 'firm', roles: CONTRACTING }],
   ['/api/members', { kind: 'firm', roles: CONTRACTING }],
   ['/api/dev/mail', { kind: 'dev-mail-key' }],
+  ['/api/price-book', { kind: 'firm', roles: CONTRACTING }],
+  ['/api/budgets', { kind: 'firm', roles: CONTRACTING }],
 ];
 
 /** Routes that end the caller's sessions: each try gets a session of its own, and a new one after. */
@@ -47,6 +63,8 @@ const SESSION_ENDING = new Set(['POST /api/auth/sign-out-everywhere']);
 
 function ruleFor(route: ApiRoute): Rule | undefined {
   if (PUBLIC.has(`${route.method.toUpperCase()} ${route.path}`)) return { kind: 'public' };
+  const own = BY_ROUTE.get(`${route.method.toUpperCase()} ${route.path}`);
+  if (own) return own;
   return AREAS.find(([area]) => route.path === area || route.path.startsWith(`${area}/`))?.[1];
 }
 
@@ -67,8 +85,10 @@ const firmA = ['owner', 'contractor', 'estimator'] as const;
 function expectSafe(res: request.Response, what: string) {
   expect(res.status, `${what}: ${res.text}`).toBeLessThan(500);
   expect(res.headers['cache-control'], what).toBe('no-store');
+  // A binary answer (a PDF) has no text: search its bytes.
+  const text = res.text ?? (Buffer.isBuffer(res.body) ? res.body.toString('latin1') : '');
   for (const marker of world.firmBMarkers)
-    expect(res.text, `${what} leaks firm B's ${marker}`).not.toContain(marker);
+    expect(text, `${what} leaks firm B's ${marker}`).not.toContain(marker);
 }
 
 describe('the route list comes from the router', () => {
