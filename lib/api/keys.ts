@@ -11,11 +11,27 @@ export const keys = {
   /** A job's structural members: headers and beams (structural-members.ts). */
   jobMembers: (orgId: string, jobId: string) => ['job-members', orgId, jobId] as const,
   member: (orgId: string, memberId: string) => ['member', orgId, memberId] as const,
+  priceBook: (orgId: string) => ['price-book', orgId] as const,
+  memberBudget: (orgId: string, memberId: string) => ['member-budget', orgId, memberId] as const,
+  jobBudget: (orgId: string, jobId: string) => ['job-budget', orgId, jobId] as const,
   invitation: (token: string) => ['invitation', token] as const,
   devMail: () => ['dev-mail'] as const,
 };
 
 /** True for keys that belong to a firm, so a firm switch or sign-out can drop them. */
 export function isFirmScopedKey(key: unknown): boolean {
-  return Array.isArray(key) && ['me', 'jobs', 'job', 'members', 'job-members', 'member'].includes(key[0]);
+  return (
+    Array.isArray(key) &&
+    [
+      'me',
+      'jobs',
+      'job',
+      'members',
+      'job-members',
+      'member',
+      'price-book',
+      'member-budget',
+      'job-budget',
+    ].includes(key[0])
+  );
 }

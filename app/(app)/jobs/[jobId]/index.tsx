@@ -60,6 +60,7 @@ export default function JobPage() {
     >
       <TextLink href="/jobs" label="All jobs" />
       <JobMembersPanel job={job} />
+      <TextLink href={`/jobs/${job.id}/budget`} label="Job budget" />
       <JobSummary job={job} />
       <ArchiveJobControl jobName={job.name} onArchive={() => archive(job.id)} />
     </Screen>

@@ -1,0 +1,61 @@
+import { View } from 'react-native';
+import { VictoryAxis, VictoryBar, VictoryChart } from 'victory-native';
+import { formatDollars } from '@/lib/format/money';
+import { colors, fonts } from '@/lib/theme';
+import type { MemberBudgetView } from '@/shared/schemas/budgets';
+import { Text } from '../text';
+
+type Row = MemberBudgetView['comparison'][number];
+
+const mark = (row: Row) => (row.cheapest ? '★ ' : '') + (row.preliminary ? '▸ ' : '');
+
+/**
+ * Every priced size as a horizontal bar (victory-native, loaded with this route only). The cheapest
+ * passing size carries a star and the accent, the preliminary size a pointer: never colour alone.
+ */
+export default function ComparisonChart({ rows, width }: { rows: readonly Row[]; width: number }) {
+  const data = rows.map((row, i) => ({
+    x: i + 1,
+    y: row.totalCents / 100,
+    label: `${mark(row)}${row.sizeLabel}`,
+    fill: row.cheapest ? colors.accent : row.passes ? colors.lineStrong : colors.danger,
+  }));
+  const height = 48 + rows.length * 34;
+  return (
+    <View testID="comparison-chart" aria-label="Budget by size, chart">
+      <Text variant="caption" tone="muted">
+        ★ cheapest that passes · ▸ preliminary size
+      </Text>
+      <VictoryChart
+        horizontal
+        width={width}
+        height={height}
+        domainPadding={{ x: 18 }}
+        padding={{ top: 12, bottom: 36, left: 150, right: 24 }}
+      >
+        <VictoryAxis
+          tickValues={data.map((d) => d.x)}
+          tickFormat={data.map((d) => d.label)}
+          style={{
+            tickLabels: { fontFamily: fonts.regular, fontSize: 11, fill: colors.ink },
+            axis: { stroke: colors.line },
+          }}
+        />
+        <VictoryAxis
+          dependentAxis
+          tickCount={4}
+          tickFormat={(t: number) => formatDollars(t * 100)}
+          style={{
+            tickLabels: { fontFamily: fonts.regular, fontSize: 10, fill: colors.inkMuted },
+            grid: { stroke: colors.line },
+          }}
+        />
+        <VictoryBar
+          data={data}
+          barWidth={18}
+          style={{ data: { fill: ({ datum }) => (datum as { fill: string }).fill } }}
+        />
+      </VictoryChart>
+    </View>
+  );
+}
