@@ -81,7 +81,7 @@ function postFacts(input: MemberCheckInput, result: MemberCheckResult): PostFact
  * opening's header, studs 2x4 Spruce-Pine-Fir No.1/No.2 the wall's height, on floor framing. Null when the
  * member carries no line load (nothing to shore).
  */
-function shoringFor(input: MemberCheckInput, wallHeightFt: number, work: BudgetChoices['work']) {
+export function shoringFor(input: MemberCheckInput, wallHeightFt: number, work: BudgetChoices['work']) {
   const {
     materialId: _m,
     sizeId: _s,
@@ -110,7 +110,10 @@ function shoringFor(input: MemberCheckInput, wallHeightFt: number, work: BudgetC
   }
 }
 
-/** What the budget needs of a member at one size (the stored check gives the hangers and posts). */
+/**
+ * What the budget needs of a member at one size (the stored check gives the hangers and posts). The
+ * temporary walls do not depend on the size: pass them in when pricing many sizes.
+ */
 export function memberFacts(
   member: Member,
   job: Job,
@@ -118,6 +121,7 @@ export function memberFacts(
   size: MemberSizeFacts,
   lengthToBuyFt: number,
   result: MemberCheckResult = member.result,
+  shoring: BudgetFacts['shoring'] = shoringFor(member.input, choices.wallHeightFt, choices.work),
 ): BudgetFacts {
   const input = member.input;
   return {
@@ -130,13 +134,17 @@ export function memberFacts(
     joistsHung: result.mount.hangers ?? 0,
     endsOnJacks: (input.supportKind ?? 'jacks') === 'jacks' ? 2 : 0,
     posts: postFacts(input, result),
-    shoring: shoringFor(input, choices.wallHeightFt, choices.work),
+    shoring,
     yearBuilt: job.yearBuilt,
   };
 }
 
 /** The member's shortlist in its own material: passing sizes, shallowest first, with their fit. */
-export function memberShortlist(input: MemberCheckInput, limit = COMPARED_SIZES) {
+export function memberShortlist(
+  input: MemberCheckInput,
+  limit = COMPARED_SIZES,
+  narrow: { plies?: number[]; maxDepthIn?: number } = {},
+) {
   const {
     materialId,
     sizeId: _s,
@@ -146,7 +154,7 @@ export function memberShortlist(input: MemberCheckInput, limit = COMPARED_SIZES)
     posts: _posts,
     ...loading
   } = input;
-  return buildShortlist({ ...loading, materialIds: [materialId], sortBy: 'shallowest', limit });
+  return buildShortlist({ ...loading, materialIds: [materialId], ...narrow, sortBy: 'shallowest', limit });
 }
 
 /**
@@ -157,6 +165,7 @@ export function postAndFootingAlternate(
   member: Member,
   job: Job,
   choices: BudgetChoices,
+  shoring: BudgetFacts['shoring'],
 ): BudgetFacts | null {
   const half = (member.input.clearSpanFt - CENTRE_POST_FT) / 2;
   if (member.input.secondClearSpanFt !== undefined || half < 1) return null;
@@ -168,7 +177,11 @@ export function postAndFootingAlternate(
   };
   let shortlist;
   try {
-    shortlist = memberShortlist(input, 1);
+    // The member's own ply count and no deeper: the alternate keeps the wall's width and the headroom.
+    shortlist = memberShortlist(input, 1, {
+      plies: [member.result.member.plies],
+      maxDepthIn: member.result.member.dIn,
+    });
   } catch (error) {
     if (error instanceof CalcInputError) return null;
     throw error;
@@ -187,6 +200,7 @@ export function postAndFootingAlternate(
     sizeFacts(member.materialId, size, shortlist.spans.lengthToBuyFt),
     result.spans.lengthToBuyFt,
     result,
+    shoring,
   );
   facts.posts = [
     ...facts.posts,

@@ -15,6 +15,7 @@ import type { Member } from '@/shared/schemas/members';
 import {
   memberFacts,
   memberShortlist,
+  shoringFor,
   postAndFootingAlternate,
   resolveChoices,
   sizeFacts,
@@ -47,13 +48,18 @@ export function memberBudgetView(
   const choices = resolveChoices(given, member, job);
   const lengthToBuyFt = member.result.spans.lengthToBuyFt;
   const size = getSize(member.materialId, member.sizeId);
-  const preliminaryFacts = memberFacts(
-    member,
-    job,
-    choices,
-    sizeFacts(member.materialId, size, lengthToBuyFt),
-    lengthToBuyFt,
-  );
+  const shoring = shoringFor(member.input, choices.wallHeightFt, choices.work);
+  const factsAt = (sizeId: string, result = member.result) =>
+    memberFacts(
+      member,
+      job,
+      choices,
+      sizeFacts(member.materialId, getSize(member.materialId, sizeId), lengthToBuyFt),
+      lengthToBuyFt,
+      result,
+      shoring,
+    );
+  const preliminaryFacts = factsAt(member.sizeId);
   const budget = buildMemberBudget(preliminaryFacts, choices, book.amounts, overrides);
   const price = (facts: BudgetFacts, changed: Partial<BudgetChoices> = {}): MemberBudget =>
     buildMemberBudget(facts, { ...choices, ...changed }, book.amounts, {});
@@ -62,15 +68,7 @@ export function memberBudgetView(
   const shortlist = memberShortlist(member.input);
   const compared = shortlist.passing.map((entry) => {
     const entrySize = getSize(member.materialId, entry.sizeId);
-    const priced = price(
-      memberFacts(
-        member,
-        job,
-        choices,
-        sizeFacts(member.materialId, entrySize, lengthToBuyFt),
-        lengthToBuyFt,
-      ),
-    );
+    const priced = price(factsAt(entry.sizeId));
     return { entry, entrySize, priced };
   });
   if (!compared.some((c) => c.entry.sizeId === member.sizeId)) {
@@ -113,20 +111,7 @@ export function memberBudgetView(
       .map((c) => ({ id: c.entry.sizeId, dIn: c.entrySize.dIn, bIn: c.entrySize.bIn, priced: c.priced })),
   );
   // The next size up carries the estimator's overrides too: the range moves with them.
-  const upBudget = up
-    ? buildMemberBudget(
-        memberFacts(
-          member,
-          job,
-          choices,
-          sizeFacts(member.materialId, getSize(member.materialId, up.id), lengthToBuyFt),
-          lengthToBuyFt,
-        ),
-        choices,
-        book.amounts,
-        overrides,
-      )
-    : null;
+  const upBudget = up ? buildMemberBudget(factsAt(up.id), choices, book.amounts, overrides) : null;
   const range = budgetRange(
     { label: size.label, totalCents: budget.totalCents },
     up && upBudget
@@ -150,7 +135,7 @@ export function memberBudgetView(
   scenario(
     `mount-${otherMount}`,
     otherMount === 'flush' ? 'Flush with the joists' : 'Dropped below the joists',
-    price(memberFacts(member, job, choices, preliminaryFacts.size, lengthToBuyFt, remounted)),
+    price(factsAt(member.sizeId, remounted)),
     otherMount === 'flush'
       ? `${remounted.mount.hangers ?? 0} joists hung in hangers, both ceilings opened${remounted.mount.depthFits === false ? '; the member is deeper than the joists' : ''}`
       : 'no hangers; the beam is wrapped below the ceiling',
@@ -164,7 +149,7 @@ export function memberBudgetView(
         'an allowance per lf: the engineer sizes it',
       );
   }
-  const alternate = postAndFootingAlternate(member, job, choices);
+  const alternate = postAndFootingAlternate(member, job, choices, shoring);
   if (alternate) {
     const alternateSize = alternate.size.sizeLabel;
     scenario(
