@@ -7,7 +7,7 @@ import { formatDollars } from '@/lib/format/money';
 import { useMemberBudget } from '@/lib/hooks/use-budgets';
 import { useMe } from '@/lib/hooks/use-me';
 import { spacing } from '@/lib/theme';
-import type { LineOverrideInput, MemberBudgetView } from '@/shared/schemas/budgets';
+import type { BudgetChoicesInput, LineOverrideInput, MemberBudgetView } from '@/shared/schemas/budgets';
 import { Button } from '../button';
 import { Card } from '../card';
 import { Notice } from '../notice';
@@ -16,6 +16,7 @@ import { LinkButton } from '../link-button';
 import { LoadingView } from '../loading-view';
 import { Screen } from '../screen';
 import { Text } from '../text';
+import { BudgetChoices } from './budget-choices';
 import { BudgetLineRow } from './budget-line-row';
 import { ComparisonTable } from './comparison-table';
 import { downloadFile } from './download-file';
@@ -34,13 +35,16 @@ export function MemberBudgetScreen({ jobId, memberId }: { jobId: string; memberI
   if (!budget || !me) return <LoadingView />;
   const canEdit = me.role === 'owner' || me.role === 'estimator';
 
+  const save = async (choices: BudgetChoicesInput, overrides: Record<string, LineOverrideInput>) => {
+    const saved = await saveMemberBudget(memberId, { choices, overrides });
+    await mutate(saved, { revalidate: false });
+    await mutateKey(keys.jobBudget(me.activeOrgId, jobId));
+  };
   const override = async (id: string, change: LineOverrideInput | null) => {
     const overrides = { ...budget.overrides } as Record<string, LineOverrideInput>;
     if (change) overrides[id] = change;
     else delete overrides[id];
-    const saved = await saveMemberBudget(memberId, { choices: budget.choices, overrides });
-    await mutate(saved, { revalidate: false });
-    await mutateKey(keys.jobBudget(me.activeOrgId, jobId));
+    await save(budget.choices, overrides);
   };
 
   return (
@@ -89,6 +93,11 @@ export function MemberBudgetScreen({ jobId, memberId }: { jobId: string; memberI
         <ComparisonTable rows={budget.comparison} />
       </Card>
       <Scenarios budget={budget} />
+      <BudgetChoices
+        choices={budget.choices}
+        canEdit={canEdit}
+        onChange={(choices) => save(choices, budget.overrides as Record<string, LineOverrideInput>)}
+      />
       <Card title="Crew days">
         <Text>
           {budget.schedule.framingDays} framing days, {budget.schedule.returnTrips} return trips for finishes;
