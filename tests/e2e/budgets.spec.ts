@@ -45,6 +45,10 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         );
         const before = await page.getByTestId('budget-total').textContent();
         await snap(page, `budgets/${name}-member-budget`);
+        await page.getByTestId('comparison-table').scrollIntoViewIfNeeded();
+        await page.screenshot({ path: `screenshots/budgets/${name}-member-compare.png` });
+        await page.getByText('Every line').scrollIntoViewIfNeeded();
+        await page.screenshot({ path: `screenshots/budgets/${name}-member-lines.png` });
 
         await page.getByTestId('nav-price-book').click();
         const input = page.getByTestId('price-input-lvl/11.875');

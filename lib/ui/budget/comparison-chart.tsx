@@ -14,10 +14,12 @@ const mark = (row: Row) => (row.cheapest ? 'â˜… ' : '') + (row.preliminary ? 'â–
  * passing size carries a star and the accent, the preliminary size a pointer: never colour alone.
  */
 export default function ComparisonChart({ rows, width }: { rows: readonly Row[]; width: number }) {
+  // A horizontal chart puts x = 1 at the bottom: the first row (shallowest) goes on top.
   const data = rows.map((row, i) => ({
-    x: i + 1,
+    x: rows.length - i,
     y: row.totalCents / 100,
-    label: `${mark(row)}${row.sizeLabel}`,
+    tick: `${mark(row)}${row.sizeLabel}`,
+    label: formatDollars(row.totalCents),
     fill: row.cheapest ? colors.accent : row.passes ? colors.lineStrong : colors.danger,
   }));
   const height = 48 + rows.length * 34;
@@ -31,11 +33,11 @@ export default function ComparisonChart({ rows, width }: { rows: readonly Row[];
         width={width}
         height={height}
         domainPadding={{ x: 18 }}
-        padding={{ top: 12, bottom: 36, left: 150, right: 24 }}
+        padding={{ top: 12, bottom: 36, left: 150, right: 64 }}
       >
         <VictoryAxis
           tickValues={data.map((d) => d.x)}
-          tickFormat={data.map((d) => d.label)}
+          tickFormat={data.map((d) => d.tick)}
           style={{
             tickLabels: { fontFamily: fonts.regular, fontSize: 11, fill: colors.ink },
             axis: { stroke: colors.line },
