@@ -47,7 +47,7 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         await snap(page, `budgets/${name}-member-budget`);
         await page.getByTestId('comparison-table').scrollIntoViewIfNeeded();
         await page.screenshot({ path: `screenshots/budgets/${name}-member-compare.png` });
-        await page.getByText('Every line').scrollIntoViewIfNeeded();
+        await page.getByText('Every line', { exact: true }).scrollIntoViewIfNeeded();
         await page.screenshot({ path: `screenshots/budgets/${name}-member-lines.png` });
 
         await page.getByTestId('nav-price-book').click();

@@ -23,6 +23,8 @@ export default function ComparisonChart({ rows, width }: { rows: readonly Row[];
     fill: row.cheapest ? colors.accent : row.passes ? colors.lineStrong : colors.danger,
   }));
   const height = 48 + rows.length * 34;
+  // On a phone the chart is narrow: fewer money ticks, so their labels never run into each other.
+  const narrow = width < 500;
   return (
     <View testID="comparison-chart" aria-label="Budget by size, chart">
       <Text variant="caption" tone="muted">
@@ -33,7 +35,7 @@ export default function ComparisonChart({ rows, width }: { rows: readonly Row[];
         width={width}
         height={height}
         domainPadding={{ x: 18 }}
-        padding={{ top: 12, bottom: 36, left: 150, right: 64 }}
+        padding={{ top: 12, bottom: 36, left: narrow ? 132 : 150, right: 64 }}
       >
         <VictoryAxis
           tickValues={data.map((d) => d.x)}
@@ -45,7 +47,7 @@ export default function ComparisonChart({ rows, width }: { rows: readonly Row[];
         />
         <VictoryAxis
           dependentAxis
-          tickCount={4}
+          tickCount={narrow ? 2 : 4}
           tickFormat={(t: number) => formatDollars(t * 100)}
           style={{
             tickLabels: { fontFamily: fonts.regular, fontSize: 10, fill: colors.inkMuted },
