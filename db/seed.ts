@@ -2,7 +2,8 @@ import { count } from 'drizzle-orm';
 import type { Db } from './client';
 import { newId } from './new-id';
 import { insertDemoMembers, type EvaluateMember } from './seed-members';
-import { jobs, memberships, organizations, users } from './schema';
+import { jobs, memberships, organizations, priceBookSettings, priceItems, users } from './schema';
+import { DEMO_PRICES, DEMO_STALE_AFTER_DAYS } from './demo-prices';
 import type { OrgKind, Role } from '@/shared/schemas/auth';
 import type { jobInputSchema } from '@/shared/schemas/jobs';
 import type { z } from 'zod';
@@ -131,6 +132,25 @@ export async function insertDemoData(
           .run();
         tx.insert(memberships).values({ id: newId(), userId, orgId, role: person.role, createdAt }).run();
       });
+      if (firm.kind === 'contracting') {
+        // Invented demo prices (db/demo-prices.ts), set by the demo owner.
+        const setAt = at(500);
+        for (const [key, amount] of DEMO_PRICES)
+          tx.insert(priceItems)
+            .values({
+              id: newId(),
+              orgId,
+              key,
+              amount,
+              note: 'Invented demo price',
+              setAt,
+              setBy: userIds[0],
+            })
+            .run();
+        tx.insert(priceBookSettings)
+          .values({ orgId, staleAfterDays: DEMO_STALE_AFTER_DAYS, updatedAt: setAt, updatedBy: userIds[0] })
+          .run();
+      }
       firm.jobs.forEach((job, jobIndex) => {
         const createdAt = at(1000 + jobIndex);
         const row = { id: newId(), orgId, ...job, createdAt, updatedAt: createdAt, archivedAt: null };

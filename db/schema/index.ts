@@ -9,3 +9,4 @@ export * from './design-requests';
 export * from './bearing-screens';
 export * from './job-checklist';
 export * from './shoring-plans';
+export * from './price-book';

@@ -17,6 +17,9 @@ export const keys = {
   checklist: (orgId: string, jobId: string) => ['checklist', orgId, jobId] as const,
   jobProgress: (orgId: string) => ['job-progress', orgId] as const,
   shoring: (orgId: string, memberId: string) => ['shoring', orgId, memberId] as const,
+  priceBook: (orgId: string) => ['price-book', orgId] as const,
+  memberBudget: (orgId: string, memberId: string) => ['member-budget', orgId, memberId] as const,
+  jobBudget: (orgId: string, jobId: string) => ['job-budget', orgId, jobId] as const,
   invitation: (token: string) => ['invitation', token] as const,
   devMail: () => ['dev-mail'] as const,
   /** The signed-in person's sessions (browsers). */
@@ -47,6 +50,9 @@ export function isFirmScopedKey(key: unknown): boolean {
       'requests',
       'job-requests',
       'request',
+      'price-book',
+      'member-budget',
+      'job-budget',
     ].includes(key[0])
   );
 }

@@ -24,6 +24,7 @@ const paths = {
   signOut: ['M14 4H5v16h9', 'M10 12h11', 'm17 8 4 4-4 4'],
   edit: ['M4 20h4L19 9l-4-4L4 16v4Z', 'm13.5 6.5 4 4'],
   lock: ['M6 11h12v9H6z', 'M8.5 11V8a3.5 3.5 0 0 1 7 0v3'],
+  priceBook: ['M5 3h11l3 3v15H5z', 'M9 9h6', 'M9 13h6', 'M9 17h3'],
   swap: ['M4 8h14', 'm15 5 3 3-3 3', 'M20 16H6', 'm9 13-3 3 3 3'],
 } as const;
 

@@ -2,7 +2,7 @@ import type { Role } from '@/shared/schemas/auth';
 import type { IconName } from './icon';
 
 export type NavItem = {
-  href: '/jobs' | '/span-tables' | '/members' | '/requests' | '/account';
+  href: '/jobs' | '/span-tables' | '/members' | '/requests' | '/account' | '/price-book';
   label: string;
   icon: IconName;
 };
@@ -11,12 +11,13 @@ const jobs: NavItem = { href: '/jobs', label: 'Jobs', icon: 'jobs' };
 const spanTables: NavItem = { href: '/span-tables', label: 'Span tables', icon: 'spanTable' };
 const members: NavItem = { href: '/members', label: 'Members', icon: 'members' };
 const requests: NavItem = { href: '/requests', label: 'Requests', icon: 'requests' };
+const priceBook: NavItem = { href: '/price-book', label: 'Price book', icon: 'priceBook' };
 const account: NavItem = { href: '/account', label: 'Account', icon: 'account' };
 
 const byRole: Record<Role, NavItem[]> = {
-  owner: [jobs, spanTables, members, account],
-  contractor: [jobs, spanTables, account],
-  estimator: [jobs, spanTables, account],
+  owner: [jobs, spanTables, members, priceBook, account],
+  contractor: [jobs, spanTables, priceBook, account],
+  estimator: [jobs, spanTables, priceBook, account],
   engineer: [requests, account],
 };
 

@@ -35,6 +35,15 @@ import { packageRouter } from './requests/package.router';
 import { createPackageService } from './requests/package.service';
 import { jobRequestsRouter, requestsRouter } from './requests/requests.router';
 import { createRequestsService } from './requests/requests.service';
+import {
+  jobBudgetRouter,
+  jobSentBudgetsRouter,
+  memberBudgetRouter,
+  sentBudgetsRouter,
+} from './budgets/budgets.router';
+import { createBudgetsService } from './budgets/budgets.service';
+import { priceBookRouter } from './price-book/price-book.router';
+import { createPriceBookService } from './price-book/price-book.service';
 
 export interface ApiOptions {
   db: Db;
@@ -68,6 +77,12 @@ export function apiRouter(options: ApiOptions): Router {
   router.use('/me', meRouter({ me }));
   router.use('/orgs', orgsRouter({ db, orgs: createOrgsService(options) }));
   router.use('/invitations', invitationsRouter({ invitations: createInvitationsService(db), me, sessions }));
+  const budgets = { db, budgets: createBudgetsService(db) };
+  router.use('/price-book', priceBookRouter({ db, priceBook: createPriceBookService(db) }));
+  router.use('/members/:memberId/budget', memberBudgetRouter(budgets));
+  router.use('/jobs/:jobId/budget', jobBudgetRouter(budgets));
+  router.use('/jobs/:jobId/budgets', jobSentBudgetsRouter(budgets));
+  router.use('/budgets', sentBudgetsRouter(budgets));
   const members = { db, members: createMembersService(db) };
   router.use('/jobs/:jobId/members', jobMembersRouter(members));
   const screens = { db, screens: createScreensService(db) };

@@ -1,6 +1,7 @@
 import { count } from 'drizzle-orm';
 import request from 'supertest';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { DEMO_PRICES } from '@/db/demo-prices';
 import { DEMO_PASSWORD, insertDemoData } from '@/db/seed';
 import { DEMO_MEMBERS, demoMemberInput } from '@/db/seed-members';
 import { jobs, members, users } from '@/db/schema';
@@ -24,6 +25,19 @@ describe('demo data', () => {
     expect(await insertDemoData(server.db, hashPassword)).toBe(false);
     expect(server.db.select({ n: count() }).from(users).get()?.n).toBe(4);
     expect(server.db.select({ n: count() }).from(jobs).get()?.n).toBe(3);
+  });
+
+  it('gives the demo firm a price book of invented prices, every fixed item priced', async () => {
+    await insertDemoData(server.db, hashPassword);
+    const agent = request.agent(server.app);
+    await agent
+      .post('/api/auth/sign-in')
+      .send({ email: 'estimator@demo.tributary.test', password: DEMO_PASSWORD })
+      .expect(200);
+    const book = (await agent.get('/api/price-book').expect(200)).body;
+    expect(book.unpriced).toEqual([]);
+    expect(book.items).toHaveLength(DEMO_PRICES.length);
+    expect(book.items.every((i: { note: string }) => i.note === 'Invented demo price')).toBe(true);
   });
 
   it('is not added when someone already signed up', async () => {

@@ -24,6 +24,13 @@ import {
 import { screenCreateSchema, screenPatchSchema } from '@/shared/schemas/bearing-screens';
 import { checklistItemPatchSchema } from '@/shared/schemas/job-checklist';
 import { shoringPlanBodySchema } from '@/shared/schemas/shoring-plans';
+import { memberBudgetSaveSchema, sendBudgetSchema } from '@/shared/schemas/budgets';
+import {
+  priceBookSettingsSchema,
+  priceImportSchema,
+  pricePatchSchema,
+  priceSetSchema,
+} from '@/shared/schemas/price-book';
 import { signUpBody } from './server';
 
 /** Invented demo header: 2-ply 2x10 Douglas Fir-Larch No.2 over 6 ft, under 13 ft of roof and 6 ft of ceiling. */
@@ -118,6 +125,21 @@ export const SAMPLE_BODIES = new Map<z.ZodType, () => unknown>([
   [
     acceptRequestInvitationSchema,
     () => ({ name: 'Invited Engineer', password: 'a long enough password', firmName: 'Sample Structural' }),
+  ],
+  [priceSetSchema, () => ({ key: 'rate/carpenter', amount: 7000 + (counter += 1), note: 'Sample price' })],
+  [pricePatchSchema, () => ({ amount: 7100 + (counter += 1) })],
+  [priceBookSettingsSchema, () => ({ staleAfterDays: 60 })],
+  [priceImportSchema, () => ({ csv: `key,value,note\r\nmarkup/tax,8.25,Sample ${unique()}\r\n` })],
+  [
+    memberBudgetSaveSchema,
+    () => ({
+      choices: { shoring: 'rented', allowances: ['wiring'] },
+      overrides: { 'demolition/disposal': { quantity: 2, note: `Two loads ${unique()}` } },
+    }),
+  ],
+  [
+    sendBudgetSchema,
+    () => ({ clientName: `Sample client ${unique()}`, exclusions: ['Painting the whole room'] }),
   ],
 ]);
 

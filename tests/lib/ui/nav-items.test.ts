@@ -5,9 +5,9 @@ const labels = (role: Parameters<typeof navItemsForRole>[0]) => navItemsForRole(
 
 describe('navigation by role', () => {
   it('gives each role its tabs', () => {
-    expect(labels('owner')).toEqual(['Jobs', 'Span tables', 'Members', 'Account']);
-    expect(labels('contractor')).toEqual(['Jobs', 'Span tables', 'Account']);
-    expect(labels('estimator')).toEqual(['Jobs', 'Span tables', 'Account']);
+    expect(labels('owner')).toEqual(['Jobs', 'Span tables', 'Members', 'Price book', 'Account']);
+    expect(labels('contractor')).toEqual(['Jobs', 'Span tables', 'Price book', 'Account']);
+    expect(labels('estimator')).toEqual(['Jobs', 'Span tables', 'Price book', 'Account']);
     expect(labels('engineer')).toEqual(['Requests', 'Account']);
   });
 

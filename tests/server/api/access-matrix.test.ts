@@ -54,6 +54,19 @@ const REQUEST_FIRM_ANSWER: Record<string, 403 | 409> = {
   'GET /api/requests/:requestId/loads.csv': 409,
   'GET /api/requests/:requestId/photos.zip': 409,
 };
+/** Who may change the price book and budgets: the owner and the estimator (contractors read). */
+const BUDGET_WRITERS: Role[] = ['owner', 'estimator'];
+
+/** Routes whose rule differs from their area's, by exact method and path. */
+const BY_ROUTE = new Map<string, Rule>([
+  ['PUT /api/members/:memberId/budget', { kind: 'firm', roles: BUDGET_WRITERS }],
+  ['POST /api/jobs/:jobId/budgets', { kind: 'firm', roles: BUDGET_WRITERS }],
+  ['PATCH /api/price-book/settings', { kind: 'firm', roles: BUDGET_WRITERS }],
+  ['POST /api/price-book/items', { kind: 'firm', roles: BUDGET_WRITERS }],
+  ['PATCH /api/price-book/items/:itemId', { kind: 'firm', roles: BUDGET_WRITERS }],
+  ['DELETE /api/price-book/items/:itemId', { kind: 'firm', roles: BUDGET_WRITERS }],
+  ['POST /api/price-book/import', { kind: 'firm', roles: BUDGET_WRITERS }],
+]);
 
 /** Areas by path: a route is in an area when its path is the area's or lies below it. */
 const AREAS: [area: string, rule: Rule][] = [
@@ -69,6 +82,8 @@ const AREAS: [area: string, rule: Rule][] = [
   ['/api/job-progress', { kind: 'firm', roles: CONTRACTING }],
   ['/api/dev/mail', { kind: 'dev-mail-key' }],
   ['/api/requests', { kind: 'request' }],
+  ['/api/price-book', { kind: 'firm', roles: CONTRACTING }],
+  ['/api/budgets', { kind: 'firm', roles: CONTRACTING }],
 ];
 
 /** Routes that end the caller's sessions: each try gets a session of its own, and a new one after. */
@@ -76,6 +91,8 @@ const SESSION_ENDING = new Set(['POST /api/auth/sign-out-everywhere']);
 
 function ruleFor(route: ApiRoute): Rule | undefined {
   if (PUBLIC.has(`${route.method.toUpperCase()} ${route.path}`)) return { kind: 'public' };
+  const own = BY_ROUTE.get(`${route.method.toUpperCase()} ${route.path}`);
+  if (own) return own;
   return AREAS.find(([area]) => route.path === area || route.path.startsWith(`${area}/`))?.[1];
 }
 
@@ -96,7 +113,7 @@ const firmA = ['owner', 'contractor', 'estimator'] as const;
 function expectSafe(res: request.Response, what: string) {
   expect(res.status, `${what}: ${res.text}`).toBeLessThan(500);
   expect(res.headers['cache-control'], what).toBe('no-store');
-  // A file download (an image) has no text: its bytes are read as Latin-1 so a leaked name still shows.
+  // A binary answer (a PDF, an image) has no text: its bytes are read as Latin-1 so a leaked name still shows.
   const text = res.text ?? (Buffer.isBuffer(res.body) ? res.body.toString('latin1') : '');
   for (const marker of world.firmBMarkers)
     expect(text, `${what} leaks firm B's ${marker}`).not.toContain(marker);

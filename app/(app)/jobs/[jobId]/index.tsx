@@ -69,6 +69,7 @@ export default function JobPage() {
       <TextLink href="/jobs" label="All jobs" />
       <JobScreensPanel jobId={job.id} />
       <JobMembersPanel job={job} recomputed={recomputed} />
+      <TextLink href={`/jobs/${job.id}/budget`} label="Job budget" />
       <JobRequestsPanel job={job} />
       <ShoringPanel jobId={job.id} />
       <ChecklistPanel jobId={job.id} />

@@ -1,4 +1,7 @@
 import { useLocalSearchParams } from 'expo-router';
+import { StyleSheet, View } from 'react-native';
+import { spacing } from '@/lib/theme';
+import { TextLink } from '@/lib/ui/text-link';
 import { useJob } from '@/lib/hooks/use-job';
 import { useMe } from '@/lib/hooks/use-me';
 import { useMember } from '@/lib/hooks/use-member';
@@ -30,16 +33,26 @@ export default function MemberPage() {
     );
   if (!job.data || !member.data || !me) return <LoadingView />;
   return (
-    <WorkspaceSuspense>
-      <LazyMemberEditor
-        key={member.data.id}
-        job={job.data}
-        member={member.data}
-        kind={member.data.kind}
-        storageKey={`${me.user.id}.${job.data.id}.${member.data.id}`}
-        onSave={save}
-        justSaved={saved === '1'}
-      />
-    </WorkspaceSuspense>
+    <View style={styles.page}>
+      <View style={styles.links}>
+        <TextLink href={`/jobs/${jobId}/budget/${memberId}`} label="Budget for this member" />
+      </View>
+      <WorkspaceSuspense>
+        <LazyMemberEditor
+          key={member.data.id}
+          job={job.data}
+          member={member.data}
+          kind={member.data.kind}
+          storageKey={`${me.user.id}.${job.data.id}.${member.data.id}`}
+          onSave={save}
+          justSaved={saved === '1'}
+        />
+      </WorkspaceSuspense>
+    </View>
   );
 }
+
+const styles = StyleSheet.create({
+  page: { flex: 1 },
+  links: { paddingHorizontal: spacing.lg, paddingTop: spacing.sm },
+});

@@ -1,0 +1,5 @@
+import { PriceBookScreen } from '@/lib/ui/budget/price-book-screen';
+
+export default function PriceBookPage() {
+  return <PriceBookScreen />;
+}
