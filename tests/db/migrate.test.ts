@@ -16,15 +16,29 @@ describe('migrations', () => {
       .map((row) => row.name)
       .filter((name) => !name.startsWith('__drizzle') && !name.startsWith('sqlite_'));
     expect(tables).toEqual([
+      'attachments',
       'audit_events',
       'auth_tokens',
+      'bearing_screen_versions',
+      'bearing_screens',
+      'design_request_versions',
+      'design_requests',
+      'engineer_replies',
       'invitations',
+      'job_checklist_items',
       'jobs',
       'mail_outbox',
+      'member_budgets',
       'members',
       'memberships',
       'organizations',
+      'price_book_settings',
+      'price_items',
+      'request_invitations',
+      'request_messages',
+      'sent_budgets',
       'sessions',
+      'shoring_plans',
       'users',
     ]);
     expect(database.db.get<{ foreign_keys: number }>(sql`pragma foreign_keys`)).toEqual({ foreign_keys: 1 });
