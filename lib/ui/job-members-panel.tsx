@@ -2,11 +2,12 @@ import { Link } from 'expo-router';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { formatNumber } from '@/lib/format';
 import { useJobMembers } from '@/lib/hooks/use-job-members';
-import { colors, layout, radii, spacing } from '@/lib/theme';
+import { colors, spacing } from '@/lib/theme';
 import type { MemberRecompute } from '@/shared/schemas/job-update';
 import type { Job } from '@/shared/schemas/jobs';
 import type { MemberListItem } from '@/shared/schemas/members';
 import { Card } from './card';
+import { cardRowStyles } from './card-row-styles';
 import { ErrorView } from './error-view';
 import { Icon } from './icon';
 import { LinkButton } from './link-button';
@@ -25,11 +26,11 @@ function MemberRow({ member }: { member: MemberListItem }) {
       }}
       asChild
     >
-      <Pressable aria-label={`${member.label}: ${look.word}`} testID="member-row" style={styles.link}>
+      <Pressable aria-label={`${member.label}: ${look.word}`} testID="member-row" style={cardRowStyles.link}>
         {({ pressed }) => (
-          <View style={[styles.row, pressed && styles.pressed]}>
+          <View style={[cardRowStyles.row, pressed && cardRowStyles.pressed]}>
             <Icon name={look.icon} color={look.tone === 'danger' ? colors.danger : colors.ink} />
-            <View style={styles.text}>
+            <View style={cardRowStyles.text}>
               <Text variant="bodyStrong">{member.label}</Text>
               <Text tone={look.tone}>{look.word}</Text>
               <Text variant="caption" tone="muted">
@@ -95,19 +96,5 @@ export function JobMembersPanel({
 }
 
 const styles = StyleSheet.create({
-  link: { borderRadius: radii.md },
-  row: {
-    minHeight: layout.touchTarget,
-    flexDirection: 'row',
-    alignItems: 'center',
-    gap: spacing.md,
-    padding: spacing.md,
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radii.md,
-    backgroundColor: colors.paper,
-  },
-  pressed: { backgroundColor: colors.surfaceSunken },
-  text: { flex: 1, gap: spacing.xxs },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
 });

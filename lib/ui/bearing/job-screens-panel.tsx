@@ -1,8 +1,9 @@
 import { Link } from 'expo-router';
-import { Pressable, StyleSheet, View } from 'react-native';
+import { Pressable, View } from 'react-native';
 import { useJobScreens } from '@/lib/hooks/use-job-screens';
-import { colors, layout, radii, spacing } from '@/lib/theme';
+import { colors } from '@/lib/theme';
 import { Card } from '@/lib/ui/card';
+import { cardRowStyles as styles } from '@/lib/ui/card-row-styles';
 import { ErrorView } from '@/lib/ui/error-view';
 import { Icon } from '@/lib/ui/icon';
 import { LinkButton } from '@/lib/ui/link-button';
@@ -73,20 +74,3 @@ export function JobScreensPanel({ jobId }: { jobId: string }) {
     </Card>
   );
 }
-
-const styles = StyleSheet.create({
-  link: { borderRadius: radii.md },
-  row: {
-    minHeight: layout.touchTarget,
-    flexDirection: 'row',
-    alignItems: 'center',
-    gap: spacing.md,
-    padding: spacing.md,
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radii.md,
-    backgroundColor: colors.paper,
-  },
-  pressed: { backgroundColor: colors.surfaceSunken },
-  text: { flex: 1, gap: spacing.xxs },
-});
