@@ -23,4 +23,5 @@ export * from './shortlist';
 export * from './span-table';
 export * from './prescriptive';
 export * from './screening';
+export * from './load-path';
 export * from './version';

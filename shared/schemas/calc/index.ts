@@ -8,3 +8,4 @@ export * from './member';
 export * from './shoring';
 export * from './shortlist';
 export * from './span-table';
+export * from './load-path';
