@@ -49,6 +49,10 @@ export async function openIdbStore(name: string): Promise<DeviceStore> {
     setMeta: async (key, value) => {
       await open().put('meta', value, key);
     },
+    close: () => {
+      db?.close();
+      db = null;
+    },
     destroy: async () => {
       db?.close();
       db = null;

@@ -41,6 +41,7 @@ export function createMemoryStore(name: string): DeviceStore {
     setMeta: async (key, value) => {
       meta.set(key, copy(value));
     },
+    close: () => undefined,
     destroy: async () => {
       records.clear();
       outbox.clear();

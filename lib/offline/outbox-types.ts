@@ -68,6 +68,8 @@ export interface DeviceStore {
   deleteBlob(id: string): Promise<void>;
   getMeta(key: string): Promise<unknown>;
   setMeta(key: string, value: unknown): Promise<void>;
+  /** Closes the database (another person signed in); it stays on the device for its owner. */
+  close(): void;
   /** Closes and deletes the whole database. */
   destroy(): Promise<void>;
 }

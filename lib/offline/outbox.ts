@@ -57,6 +57,11 @@ function errorOf(body: unknown): { message?: string; current?: unknown } {
     : {};
 }
 
+const idOf = (record: unknown): string | undefined =>
+  typeof record === 'object' && record !== null && typeof (record as { id?: unknown }).id === 'string'
+    ? (record as { id: string }).id
+    : undefined;
+
 const versionOf = (record: unknown): number | undefined =>
   typeof record === 'object' &&
   record !== null &&
@@ -91,8 +96,21 @@ export function createOutbox(options: OutboxOptions) {
     }
   }
 
+  /**
+   * A server that made its own id for a create (one that does not take the client's id): later writes that
+   * name the device's id (a member of a job made offline) are rewritten to the server's id.
+   */
+  async function remap(localId: string, serverId: string) {
+    for (const later of await store.listOutbox()) {
+      const text = JSON.stringify(later);
+      if (text.includes(localId)) await store.putOutbox(JSON.parse(text.split(localId).join(serverId)));
+    }
+  }
+
   async function succeeded(item: OutboxItem, body: unknown) {
     await store.deleteOutbox(item.seq);
+    const serverId = idOf(body);
+    if (item.create && serverId && serverId !== item.recordId) await remap(item.recordId, serverId);
     if (item.blobId) await store.deleteBlob(item.blobId);
     await store.setMeta('lastSyncAt', now());
     await options.onSent?.(item, body);
@@ -114,8 +132,11 @@ export function createOutbox(options: OutboxOptions) {
       let sent = 0;
       try {
         const held = new Set<string>();
-        for (const item of await store.listOutbox()) {
-          if (held.has(item.group)) continue;
+        const order = (await store.listOutbox()).map((i) => i.seq);
+        for (const seq of order) {
+          // Read again: a create sent just before may have rewritten this item (remap).
+          const item = (await store.listOutbox()).find((i) => i.seq === seq);
+          if (!item || held.has(item.group)) continue;
           if (item.status !== 'waiting' || item.nextAttemptAt > now()) {
             held.add(item.group);
             continue;
@@ -260,6 +281,13 @@ export function createOutbox(options: OutboxOptions) {
       if (item.blobId) await store.deleteBlob(item.blobId);
       await options.onDiscarded?.(item);
       changed();
+    },
+    /** The network is back: every waiting item is due now, whatever its backoff said. */
+    async wake() {
+      for (const item of await store.listOutbox())
+        if (item.status === 'waiting' && item.nextAttemptAt > now())
+          await store.putOutbox({ ...item, nextAttemptAt: now() });
+      return flush();
     },
     /** When the next waiting item is due (for the retry timer), or null. */
     async nextDueAt(): Promise<number | null> {

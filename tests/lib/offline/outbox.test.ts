@@ -238,4 +238,25 @@ describe('outbox', () => {
     expect(discarded).toEqual(['m1']);
     expect(await store.listOutbox()).toEqual([]);
   });
+
+  it('rewrites later writes to the server’s id when the server made its own id for a create', async () => {
+    const { outbox, server, clock } = setup([
+      () => 'offline',
+      () => ({ status: 201, body: { id: 'server-job' } }),
+      () => ({ status: 201, body: { id: 'server-member' } }),
+    ]);
+    await outbox.submit(write('local-job', 'local-job', { entity: 'job', path: '/api/jobs' }));
+    await outbox.submit(write('m1', 'local-job'));
+    clock.t += 2000;
+    expect(await outbox.flush()).toBe(2);
+    expect(server.calls.at(-1)).toMatchObject({ path: '/api/jobs/server-job/members' });
+  });
+
+  it('wake makes every waiting item due at once when the network returns', async () => {
+    const { outbox, server } = setup([() => 'offline']);
+    await outbox.submit(write('m1'));
+    expect(await outbox.flush()).toBe(0);
+    expect(await outbox.wake()).toBe(1);
+    expect(server.calls.map((c) => c.key)).toEqual(['key-m1', 'key-m1']);
+  });
 });
