@@ -2,6 +2,7 @@
 // migrates the SQLite database, seeds the demo firm on first start and runs the local mail fake.
 import { spawn, spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
+import { buildServiceWorker } from './build-service-worker.mjs';
 
 if (!existsSync('dist/index.html') || process.env.REBUILD_WEB === '1') {
   console.log('Exporting the web app (first start takes about a minute)…');
@@ -10,6 +11,7 @@ if (!existsSync('dist/index.html') || process.env.REBUILD_WEB === '1') {
     env: { ...process.env, CI: '1' },
   });
   if (build.status !== 0) process.exit(build.status ?? 1);
+  await buildServiceWorker('dist');
 }
 
 const server = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], { stdio: 'inherit' });

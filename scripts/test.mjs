@@ -49,7 +49,8 @@ countVitest('test-results/unit.json');
 if (
   run('web export (expo export)', 'npx', ['expo', 'export', '--platform', 'web', '--output-dir', 'dist'], {
     CI: '1',
-  })
+  }) &&
+  run('service worker (workbox generateSW)', 'node', ['scripts/build-service-worker.mjs', 'dist'])
 ) {
   const chromium = ensureChromium();
   run(
