@@ -79,7 +79,8 @@ export async function apiRequest<S extends z.ZodType>(
   return parsed.data;
 }
 
-function parseJson(text: string): unknown {
+/** The JSON of an answer's text, or undefined when it is empty or not JSON. */
+export function parseJson(text: string): unknown {
   if (text === '') return undefined;
   try {
     return JSON.parse(text);

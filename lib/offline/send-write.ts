@@ -1,14 +1,6 @@
 import type { Sender } from './outbox';
 import { NetworkFailure } from './outbox';
-
-function parseJson(text: string): unknown {
-  if (text === '') return undefined;
-  try {
-    return JSON.parse(text);
-  } catch {
-    return undefined;
-  }
-}
+import { parseJson } from '@/lib/api/client';
 
 /**
  * Sends one queued write to the API with its Idempotency-Key and the firm it was made in. A photo goes as
