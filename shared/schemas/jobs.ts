@@ -84,6 +84,8 @@ export const jobSchema = jobInputSchema.extend({
   createdAt: z.string(),
   updatedAt: z.string(),
   archivedAt: z.string().nullable(),
+  /** 1 on create, +1 on every change (docs/sync-protocol.md). */
+  version: z.number().int(),
 });
 export type Job = z.infer<typeof jobSchema>;
 

@@ -51,7 +51,16 @@ export function findJob(db: DbOrTx, orgId: string, jobId: string): Job | undefin
 
 export function insertJob(db: DbOrTx, orgId: string, createdBy: string, fields: JobFields): Job {
   const now = new Date().toISOString();
-  const row = { id: newId(), orgId, createdBy, ...fields, createdAt: now, updatedAt: now, archivedAt: null };
+  const row = {
+    id: newId(),
+    orgId,
+    createdBy,
+    ...fields,
+    createdAt: now,
+    updatedAt: now,
+    archivedAt: null,
+    version: 1,
+  };
   db.insert(jobs).values(row).run();
   return toJob(row);
 }
