@@ -65,6 +65,14 @@ function NextStep({ screen }: { screen: ScreenWithHistory }) {
           {screen.result.engineerReasons.map((r) => (
             <Text key={r}>• {r}</Text>
           ))}
+          <View style={styles.actions}>
+            <LinkButton
+              label="Start a design request with these reasons"
+              icon="requests"
+              href={{ pathname: '/jobs/[jobId]/requests/new', params: fromScreen }}
+              testID="screen-new-request"
+            />
+          </View>
         </Notice>
       );
     case 'cant-tell':
