@@ -128,6 +128,7 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
           .poll(() => note.inputValue())
           .toMatch(/^Bearing screen of the wall "Living \/ dining" \(version 1\): engineer required\./);
         expect(await note.inputValue()).toMatch(/• Roof thrust: .*\(seen; IRC 2021 R802\.5\.2/);
+        await note.scrollIntoViewIfNeeded();
         await shot(page, `${name}-screen-engineer-request`);
         await page.getByTestId('compose-save').click();
         await expect.poll(() => page.getByTestId('request-status').innerText()).toBe('Draft');
@@ -183,6 +184,7 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
           .getByText(/plate along the joists/)
           .waitFor();
         await page.getByTestId('shoring-result').getByText('Plan does not hold').waitFor();
+        await page.getByTestId('shoring-status').scrollIntoViewIfNeeded();
         await shot(page, `${name}-shoring-live`);
         await page.getByTestId('shoring-setback').fill('-1');
         await page
@@ -197,7 +199,7 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         await page.getByTestId('shoring-save').click();
         await page
           .getByTestId('shoring-status')
-          .getByText(/Saved\. The plan shown is the server’s/)
+          .getByText(/The plan shown is the server’s/)
           .waitFor();
         expect(await page.getByTestId('shoring-differs').count()).toBe(0);
         await page

@@ -275,11 +275,11 @@ export function ShoringPlanner({
       </Card>
       {showSaved ? (
         <>
-          <Notice tone="success" testID="shoring-status">
-            Saved. The plan shown is the server’s.
+          <Notice tone="success" title="Saved" testID="shoring-status">
+            The plan shown is the server’s.
           </Notice>
           {differs ? (
-            <Notice tone="warning" testID="shoring-differs">
+            <Notice tone="warning" title="Device and server differ" testID="shoring-differs">
               {differs}
             </Notice>
           ) : null}
@@ -287,13 +287,13 @@ export function ShoringPlanner({
         </>
       ) : live.ok ? (
         <>
-          <Notice tone="info" testID="shoring-status">
-            Computed on this device as you type; not saved yet.
+          <Notice tone="info" title="Not saved yet" testID="shoring-status">
+            Computed on this device as you type. Save the plan to keep it on the member.
           </Notice>
           <ShoringResult result={live.result} input={live.body} />
         </>
       ) : (
-        <Notice tone="info" testID="shoring-status">
+        <Notice tone="info" title="No plan yet" testID="shoring-status">
           Fix the fields marked above to see the plan.
         </Notice>
       )}

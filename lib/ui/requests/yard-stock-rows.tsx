@@ -33,7 +33,7 @@ export function YardStockRows({
           <View style={styles.cell}>
             <TextField
               label={`Product ${i + 1}`}
-              placeholder="1-3/4 × 11-7/8 in LVL"
+              placeholder="e.g. 1-3/4 × 11-7/8 in LVL"
               value={row.product}
               onChangeText={(product) => set(i, { product })}
               errors={errors[`phoneBack.yardStock.${i}.product`]}
@@ -43,7 +43,7 @@ export function YardStockRows({
           <View style={styles.grade}>
             <TextField
               label="E grade"
-              placeholder="2.0E"
+              placeholder="e.g. 2.0E"
               value={row.eGrade}
               onChangeText={(eGrade) => set(i, { eGrade })}
               errors={errors[`phoneBack.yardStock.${i}.eGrade`]}
