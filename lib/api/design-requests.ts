@@ -12,7 +12,7 @@ import {
 } from '@/shared/schemas/requests/views';
 import type { RequestState, StatusChange } from '@/shared/schemas/requests/workflow';
 import { getActiveOrgId } from './active-org';
-import { ApiError, apiRequest } from './client';
+import { ApiError, apiRequest, noContentSchema } from './client';
 
 const path = (requestId: string, rest = '') => `/api/requests/${encodeURIComponent(requestId)}${rest}`;
 
@@ -65,6 +65,10 @@ export const downloadPath = (
 
 export const filePath = (requestId: string, fileId: string, size: 'original' | 'preview' = 'original') =>
   path(requestId, `/attachments/${encodeURIComponent(fileId)}${size === 'preview' ? '?size=preview' : ''}`);
+
+/** Removes a photo or sketch from a Draft (refused once the request was sent). */
+export const removeRequestFile = (requestId: string, fileId: string) =>
+  apiRequest('DELETE', path(requestId, `/attachments/${encodeURIComponent(fileId)}`), noContentSchema);
 
 /** Uploads one file (multipart) with its purpose, place tag and caption. */
 export async function uploadRequestFile(

@@ -36,6 +36,11 @@ async function answer(page: Page, question: string, value: string): Promise<void
 /** An interior wall under an attic, ceiling joists parallel to it, nothing above or below (invented). */
 async function screenWall(page: Page, wall: string, tie: 'yes' | 'no'): Promise<void> {
   await page.getByTestId('screen-new').click();
+  await page.getByTestId('screen-step').waitFor();
+  // Answers left unsaved earlier in this browser come back: start this wall afresh.
+  if ((await page.getByTestId('screen-draft-restored').count()) > 0) {
+    await page.getByTestId('screen-draft-discard').click();
+  }
   await page.getByTestId('screen-wall-label').fill(wall);
   await page.getByTestId('screen-next').click();
   const steps: [string, string][] = [
@@ -114,6 +119,24 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         await shot(page, `${name}-screen-engineer`);
         await page.getByTestId('screen-reasons').scrollIntoViewIfNeeded();
         await shot(page, `${name}-screen-engineer-reasons`);
+        const screenUrl = page.url();
+        // The outcome opens a design request holding the reasons, each with its basis and source.
+        await page.getByTestId('screen-new-request').click();
+        await page.getByTestId('compose-from-screen').waitFor();
+        const note = page.getByTestId('compose-conditions.bearingPoints');
+        await expect
+          .poll(() => note.inputValue())
+          .toMatch(/^Bearing screen of the wall "Living \/ dining" \(version 1\): engineer required\./);
+        expect(await note.inputValue()).toMatch(/• Roof thrust: .*\(seen; IRC 2021 R802\.5\.2/);
+        await note.scrollIntoViewIfNeeded();
+        await shot(page, `${name}-screen-engineer-request`);
+        await page.getByTestId('compose-save').click();
+        await expect.poll(() => page.getByTestId('request-status').innerText()).toBe('Draft');
+        const requestId = page.url().split('/requests/')[1].split(/[/?]/)[0];
+        const draft = await page.request.get(`${baseUrl}/api/requests/${requestId}`);
+        expect((await draft.json()).draft.conditions.bearingPoints).toMatch(/Roof thrust/);
+        await page.goto(screenUrl);
+        await page.getByTestId('screen-outcome').waitFor();
         await page.getByText('Back to the job').click();
         await page
           .getByTestId('job-engineer-needed')
@@ -149,8 +172,36 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         await page.getByRole('link', { name: `Plan shoring: Family room beam ${name}` }).click();
         await page.getByTestId('shoring-span-a').fill('12');
         await page.getByTestId('shoring-span-b').fill('10');
+        // The plan is computed on the device as it is typed, before any save.
+        await page
+          .getByTestId('shoring-status')
+          .getByText(/Computed on this device as you type/)
+          .waitFor();
+        await page.getByTestId('shoring-takeoff-A').waitFor();
         await page.getByTestId('shoring-stands-on-floor-framing-parallel').click();
+        await page
+          .getByTestId('standing-A')
+          .getByText(/plate along the joists/)
+          .waitFor();
+        await page.getByTestId('shoring-result').getByText('Plan does not hold').waitFor();
+        await page.getByTestId('shoring-status').scrollIntoViewIfNeeded();
+        await shot(page, `${name}-shoring-live`);
+        await page.getByTestId('shoring-setback').fill('-1');
+        await page
+          .getByText(/The setback must be above 0/)
+          .first()
+          .waitFor();
+        await page
+          .getByTestId('shoring-status')
+          .getByText(/Fix the fields marked above/)
+          .waitFor();
+        await page.getByTestId('shoring-setback').fill('2');
         await page.getByTestId('shoring-save').click();
+        await page
+          .getByTestId('shoring-status')
+          .getByText(/The plan shown is the server’s/)
+          .waitFor();
+        expect(await page.getByTestId('shoring-differs').count()).toBe(0);
         await page
           .getByTestId('standing-A')
           .getByText(/plate along the joists/)
@@ -175,6 +226,39 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
           .waitFor();
         await page.getByTestId('shoring-wall-A').scrollIntoViewIfNeeded();
         await shot(page, `${name}-shoring`);
+      } finally {
+        await close();
+      }
+    });
+
+    it('keeps the answers in progress on the device and offers them back after a reload', async () => {
+      const { page, close } = await openBrowser(name);
+      try {
+        await signInAsContractor(page);
+        await openJob(page, 'Ranch');
+        await page.getByTestId('screen-new').click();
+        await page.getByTestId('screen-wall-label').fill(`Den / office ${name}`);
+        await page.getByTestId('screen-next').click();
+        await answer(page, 'exterior', 'no');
+        await answer(page, 'above', 'attic');
+        await page.getByTestId('question-joistDirection').waitFor();
+        const step = await page.getByTestId('screen-step').innerText();
+        await page.reload();
+        await page.getByTestId('screen-draft-restored').waitFor();
+        // Back at the same step, with the earlier answers and the wall's name.
+        await page.getByTestId('question-joistDirection').waitFor();
+        expect(await page.getByTestId('screen-step').innerText()).toBe(step);
+        await shot(page, `${name}-screen-restored`);
+        await page.getByTestId('screen-back').click();
+        await page.getByTestId('question-above').waitFor();
+        expect(await page.getByTestId('answer-above-attic').getAttribute('aria-checked')).toBe('true');
+        await page.getByTestId('screen-draft-discard').click();
+        await page.getByTestId('screen-wall-label').waitFor();
+        expect(await page.getByTestId('screen-wall-label').inputValue()).toBe('');
+        expect(await page.getByTestId('screen-draft-restored').count()).toBe(0);
+        await page.reload();
+        await page.getByTestId('screen-wall-label').waitFor();
+        expect(await page.getByTestId('screen-draft-restored').count()).toBe(0);
       } finally {
         await close();
       }

@@ -17,6 +17,7 @@ export {
   type StandingSurfaceResult,
   type StandingVerdict,
 } from './standing-surface';
+export { evaluateShoringPlan } from './shoring-evaluate';
 export { planShoring, type ShoringLine, type ShoringPlan, type ShoringWallPlan } from './shoring-plan';
 export {
   NORMAL_WEIGHT_CONCRETE_PCF,

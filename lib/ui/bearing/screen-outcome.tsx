@@ -60,11 +60,19 @@ function NextStep({ screen }: { screen: ScreenWithHistory }) {
         <Notice tone="error" title="The job is marked engineer needed" testID="engineer-next">
           <Text>
             Do not open this wall on a preliminary check. A licensed engineer designs what replaces it; send
-            them these reasons with the job.
+            them these reasons with the job. A design request started here already holds them.
           </Text>
           {screen.result.engineerReasons.map((r) => (
             <Text key={r}>• {r}</Text>
           ))}
+          <View style={styles.actions}>
+            <LinkButton
+              label="Start a design request"
+              icon="requests"
+              href={{ pathname: '/jobs/[jobId]/requests/new', params: fromScreen }}
+              testID="screen-new-request"
+            />
+          </View>
         </Notice>
       );
     case 'cant-tell':

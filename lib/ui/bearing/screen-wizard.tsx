@@ -8,6 +8,7 @@ import { Notice } from '@/lib/ui/notice';
 import { Text } from '@/lib/ui/text';
 import { TextField } from '@/lib/ui/text-field';
 import type { ScreenAnswer, ScreenAnswers, ScreenQuestionId } from '@/shared/schemas/bearing-screen-answers';
+import { useScreenDraft, type ScreenDraft } from '@/lib/hooks/use-screen-draft';
 import { AnswerStep } from './answer-step';
 import { QUESTION_ORDER } from './question-copy';
 
@@ -25,24 +26,39 @@ function spanText(ft: number | undefined) {
 /**
  * The bearing screen, one question per screen: the wall's name, each question that applies to this wall (the
  * engine's own list, so answering "another floor above" drops the roof questions), then the joist spans
- * each side (for a bearing wall's member). Nothing is saved until the last step.
+ * each side (for a bearing wall's member). Nothing is saved until the last step; until then the answers are
+ * kept on the device and offered back after a reload.
  */
 export function ScreenWizard({
   initialLabel,
   initialAnswers,
+  storageKey,
   onSave,
 }: {
   initialLabel: string;
   initialAnswers: ScreenAnswers;
+  /** Device storage key of the answers in progress (carries the user, job and screen). */
+  storageKey: string;
   onSave: WizardSave;
 }) {
-  const [wallLabel, setWallLabel] = useState(initialLabel);
-  const [answers, setAnswers] = useState<ScreenAnswers>(initialAnswers);
-  const [spans, setSpans] = useState({
-    a: spanText(initialAnswers.joistSpanAFt),
-    b: spanText(initialAnswers.joistSpanBFt),
-  });
-  const [stepKey, setStepKey] = useState<Step>('wall');
+  const initial = useMemo<ScreenDraft>(
+    () => ({
+      wallLabel: initialLabel,
+      answers: initialAnswers,
+      spans: { a: spanText(initialAnswers.joistSpanAFt), b: spanText(initialAnswers.joistSpanBFt) },
+      step: 'wall',
+    }),
+    [initialLabel, initialAnswers],
+  );
+  const device = useScreenDraft(initial, storageKey);
+  const { wallLabel, answers, spans } = device.draft;
+  const stepKey = device.draft.step as Step;
+  const setWallLabel = (label: string) => device.update((d) => ({ ...d, wallLabel: label }));
+  const setAnswers = (change: (a: ScreenAnswers) => ScreenAnswers) =>
+    device.update((d) => ({ ...d, answers: change(d.answers) }));
+  const setSpans = (change: (s: ScreenDraft['spans']) => ScreenDraft['spans']) =>
+    device.update((d) => ({ ...d, spans: change(d.spans) }));
+  const setStepKey = (step: Step) => device.update((d) => ({ ...d, step }));
   const [busy, setBusy] = useState(false);
   const [problem, setProblem] = useState<{ message: string; fields: Record<string, string[]> } | null>(null);
 
@@ -71,11 +87,23 @@ export function ScreenWizard({
       joistSpanBFt: readSpan(spans.b),
     });
     setBusy(false);
+    if (outcome.ok) device.forget();
     setProblem(outcome.ok ? null : { message: outcome.message, fields: outcome.fields });
   };
 
   return (
     <View style={styles.wrap}>
+      {device.restored ? (
+        <Notice tone="info" title="Unsaved answers on this device" testID="screen-draft-restored">
+          <Text>The answers you gave before are back, at the step you left. Carry on, or start again.</Text>
+          <Button
+            label="Discard these answers"
+            variant="secondary"
+            onPress={() => device.forget(initial)}
+            testID="screen-draft-discard"
+          />
+        </Notice>
+      ) : null}
       <Text variant="label" tone="muted" testID="screen-step">
         Step {index + 1} of {steps.length}
       </Text>

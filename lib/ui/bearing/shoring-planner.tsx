@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useDeferredValue, useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { useSWRConfig } from 'swr';
 import { ApiError } from '@/lib/api/client';
@@ -11,8 +11,15 @@ import { Card } from '@/lib/ui/card';
 import { ChoiceGroup } from '@/lib/ui/choice-group';
 import { Notice } from '@/lib/ui/notice';
 import { TextField } from '@/lib/ui/text-field';
+import { jsonEqual } from '@/lib/ui/json-equal';
+import type { MemberCheckInput } from '@/shared/schemas/calc/member';
 import type { ShoringSurface } from '@/shared/schemas/calc/shoring';
-import type { ShoringRecord } from '@/shared/schemas/shoring-plans';
+import {
+  shoringResultSchema,
+  type ShoringPlanBodyInput,
+  type ShoringRecord,
+} from '@/shared/schemas/shoring-plans';
+import { liveShoring } from './live-shoring';
 import { ShoringResult } from './shoring-result';
 
 const SURFACES: { value: ShoringSurface; label: string; description: string }[] = [
@@ -64,40 +71,68 @@ function formOf(saved: ShoringRecord | null): Form {
   };
 }
 
-/** The temporary shoring planner of a member: layout, studs or rented shores, what the walls stand on. */
-export function ShoringPlanner({ memberId, saved }: { memberId: string; saved: ShoringRecord | null }) {
+function bodyOf(form: Form): ShoringPlanBodyInput {
+  return {
+    layout: form.layout,
+    joistSpanAFt: num(form.spanA),
+    joistSpanBFt: form.layout === 'both-sides' ? num(form.spanB) : undefined,
+    setbackFt: num(form.setback),
+    method: form.method,
+    shoreRatedCapacityLb: form.method === 'rented-shores' ? num(form.capacity) : undefined,
+    studs: {
+      materialId: form.materialId,
+      studSizeId: form.studSizeId,
+      studSpacingIn: num(form.spacing) ?? 16,
+      heightFt: num(form.height) ?? 8,
+      weakAxisBracing: 'mid-height-blocking',
+    },
+    standsOn: form.standsOn,
+  };
+}
+
+/**
+ * The temporary shoring planner of a member: layout, studs or rented shores, what the walls stand on. The
+ * plan is computed on the device as the person types (the engine the server runs); a save stores the
+ * server's own result, which then shows, and the screen says so if the two differ.
+ */
+export function ShoringPlanner({
+  memberId,
+  member,
+  saved,
+}: {
+  memberId: string;
+  member: MemberCheckInput;
+  saved: ShoringRecord | null;
+}) {
   const { data: me } = useMe();
   const { mutate } = useSWRConfig();
   const [form, setForm] = useState<Form>(() => formOf(saved));
   const [record, setRecord] = useState(saved);
+  const [savedForm, setSavedForm] = useState<Form | null>(() => (saved ? formOf(saved) : null));
   const [problem, setProblem] = useState<ApiError | null>(null);
   const [busy, setBusy] = useState(false);
   const set =
     <K extends keyof Form>(key: K) =>
     (value: Form[K]) =>
       setForm((f) => ({ ...f, [key]: value }));
-  const fields = problem?.fields ?? {};
+  const deferred = useDeferredValue(form);
+  const live = useMemo(() => liveShoring(member, bodyOf(deferred)), [member, deferred]);
+  const showSaved = record !== null && savedForm !== null && jsonEqual(form, savedForm);
+  const differs = useMemo(
+    () =>
+      showSaved && live.ok && !jsonEqual(shoringResultSchema.parse(live.result), record.result)
+        ? `This device computes a different plan from the one saved (engine ${record.engineVersion} on the server). The server's saved plan is shown.`
+        : null,
+    [showSaved, live, record],
+  );
+  const fields = { ...(live.ok ? {} : live.errors), ...(problem?.fields ?? {}) };
 
   const plan = async () => {
     setBusy(true);
     try {
-      const next = await saveShoring(memberId, {
-        layout: form.layout,
-        joistSpanAFt: num(form.spanA),
-        joistSpanBFt: form.layout === 'both-sides' ? num(form.spanB) : undefined,
-        setbackFt: num(form.setback),
-        method: form.method,
-        shoreRatedCapacityLb: form.method === 'rented-shores' ? num(form.capacity) : undefined,
-        studs: {
-          materialId: form.materialId,
-          studSizeId: form.studSizeId,
-          studSpacingIn: num(form.spacing) ?? 16,
-          heightFt: num(form.height) ?? 8,
-          weakAxisBracing: 'mid-height-blocking',
-        },
-        standsOn: form.standsOn,
-      });
+      const next = await saveShoring(memberId, bodyOf(form));
       setRecord(next);
+      setSavedForm(form);
       setProblem(null);
       if (me) await mutate(keys.shoring(me.activeOrgId, memberId), next, { revalidate: false });
     } catch (error) {
@@ -231,14 +266,37 @@ export function ShoringPlanner({ memberId, saved }: { memberId: string; saved: S
           </Notice>
         ) : null}
         <Button
-          label="Plan the shoring"
+          label="Save the plan"
           icon="check"
           busy={busy}
           onPress={() => void plan()}
           testID="shoring-save"
         />
       </Card>
-      {record ? <ShoringResult record={record} /> : null}
+      {showSaved ? (
+        <>
+          <Notice tone="success" title="Saved" testID="shoring-status">
+            The plan shown is the server’s.
+          </Notice>
+          {differs ? (
+            <Notice tone="warning" title="Device and server differ" testID="shoring-differs">
+              {differs}
+            </Notice>
+          ) : null}
+          <ShoringResult result={record.result} input={record.input} />
+        </>
+      ) : live.ok ? (
+        <>
+          <Notice tone="info" title="Not saved yet" testID="shoring-status">
+            Computed on this device as you type. Save the plan to keep it on the member.
+          </Notice>
+          <ShoringResult result={live.result} input={live.body} />
+        </>
+      ) : (
+        <Notice tone="info" title="No plan yet" testID="shoring-status">
+          Fix the fields marked above to see the plan.
+        </Notice>
+      )}
     </View>
   );
 }

@@ -5,12 +5,11 @@ import { Card } from '@/lib/ui/card';
 import { CautionNote } from '@/lib/ui/caution-note';
 import { Notice } from '@/lib/ui/notice';
 import { Text } from '@/lib/ui/text';
-import type { ShoringRecord } from '@/shared/schemas/shoring-plans';
+import type { ShoringPlanBody, ShoringResult as Result } from '@/shared/schemas/shoring-plans';
 import { ShoringSketch } from './shoring-sketch';
 
-/** The saved plan: the sketch, each wall's load, studs or shores, what it stands on, the sequence, cautions. */
-export function ShoringResult({ record }: { record: ShoringRecord }) {
-  const { result, input } = record;
+/** A plan (saved, or live): the sketch, each wall's load, studs or shores, what it stands on, the sequence, cautions. */
+export function ShoringResult({ result, input }: { result: Result; input: ShoringPlanBody }) {
   const setback = input.setbackFt ?? 2;
   return (
     <View style={styles.wrap} testID="shoring-result">

@@ -15,6 +15,7 @@ import type { RequestDetail } from '@/shared/schemas/requests/views';
 import { REQUEST_STATE_LABELS } from '@/shared/schemas/requests/workflow';
 import { Button } from '../button';
 import { Card } from '../card';
+import { LinkButton } from '../link-button';
 import { Notice } from '../notice';
 import { PickerField } from '../picker-field';
 import { Text } from '../text';
@@ -140,6 +141,15 @@ export function RequestActionsCard({
               'primary',
             )
           : null}
+        {firm && can('edit') && request.status === 'draft' ? (
+          <LinkButton
+            label="Edit the draft"
+            icon="edit"
+            variant="secondary"
+            href={{ pathname: '/requests/[requestId]/edit', params: { requestId: request.id } }}
+            testID="action-edit-draft"
+          />
+        ) : null}
         {firm && can('edit') && pickFile
           ? button('photo', 'Add a photo or sketch', () => void upload('photo'))
           : null}

@@ -57,7 +57,7 @@ function sendFile(res: Response, file: { bytes: Buffer; mimeType: string; fileNa
   res.send(file.bytes);
 }
 
-/** `/api/requests/:requestId/attachments`: upload, list and download a request's files. */
+/** `/api/requests/:requestId/attachments`: upload, list and download a request's files, remove a Draft's photo. */
 export function attachmentsRouter(deps: { db: Db; attachments: AttachmentsService }): Router {
   const router = Router({ mergeParams: true });
   router.use(requireMember(deps.db));
@@ -82,6 +82,11 @@ export function attachmentsRouter(deps: { db: Db; attachments: AttachmentsServic
       res,
       await deps.attachments.download(viewerOf(res), requestId, attachmentId, req.query.size === 'preview'),
     );
+  });
+
+  router.delete('/:attachmentId', validate({ params: fileParams }), async (req, res) => {
+    await deps.attachments.remove(viewerOf(res), req.params.requestId, req.params.attachmentId);
+    res.status(204).end();
   });
 
   return router;

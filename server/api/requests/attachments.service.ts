@@ -17,6 +17,7 @@ import { auditRequest, openRequest, type RequestViewer } from './request-access'
 import { toFile } from './request-detail';
 import { assertMay } from './request-transitions';
 import {
+  deleteAttachment,
   findAttachment,
   findAttachmentAnywhere,
   insertAttachment,
@@ -150,6 +151,36 @@ export function createAttachmentsService(deps: { db: Db; storage: FileStorage })
     list(viewer: RequestViewer, requestId: string): RequestFile[] {
       openRequest(db, viewer, requestId);
       return listAttachments(db, requestId).map(toFile);
+    },
+
+    /**
+     * Removes a photo or sketch from a Draft: the sending firm's only, and only before the first send (a
+     * sent version's snapshot lists its photos and never changes). The row and the audit event are one
+     * transaction; the stored bytes go after it commits.
+     */
+    async remove(viewer: RequestViewer, requestId: string, attachmentId: string): Promise<void> {
+      const removed = db.transaction((tx) => {
+        const { row, side } = openRequest(tx, viewer, requestId);
+        if (side !== 'firm') throw new AppError('forbidden', 'Photos of the job are the firm’s to remove');
+        assertMay('edit', side, row.status);
+        const file = findAttachment(tx, requestId, attachmentId);
+        if (!file) throw notFound('File');
+        if (row.status !== 'draft' || file.purpose !== 'photo') {
+          throw new AppError(
+            'conflict',
+            'Only a photo of a Draft can be removed: a sent version keeps its photos',
+          );
+        }
+        deleteAttachment(tx, requestId, attachmentId);
+        auditRequest(tx, viewer, row, 'request.file-remove', {
+          attachmentId,
+          fileName: file.fileName,
+          sha256: file.sha256,
+        });
+        return file;
+      });
+      await storage.remove(removed.storageKey);
+      if (removed.previewKey) await storage.remove(removed.previewKey);
     },
 
     /** The original, or with `preview` the downscaled copy when there is one (else the original). */

@@ -235,6 +235,12 @@ export function insertAttachment(db: DbOrTx, row: AttachmentRow): void {
   db.insert(attachments).values(row).run();
 }
 
+export function deleteAttachment(db: DbOrTx, requestId: string, attachmentId: string): void {
+  db.delete(attachments)
+    .where(and(eq(attachments.id, attachmentId), eq(attachments.requestId, requestId)))
+    .run();
+}
+
 /** Ties files the side uploaded (and no message holds yet) to a message; false when one is not such a file. */
 export function claimForMessage(
   db: DbOrTx,

@@ -1,7 +1,13 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { planShoring, rentedShores } from '@/lib/calc';
 import { shoringPlanInputSchema } from '@/shared/schemas/calc/shoring';
-import { shoringAnswerSchema, type ShoringPlanBodyInput } from '@/shared/schemas/shoring-plans';
+import { liveShoring } from '@/lib/ui/bearing/live-shoring';
+import { memberSchema } from '@/shared/schemas/members';
+import {
+  shoringAnswerSchema,
+  shoringResultSchema,
+  type ShoringPlanBodyInput,
+} from '@/shared/schemas/shoring-plans';
 import { expectApprox } from '@/tests/helpers/approx';
 import { createTestServer, signedUpAgent, type Agent, type TestServer } from '@/tests/helpers/server';
 
@@ -77,6 +83,27 @@ describe('the shoring plan of a member', () => {
     expect(saved?.result.takeoff?.[0]).toMatchObject({ side: 'A', studCount: 10, plates: 2 });
     const read = shoringAnswerSchema.parse((await owner.get(`/api/members/${memberId}/shoring`)).body);
     expect(read.shoring?.input).toMatchObject({ layout: 'both-sides', method: 'stud-walls' });
+  });
+
+  it('the plan the planner computes on the device is the one the server saves, for studs and for shores', async () => {
+    const member = memberSchema.parse((await owner.get(`/api/members/${memberId}`).expect(200)).body);
+    const shores: ShoringPlanBodyInput = { ...body, method: 'rented-shores', shoreRatedCapacityLb: 3000 };
+    for (const plan of [body, shores]) {
+      const saved = shoringAnswerSchema.parse((await put(plan).expect(200)).body).shoring;
+      const live = liveShoring(member.input, plan);
+      if (!live.ok) throw new Error(JSON.stringify(live.errors));
+      expect(shoringResultSchema.parse(live.result)).toEqual(saved?.result);
+    }
+  });
+
+  it('on the device, bad planner input gives the same field message the server answers with', async () => {
+    const member = memberSchema.parse((await owner.get(`/api/members/${memberId}`).expect(200)).body);
+    const bad = { ...body, setbackFt: -1 };
+    const answer = await put(bad).expect(400);
+    const live = liveShoring(member.input, bad);
+    expect(live.ok).toBe(false);
+    if (live.ok) return;
+    expect(live.errors.setbackFt).toEqual(answer.body.error.fields.setbackFt);
   });
 
   it('a wall stood along the floor joists is not acceptable: the plan does not pass', async () => {

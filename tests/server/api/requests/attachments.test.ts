@@ -244,3 +244,69 @@ describe('uploads', () => {
     });
   });
 });
+
+describe('removing a photo from a Draft', () => {
+  const remove = (agent: Agent, requestId: string, fileId: string) =>
+    agent.delete(`/api/requests/${requestId}/attachments/${encodeURIComponent(fileId)}`);
+  const audits = () =>
+    server.db
+      .select()
+      .from(auditEvents)
+      .all()
+      .filter((a) => a.action === 'request.file-remove');
+
+  it('the firm removes it: the row, the stored bytes and the listing go, with an audit event', async () => {
+    const id = await world.draft();
+    const kept = await upload(world.firm.agent, id, ONE_PIXEL_PNG, 'keep.png').expect(201);
+    const big = await sharp({
+      create: { width: 2400, height: 1600, channels: 3, background: { r: 90, g: 80, b: 70 } },
+    })
+      .jpeg()
+      .toBuffer();
+    const gone = await upload(world.firm.agent, id, big, 'wrong-wall.jpg').expect(201);
+    expect(gone.body.hasPreview).toBe(true);
+    expect(storedFiles()).toHaveLength(3);
+    await remove(world.firm.agent, id, gone.body.id).expect(204);
+    expect(rows().map((r) => r.id)).toEqual([kept.body.id]);
+    // The original and its downscaled copy are both gone; the other photo stays.
+    expect(storedFiles()).toHaveLength(1);
+    const list = await world.firm.agent.get(`/api/requests/${id}/attachments`).expect(200);
+    expect(list.body.files.map((f: { id: string }) => f.id)).toEqual([kept.body.id]);
+    await world.firm.agent.get(`/api/requests/${id}/attachments/${gone.body.id}`).expect(404);
+    expect(audits()).toHaveLength(1);
+    expect(audits()[0].detail).toMatchObject({ attachmentId: gone.body.id, fileName: 'wrong-wall.jpg' });
+    // A second try finds nothing to remove and records nothing.
+    await remove(world.firm.agent, id, gone.body.id).expect(404);
+    expect(audits()).toHaveLength(1);
+  });
+
+  it('once sent, the photo stays: 409 for the firm, 403 for the engineer, the snapshot unchanged', async () => {
+    const id = await world.draft();
+    const file = await upload(world.firm.agent, id, ONE_PIXEL_PNG, 'a.png').expect(201);
+    await world.firm.agent.post(`/api/requests/${id}/send`).expect(200);
+    const refused = await remove(world.firm.agent, id, file.body.id).expect(409);
+    expect(refused.body.error.message).toMatch(/Only a photo of a Draft/);
+    await remove(world.engineer.agent, id, file.body.id).expect(403);
+    const detail = await world.firm.agent.get(`/api/requests/${id}`).expect(200);
+    expect(detail.body.snapshot.files.map((f: { id: string }) => f.id)).toEqual([file.body.id]);
+    expect(rows()).toHaveLength(1);
+    expect(storedFiles()).toHaveLength(1);
+    expect(audits()).toEqual([]);
+  });
+
+  it('another firm, the engineer of a Draft, hostile and foreign ids: refused, nothing removed', async () => {
+    const id = await world.draft();
+    const file = await upload(world.firm.agent, id, ONE_PIXEL_PNG, 'a.png').expect(201);
+    const stranger = await signedUpAgent(server.app);
+    await remove(stranger.agent, id, file.body.id).expect(404);
+    await remove(world.engineer.agent, id, file.body.id).expect(404);
+    await remove(world.firm.agent, id, '../../storage').expect(404);
+    await remove(world.firm.agent, id, 'x'.repeat(101)).expect(400);
+    // Another Draft of the same firm: the file is not that request's.
+    const other = await world.draft();
+    await remove(world.firm.agent, other, file.body.id).expect(404);
+    await world.firm.agent.delete(`/api/requests/${id}/attachments/${file.body.id}`).send({}).expect(204);
+    expect(rows()).toEqual([]);
+    expect(audits()).toHaveLength(1);
+  });
+});

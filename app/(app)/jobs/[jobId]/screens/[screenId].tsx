@@ -1,5 +1,6 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useScreen } from '@/lib/hooks/use-screen';
+import { useMe } from '@/lib/hooks/use-me';
 import { useScreenSave } from '@/lib/hooks/use-screen-save';
 import { LazyScreenOutcome, LazyScreenWizard } from '@/lib/ui/bearing/lazy-bearing';
 import { Button } from '@/lib/ui/button';
@@ -18,15 +19,21 @@ export default function BearingScreenPage() {
   const { data: screen, error, mutate } = useScreen(screenId);
   const save = useScreenSave(jobId, screenId);
   const router = useRouter();
+  const { data: me } = useMe();
   if (error) return <ErrorView error={error} onRetry={() => mutate()} />;
-  if (!screen) return <LoadingView />;
+  if (!screen || !me) return <LoadingView />;
   const back = <TextLink href={{ pathname: '/jobs/[jobId]', params: { jobId } }} label="Back to the job" />;
   if (edit === '1') {
     return (
       <Screen title={`Screen again: ${screen.wallLabel}`} narrow>
         {back}
         <WorkspaceSuspense>
-          <LazyScreenWizard initialLabel={screen.wallLabel} initialAnswers={screen.answers} onSave={save} />
+          <LazyScreenWizard
+            initialLabel={screen.wallLabel}
+            initialAnswers={screen.answers}
+            storageKey={`${me.user.id}.${jobId}.screen-${screen.id}`}
+            onSave={save}
+          />
         </WorkspaceSuspense>
       </Screen>
     );

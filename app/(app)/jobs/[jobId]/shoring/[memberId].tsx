@@ -1,8 +1,9 @@
 import { useLocalSearchParams } from 'expo-router';
 import { useMember } from '@/lib/hooks/use-member';
 import { useShoring } from '@/lib/hooks/use-shoring';
-import { ShoringPlanner } from '@/lib/ui/bearing/shoring-planner';
+import { LazyShoringPlanner } from '@/lib/ui/bearing/lazy-bearing';
 import { ErrorView } from '@/lib/ui/error-view';
+import { WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
 import { LoadingView } from '@/lib/ui/loading-view';
 import { Screen } from '@/lib/ui/screen';
 import { Text } from '@/lib/ui/text';
@@ -22,7 +23,9 @@ export default function ShoringPage() {
         The temporary walls carry this member’s saved loads ({member.data.input.clearSpanFt} ft clear span)
         while the wall comes out.
       </Text>
-      <ShoringPlanner memberId={memberId} saved={shoring.data} />
+      <WorkspaceSuspense>
+        <LazyShoringPlanner memberId={memberId} member={member.data.input} saved={shoring.data} />
+      </WorkspaceSuspense>
     </Screen>
   );
 }
