@@ -26,6 +26,7 @@ describe('migrations', () => {
       'engineer_replies',
       'invitations',
       'job_checklist_items',
+      'job_engineer_items',
       'jobs',
       'mail_outbox',
       'member_budgets',
