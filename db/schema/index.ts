@@ -11,3 +11,4 @@ export * from './job-checklist';
 export * from './shoring-plans';
 export * from './price-book';
 export * from './idempotency-keys';
+export * from './job-engineer-items';

@@ -3,6 +3,7 @@ import {
   jobProgressListSchema,
   type ChecklistItemKey,
   type ChecklistState,
+  type EngineerItemPatch,
 } from '@/shared/schemas/job-checklist';
 import { apiRequest } from './client';
 
@@ -18,6 +19,15 @@ export const updateChecklistItem = (
   apiRequest(
     'PATCH',
     `/api/jobs/${encodeURIComponent(jobId)}/checklist/${encodeURIComponent(key)}`,
+    checklistSchema,
+    patch,
+  );
+
+/** Sets one of the engineer's items: state, note and/or photos; answers with the whole checklist. */
+export const updateEngineerItem = (jobId: string, itemId: string, patch: EngineerItemPatch) =>
+  apiRequest(
+    'PATCH',
+    `/api/jobs/${encodeURIComponent(jobId)}/checklist/engineer/${encodeURIComponent(itemId)}`,
     checklistSchema,
     patch,
   );

@@ -27,6 +27,8 @@ export const keys = {
   /** Design requests: the viewer's list (optionally one state), a job's, and one request (design-requests.ts). */
   requests: (orgId: string, state: string) => ['requests', orgId, state] as const,
   jobRequests: (orgId: string, jobId: string) => ['job-requests', orgId, jobId] as const,
+  /** The engineer's members that supersede a job's preliminary sizes (member-designs.ts). */
+  jobDesigns: (orgId: string, jobId: string) => ['job-designs', orgId, jobId] as const,
   request: (orgId: string, requestId: string) => ['request', orgId, requestId] as const,
 };
 
@@ -49,6 +51,7 @@ export function isFirmScopedKey(key: unknown): boolean {
       'sessions',
       'requests',
       'job-requests',
+      'job-designs',
       'request',
       'price-book',
       'member-budget',

@@ -1,8 +1,11 @@
 import type { TemporaryWallTakeoff } from './temporary-walls';
 
-/** The member's size as the budget prices it. Dimensions in in, weight in lb. */
+/**
+ * The member's size as the budget prices it. Dimensions in in, weight in lb. `by-hand` is an engineer's
+ * member the price book cannot price (a PSL, or a size no catalogue holds): its line waits for an override.
+ */
 export interface MemberSizeFacts {
-  family: 'sawn' | 'glulam' | 'lvl';
+  family: 'sawn' | 'glulam' | 'lvl' | 'by-hand';
   materialLabel: string;
   sizeId: string;
   sizeLabel: string;

@@ -20,3 +20,4 @@ export * from './member-lines';
 export * from './build-budget';
 export * from './budget-range';
 export * from './amount-text';
+export * from './design-change';

@@ -8,6 +8,9 @@ import { SAWN_LENGTHS_FT } from './price-catalogue';
 import { stockLength, type StockLength } from './stock-length';
 import type { BudgetLine, ClientView, LineGroup } from './types';
 
+/** The price key of a member the price book cannot hold: always missing, so the line asks for an override. */
+export const BY_HAND_KEY = 'member/by-hand';
+
 /** Floor protection runs this far out on each side of the work, ft (common practice). */
 export const FLOOR_PROTECTION_EACH_SIDE_FT = 4;
 
@@ -114,6 +117,17 @@ export function workLines(facts: BudgetFacts, choices: BudgetChoices, prices: Pr
         `${buyFt} ft (${needed}, even lengths)`,
         { taxable: true, lumber: true },
       );
+    } else if (size.family === 'by-hand') {
+      add(
+        'member',
+        'member',
+        `${size.sizeLabel} ${size.materialLabel}`,
+        1,
+        'each',
+        BY_HAND_KEY,
+        `${buyFt} ft (${needed}): not in the price book, override this line with the yard's quote`,
+        { taxable: true, lumber: true },
+      );
     } else {
       const stockFt = sawnStockFt(facts.lengthToBuyFt);
       add(
@@ -129,7 +143,7 @@ export function workLines(facts: BudgetFacts, choices: BudgetChoices, prices: Pr
         { taxable: true, lumber: true },
       );
     }
-    if (size.family !== 'sawn' && supply.supply === 'stock')
+    if ((size.family === 'lvl' || size.family === 'glulam') && supply.supply === 'stock')
       add(
         'yard-cut',
         'member',
@@ -171,9 +185,11 @@ export function workLines(facts: BudgetFacts, choices: BudgetChoices, prices: Pr
     add(
       'member',
       'member',
-      choices.material === 'steel'
-        ? 'Steel beam (allowance; the engineer sizes it)'
-        : 'Flitch beam (allowance; the engineer sizes it)',
+      size.family === 'by-hand'
+        ? `${size.sizeLabel} ${choices.material === 'steel' ? 'steel beam' : 'flitch beam'} (engineer's design; priced per lf from the allowance)`
+        : choices.material === 'steel'
+          ? 'Steel beam (allowance; the engineer sizes it)'
+          : 'Flitch beam (allowance; the engineer sizes it)',
       buyFt,
       'lf',
       key,

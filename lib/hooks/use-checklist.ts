@@ -1,19 +1,23 @@
 import { useCallback } from 'react';
 import useSWR, { useSWRConfig } from 'swr';
-import { fetchChecklist, updateChecklistItem } from '@/lib/api/job-checklist';
+import { fetchChecklist, updateChecklistItem, updateEngineerItem } from '@/lib/api/job-checklist';
 import { keys } from '@/lib/api/keys';
-import type { ChecklistItemKey, ChecklistState } from '@/shared/schemas/job-checklist';
+import type {
+  Checklist,
+  ChecklistItemKey,
+  ChecklistState,
+  EngineerItemPatch,
+} from '@/shared/schemas/job-checklist';
 import { useMe } from './use-me';
 
-/** The job's checklist, and a way to set one item (the jobs list's progress follows). */
+/** The job's checklist, and ways to set one item or one of the engineer's (the jobs list's progress follows). */
 export function useChecklist(jobId: string) {
   const { data: me } = useMe();
   const orgId = me?.activeOrgId ?? '';
   const { mutate } = useSWRConfig();
   const swr = useSWR(me ? keys.checklist(orgId, jobId) : null, () => fetchChecklist(jobId));
-  const setItem = useCallback(
-    async (key: ChecklistItemKey, patch: { state?: ChecklistState; note?: string }) => {
-      const next = await updateChecklistItem(jobId, key, patch);
+  const settle = useCallback(
+    async (next: Checklist) => {
       await Promise.all([
         mutate(keys.checklist(orgId, jobId), next, { revalidate: false }),
         mutate(keys.jobProgress(orgId)),
@@ -22,5 +26,15 @@ export function useChecklist(jobId: string) {
     },
     [jobId, mutate, orgId],
   );
-  return { ...swr, setItem };
+  const setItem = useCallback(
+    async (key: ChecklistItemKey, patch: { state?: ChecklistState; note?: string }) =>
+      settle(await updateChecklistItem(jobId, key, patch)),
+    [jobId, settle],
+  );
+  const setEngineerItem = useCallback(
+    async (itemId: string, patch: EngineerItemPatch) =>
+      settle(await updateEngineerItem(jobId, itemId, patch)),
+    [jobId, settle],
+  );
+  return { ...swr, setItem, setEngineerItem };
 }

@@ -1,11 +1,13 @@
 import { Link } from 'expo-router';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { formatNumber } from '@/lib/format';
+import { useJobDesigns } from '@/lib/hooks/use-job-designs';
 import { useJobMembers } from '@/lib/hooks/use-job-members';
 import { colors, spacing } from '@/lib/theme';
 import type { MemberRecompute } from '@/shared/schemas/job-update';
 import type { Job } from '@/shared/schemas/jobs';
 import type { MemberListItem } from '@/shared/schemas/members';
+import type { MemberDesign } from '@/shared/schemas/requests/member-design';
 import { Card } from './card';
 import { cardRowStyles } from './card-row-styles';
 import { ErrorView } from './error-view';
@@ -16,7 +18,7 @@ import { RecomputeNotice } from './recompute-notice';
 import { checkNames } from './result/check-names';
 import { Text } from './text';
 
-function MemberRow({ member }: { member: MemberListItem }) {
+function MemberRow({ member, design }: { member: MemberListItem; design?: MemberDesign }) {
   const look = memberStateLook[member.summary.state];
   return (
     <Link
@@ -26,20 +28,36 @@ function MemberRow({ member }: { member: MemberListItem }) {
       }}
       asChild
     >
-      <Pressable aria-label={`${member.label}: ${look.word}`} testID="member-row" style={cardRowStyles.link}>
+      <Pressable
+        aria-label={`${member.label}: ${design ? 'designed by the engineer' : look.word}`}
+        testID="member-row"
+        style={cardRowStyles.link}
+      >
         {({ pressed }) => (
           <View style={[cardRowStyles.row, pressed && cardRowStyles.pressed]}>
             <Icon name={look.icon} color={look.tone === 'danger' ? colors.danger : colors.ink} />
             <View style={cardRowStyles.text}>
               <Text variant="bodyStrong">{member.label}</Text>
-              <Text tone={look.tone}>{look.word}</Text>
-              <Text variant="caption" tone="muted">
+              {design ? (
+                <Text variant="bodyStrong" testID="member-designed">
+                  Engineer’s member: {design.designation}
+                </Text>
+              ) : (
+                <Text tone={look.tone}>{look.word}</Text>
+              )}
+              <Text variant="caption" tone="muted" style={design ? styles.superseded : undefined}>
                 {member.kind === 'header' ? 'Header' : 'Beam'}
                 {member.wall ? ` · ${member.wall}` : ''} · {member.summary.sizeLabel}{' '}
                 {member.summary.materialLabel} · {checkNames[member.summary.governingCheck]} at{' '}
                 {formatNumber(member.summary.governingRatio, 2)}
                 {member.summary.warningsCount ? ` · ${member.summary.warningsCount} warnings` : ''}
               </Text>
+              {design ? (
+                <Text variant="caption" testID="member-superseded">
+                  Preliminary size superseded (design request {design.requestNumber}, version {design.version}
+                  )
+                </Text>
+              ) : null}
             </View>
             <Icon name="chevronRight" color={colors.inkMuted} />
           </View>
@@ -61,6 +79,7 @@ export function JobMembersPanel({
   recomputed?: readonly MemberRecompute[];
 }) {
   const { data: members, error, mutate } = useJobMembers(job.id);
+  const { data: designs } = useJobDesigns(job.id);
   return (
     <Card title="Members" testID="job-members">
       <Text variant="caption" tone="muted">
@@ -74,7 +93,7 @@ export function JobMembersPanel({
         <Text tone="muted">No members yet. Add the header or beam for an opening.</Text>
       ) : null}
       {members?.map((m) => (
-        <MemberRow key={m.id} member={m} />
+        <MemberRow key={m.id} member={m} design={designs?.find((d) => d.memberId === m.id)} />
       ))}
       <View style={styles.actions}>
         <LinkButton
@@ -97,4 +116,5 @@ export function JobMembersPanel({
 
 const styles = StyleSheet.create({
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
+  superseded: { textDecorationLine: 'line-through' },
 });

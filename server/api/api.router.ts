@@ -33,7 +33,7 @@ import { attachmentsRouter } from './requests/attachments.router';
 import { createAttachmentsService } from './requests/attachments.service';
 import { packageRouter } from './requests/package.router';
 import { createPackageService } from './requests/package.service';
-import { jobRequestsRouter, requestsRouter } from './requests/requests.router';
+import { jobDesignsRouter, jobRequestsRouter, requestsRouter } from './requests/requests.router';
 import { createRequestsService } from './requests/requests.service';
 import {
   jobBudgetRouter,
@@ -95,6 +95,7 @@ export function apiRouter(options: ApiOptions): Router {
   router.use('/members', membersRouter(members));
   const requests = { db, requests: createRequestsService(options) };
   router.use('/jobs/:jobId/requests', jobRequestsRouter(requests));
+  router.use('/jobs/:jobId/designs', jobDesignsRouter(db));
   router.use(
     '/requests/:requestId/attachments',
     attachmentsRouter({ db, attachments: createAttachmentsService({ db, storage: options.storage }) }),

@@ -37,8 +37,11 @@ export function startFakeSmtp(db: Db, options: { host?: string; port?: number } 
         .then((parsed) => {
           const outboxId = parsed.headers.get(OUTBOX_ID_HEADER.toLowerCase());
           const known = typeof outboxId === 'string' ? outboxId : undefined;
+          // The HTML part is kept as it arrived, so a test reads what really went over the wire.
+          const html = typeof parsed.html === 'string' ? parsed.html : null;
           const updated = known
-            ? db.update(mailOutbox).set({ captured: true }).where(eq(mailOutbox.id, known)).run().changes
+            ? db.update(mailOutbox).set({ captured: true, html }).where(eq(mailOutbox.id, known)).run()
+                .changes
             : 0;
           if (updated === 0) {
             db.insert(mailOutbox)
@@ -47,7 +50,7 @@ export function startFakeSmtp(db: Db, options: { host?: string; port?: number } 
                 to: recipients(parsed.to),
                 subject: parsed.subject ?? '',
                 text: parsed.text ?? '',
-                html: typeof parsed.html === 'string' ? parsed.html : null,
+                html,
                 createdAt: new Date().toISOString(),
                 captured: true,
                 // Mail from elsewhere was delivered by its sender: the outbox must not send it again.

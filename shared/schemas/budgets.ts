@@ -121,6 +121,29 @@ const rangeSchema = z.object({
   basis: z.string(),
 });
 
+/**
+ * The change order raised when the engineer's designed member differs from the budgeted one: both members,
+ * how they differ, and the designed member's total less each end of the budgeted range (cents).
+ */
+export const changeOrderSchema = z.object({
+  budgetedLabel: z.string(),
+  designedLabel: z.string(),
+  differences: z.array(z.string()),
+  designedCents: z.number().int(),
+  fromHighCents: z.number().int(),
+  fromLowCents: z.number().int(),
+  outsideRange: z.boolean(),
+});
+export type ChangeOrder = z.infer<typeof changeOrderSchema>;
+
+/** The engineer's member a budget is rebuilt from, and where it came from. */
+export const budgetDesignSchema = z.object({
+  requestId: z.string(),
+  requestNumber: z.number().int(),
+  version: z.number().int(),
+  label: z.string(),
+});
+
 const scheduleSchema = z.object({
   framingDays: z.number(),
   returnTrips: z.number(),
@@ -164,6 +187,11 @@ export const memberBudgetViewSchema = z.object({
   subtotalCents: z.number().int(),
   totalCents: z.number().int(),
   range: rangeSchema,
+  /** Once the engineer has designed the member: the lines, total and range are the engineer's member's. */
+  design: budgetDesignSchema.nullable(),
+  /** The range at the preliminary size, kept beside the engineer's member once it is designed. */
+  preliminaryRange: rangeSchema.nullable(),
+  changeOrder: changeOrderSchema.nullable(),
   schedule: scheduleSchema,
   supply: z.object({
     buyFt: z.number(),
@@ -189,6 +217,8 @@ export const jobBudgetMemberSchema = z.object({
   totalCents: z.number().int(),
   range: rangeSchema,
   missingPrices: z.number().int(),
+  design: budgetDesignSchema.nullable(),
+  changeOrder: changeOrderSchema.nullable(),
 });
 
 export const sentBudgetSummarySchema = z.object({
@@ -208,6 +238,8 @@ export const jobBudgetSchema = z.object({
   members: z.array(jobBudgetMemberSchema),
   lowCents: z.number().int(),
   highCents: z.number().int(),
+  /** Members whose engineer's member differs from the budgeted one. */
+  changeOrders: z.number().int(),
   sent: z.array(sentBudgetSummarySchema),
 });
 export type JobBudget = z.infer<typeof jobBudgetSchema>;

@@ -120,10 +120,52 @@ export const checklistProgressSchema = z.object({
 });
 export type ChecklistProgress = z.infer<typeof checklistProgressSchema>;
 
-/** `GET /api/jobs/:jobId/checklist`. */
+/**
+ * An item the engineer's structured reply asks the contractor to verify in the field, on the job's
+ * checklist beside the fixed items. It belongs to the request version the reply answers; `photoAsked` means
+ * the engineer wants a photo of it before the work is closed in (the photos are files of the request).
+ */
+export const engineerChecklistItemSchema = z.object({
+  id: z.string(),
+  requestId: z.string(),
+  requestNumber: z.number().int(),
+  version: z.number().int(),
+  item: z.string(),
+  photoAsked: z.boolean(),
+  photos: z.array(z.object({ id: z.string(), fileName: z.string(), caption: z.string() })),
+  state: checklistStateSchema,
+  note: z.string(),
+  /** Who set it and when; null while nobody has. */
+  updatedBy: z.string().nullable(),
+  updatedByName: z.string().nullable(),
+  updatedAt: z.string().nullable(),
+});
+export type EngineerChecklistItem = z.infer<typeof engineerChecklistItemSchema>;
+
+/**
+ * `PATCH /api/jobs/:jobId/checklist/engineer/:engineerItemId`: a state, a note, the photos (files the firm
+ * uploaded to the item's request), or any of them. An item whose photo is asked for is done only with one.
+ */
+export const engineerItemPatchSchema = z
+  .object({
+    state: checklistStateSchema.optional(),
+    note: z.string().trim().max(500, { message: 'At most 500 characters' }).optional(),
+    photoIds: z
+      .array(z.string().min(1).max(100))
+      .max(10, { message: 'At most 10 photos' })
+      .refine((ids) => new Set(ids).size === ids.length, { message: 'Name each photo once' })
+      .optional(),
+  })
+  .refine((patch) => Object.values(patch).some((value) => value !== undefined), {
+    message: 'Change the state, the note or the photos',
+  });
+export type EngineerItemPatch = z.infer<typeof engineerItemPatchSchema>;
+
+/** `GET /api/jobs/:jobId/checklist`: the fixed items, the engineer's, and the progress over both. */
 export const checklistSchema = z.object({
   jobId: z.string(),
   items: z.array(checklistItemSchema),
+  engineerItems: z.array(engineerChecklistItemSchema),
   progress: checklistProgressSchema,
 });
 export type Checklist = z.infer<typeof checklistSchema>;

@@ -27,6 +27,7 @@ describe('migrations', () => {
       'idempotency_keys',
       'invitations',
       'job_checklist_items',
+      'job_engineer_items',
       'jobs',
       'mail_outbox',
       'member_budgets',

@@ -120,6 +120,8 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         await upload(e, 'design', 'design.png');
         await e.getByTestId('reply-designation-0').fill('2-ply 1-3/4 x 9-1/4 LVL 2.0E');
         await e.getByTestId('reply-plies-0').fill('2');
+        await e.getByTestId('reply-widthIn-0').fill('3.5');
+        await e.getByTestId('reply-depthIn-0').fill('9.25');
         await e.getByTestId('reply-verify').fill('Post under the left end (photo)');
         await e.getByTestId('reply-send').click();
         await e.getByTestId('engineer-member').waitFor();
@@ -136,6 +138,41 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
           'Post under the left end (photo wanted)',
         );
         await snap(c, `handoff/${name}-contractor-designed`);
+
+        // The job page: the member marked as the engineer's, its preliminary size superseded, and the
+        // engineer's item on the checklist, marked as from the engineer, asking for its photo.
+        await c.goto(`${baseUrl}/jobs/${jobId}`);
+        const row = c.getByTestId('member-row').filter({ hasText: `Hall header ${name}` });
+        await row.getByTestId('member-designed').waitFor();
+        expect(await row.innerText()).toContain('Preliminary size superseded');
+        const item = c.getByTestId('engineer-item').filter({ hasText: 'Post under the left end' });
+        await item.waitFor();
+        expect(await item.innerText()).toContain('From the engineer');
+        expect(await item.innerText()).toContain('asks for a photo');
+        await item.scrollIntoViewIfNeeded();
+        await snap(c, `handoff/${name}-job-checklist-engineer`);
+
+        // The member page: superseded, and the header's framing list rebuilt at the engineer's member.
+        const memberId = ((await made.json()) as { id: string }).id;
+        await c.goto(`${baseUrl}/jobs/${jobId}/members/${memberId}`);
+        await c.getByTestId('superseded-notice').waitFor();
+        expect(await c.getByTestId('superseded-by').innerText()).toContain('2-ply 1-3/4 x 9-1/4 LVL 2.0E');
+        await expect
+          .poll(() => c.getByTestId('framing-list').innerText())
+          .toContain('Header 2-ply 1-3/4 x 9-1/4 LVL 2.0E (LVL)');
+        expect(await c.getByTestId('framing-from-design').innerText()).toContain('superseded');
+        await snap(c, `handoff/${name}-member-superseded`);
+
+        // The budgets rebuild from the engineer's member, and the change order shows the difference.
+        await c.goto(`${baseUrl}/jobs/${jobId}/budget/${memberId}`);
+        await c.getByTestId('change-order').waitFor();
+        expect(await c.getByTestId('budget-total').innerText()).toContain('engineer’s member');
+        expect(await c.getByTestId('change-order').innerText()).toContain('material Sawn lumber → LVL');
+        await snap(c, `handoff/${name}-budget-change-order`);
+        await c.goto(`${baseUrl}/jobs/${jobId}/budget`);
+        await c.getByTestId('job-change-order').first().waitFor();
+        expect(await c.getByTestId('job-change-orders').innerText()).toMatch(/change order/);
+        await snap(c, `handoff/${name}-job-budget-change-order`);
       } finally {
         await contractor.close();
         await engineer.close();

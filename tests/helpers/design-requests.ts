@@ -43,8 +43,48 @@ export async function requestWorld(server: TestServer) {
     return id;
   }
 
-  return { firm, engineer, jobId, memberId, draft, sent };
+  /** The engineer's reply to the current version: `reply` (default: a 2-ply 1-3/4 x 9-1/4 LVL, invented). */
+  async function reply(id: string, body: Record<string, unknown> = sampleReply(memberId)) {
+    await engineer.agent.post(`/api/requests/${id}/reply`).send(body).expect(201);
+  }
+
+  /** A request in review walked to Designed: fee quoted and accepted, `body` replied, a design document. */
+  async function designed(id: string, body: Record<string, unknown> = sampleReply(memberId)) {
+    await engineer.agent
+      .post(`/api/requests/${id}/fee`)
+      .send({ feeUsd: 650, turnaroundDays: 5, siteVisit: false })
+      .expect(200);
+    await firm.agent.post(`/api/requests/${id}/fee/accept`).expect(200);
+    await reply(id, body);
+    await engineer.agent
+      .post(`/api/requests/${id}/attachments`)
+      .field('purpose', 'design')
+      .attach('file', SAMPLE_PNG, 'design.png')
+      .expect(201);
+    await engineer.agent.post(`/api/requests/${id}/status`).send({ to: 'designed' }).expect(200);
+  }
+
+  return { firm, engineer, jobId, memberId, draft, sent, reply, designed };
 }
+
+/** An invented engineer's reply designing `memberId` as a 2-ply 1-3/4 x 9-1/4 LVL, with two field items. */
+export const sampleReply = (memberId: string) => ({
+  members: [
+    {
+      memberId,
+      material: 'lvl',
+      designation: '2-ply 1-3/4 x 9-1/4 LVL 2.0E',
+      plies: 2,
+      widthIn: 3.5,
+      depthIn: 9.25,
+      plyFastening: '2 rows 16d at 12 in',
+    },
+  ],
+  verifyInField: [
+    { item: 'Joist size and spacing over the opening', photo: true },
+    { item: 'Jack studs bear on the subfloor, not on finish flooring', photo: false },
+  ],
+});
 
 /** Waits for the mailer and answers the captured design request mail to `to`, newest first. */
 export async function mailTo(server: TestServer, to: string) {

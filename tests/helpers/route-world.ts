@@ -142,6 +142,7 @@ export async function createRouteWorld(server: TestServer) {
     }
     // Checklist items are fixed per job: any key names one.
     if (name === 'itemKey') return 'permit';
+    if (name === 'engineerItemId') return makeEngineerItem(owner, made.jobId);
     const stem = name.match(/^(\w+)Id$/)?.[1];
     const create = API_ROUTES.find((r) => r.method === 'post' && stem && r.path.endsWith(`/${stem}s`));
     if (!create)
@@ -183,6 +184,47 @@ export async function createRouteWorld(server: TestServer) {
     if (res.status !== 201) throw new Error(`a design request could not be made: ${res.text}`);
     if (owner.firm === 'B') firmBMarkers.push(job.body.id, job.body.name, member.body.id, res.body.id);
     return res.body.id;
+  }
+
+  /** An engineer of their own firm for each contracting firm, so no engineer sees two firms' requests. */
+  const engineers = new Map<Person['firm'], Person>();
+
+  /**
+   * An engineer's "verify in the field" item on `jobId`'s checklist: a member and a request sent to the
+   * firm's engineer, who takes it into review and replies with one item asking for a photo.
+   */
+  async function makeEngineerItem(owner: Person, jobId: string | undefined): Promise<string> {
+    if (!jobId) throw new Error(':engineerItemId needs a :jobId before it');
+    const engineer =
+      owner.firm === 'A'
+        ? people.engineer
+        : (engineers.get(owner.firm) ?? (await founder(`engineer-of-${owner.firm}`, 'E')));
+    engineers.set(owner.firm, engineer);
+    const as = <T extends request.Test>(req: T, who: Person) => req.set('Cookie', who.cookie);
+    const member = await as(request(server.app).post(`/api/jobs/${jobId}/members`), owner)
+      .send({ label: `Item member ${owner.firm}-${(tokenCount += 1)}`, input: SAMPLE_HEADER })
+      .expect(201);
+    const draft = await as(request(server.app).post(`/api/jobs/${jobId}/requests`), owner)
+      .send({ memberIds: [member.body.id], engineerEmail: engineer.email, jurisdiction: { state: 'PA' } })
+      .expect(201);
+    const requestId: string = draft.body.id;
+    await as(request(server.app).post(`/api/requests/${requestId}/send`), owner).expect(200);
+    await as(request(server.app).post(`/api/requests/${requestId}/status`), engineer)
+      .send({ to: 'in-review' })
+      .expect(200);
+    await as(request(server.app).post(`/api/requests/${requestId}/reply`), engineer)
+      .send({
+        members: [{ memberId: member.body.id, material: 'lvl', designation: '2-ply 1-3/4 x 9-1/4 LVL' }],
+        verifyInField: [{ item: `Bearing under the left end ${tokenCount}`, photo: false }],
+      })
+      .expect(201);
+    const list = await as(request(server.app).get(`/api/jobs/${jobId}/checklist`), owner).expect(200);
+    const item = (list.body.engineerItems as { id: string; requestId: string }[]).find(
+      (i) => i.requestId === requestId,
+    );
+    if (!item) throw new Error('the reply made no checklist item');
+    if (owner.firm === 'B') firmBMarkers.push(member.body.label, item.id, requestId);
+    return item.id;
   }
 
   async function join(owner: Person, name: string, role: Role): Promise<Person> {

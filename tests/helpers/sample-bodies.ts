@@ -23,7 +23,7 @@ import {
   statusChangeSchema,
 } from '@/shared/schemas/requests/workflow';
 import { screenCreateSchema, screenPatchSchema } from '@/shared/schemas/bearing-screens';
-import { checklistItemPatchSchema } from '@/shared/schemas/job-checklist';
+import { checklistItemPatchSchema, engineerItemPatchSchema } from '@/shared/schemas/job-checklist';
 import { shoringPlanPutSchema } from '@/shared/schemas/shoring-plans';
 import { memberBudgetSaveSchema, sendBudgetSchema } from '@/shared/schemas/budgets';
 import {
@@ -97,6 +97,7 @@ export const SAMPLE_BODIES = new Map<z.ZodType, () => unknown>([
   ],
   [screenPatchSchema, () => ({ answers: { bracedWall: { value: 'unsure' } } })],
   [checklistItemPatchSchema, () => ({ state: 'done', note: `Checked ${unique()}` })],
+  [engineerItemPatchSchema, () => ({ state: 'done', note: `Verified ${unique()}` })],
   [
     shoringPlanPutSchema,
     () => ({

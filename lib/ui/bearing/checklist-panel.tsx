@@ -10,6 +10,7 @@ import { ErrorView } from '@/lib/ui/error-view';
 import { FieldMessages } from '@/lib/ui/field-messages';
 import { Text } from '@/lib/ui/text';
 import { TextField } from '@/lib/ui/text-field';
+import { EngineerItemRow } from '@/lib/ui/requests/engineer-item-row';
 import type { ChecklistItem, ChecklistState } from '@/shared/schemas/job-checklist';
 import { progressText } from './progress-text';
 
@@ -66,9 +67,12 @@ function ItemRow({
   );
 }
 
-/** The job checklist: every item with its state, note, who and when, and the progress. */
+/**
+ * The job checklist: every item with its state, note, who and when, the engineer's items to verify in the
+ * field after them, and the progress over both.
+ */
 export function ChecklistPanel({ jobId }: { jobId: string }) {
-  const { data, error, mutate, setItem } = useChecklist(jobId);
+  const { data, error, mutate, setItem, setEngineerItem } = useChecklist(jobId);
   return (
     <Card title="Job checklist" testID="job-checklist">
       {error ? <ErrorView error={error} onRetry={() => mutate()} /> : null}
@@ -89,6 +93,20 @@ export function ChecklistPanel({ jobId }: { jobId: string }) {
               if (!(e instanceof ApiError)) throw e;
               return e.fields.note ?? [e.message];
             }
+          }}
+        />
+      ))}
+      {data && data.engineerItems.length > 0 ? (
+        <Text variant="heading" testID="engineer-items-heading">
+          To verify in the field, from the engineer
+        </Text>
+      ) : null}
+      {data?.engineerItems.map((item) => (
+        <EngineerItemRow
+          key={item.id}
+          item={item}
+          onSet={async (patch) => {
+            await setEngineerItem(item.id, patch);
           }}
         />
       ))}

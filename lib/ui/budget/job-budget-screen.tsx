@@ -12,6 +12,7 @@ import { ErrorView } from '../error-view';
 import { LinkButton } from '../link-button';
 import { LoadingView } from '../loading-view';
 import { Notice } from '../notice';
+import { ChangeOrderNotice } from './change-order-notice';
 import { Screen } from '../screen';
 import { Text } from '../text';
 import { TextField } from '../text-field';
@@ -60,25 +61,39 @@ export function JobBudgetScreen({ jobId }: { jobId: string }) {
         <Text variant="title" testID="job-range">
           {formatDollars(budget.lowCents)} to {formatDollars(budget.highCents)}
         </Text>
+        {budget.changeOrders > 0 ? (
+          <Text tone="danger" testID="job-change-orders">
+            {budget.changeOrders === 1
+              ? '1 change order: the engineer’s member differs from the budgeted one.'
+              : `${budget.changeOrders} change orders: the engineer’s members differ from the budgeted ones.`}
+          </Text>
+        ) : null}
         {budget.members.map((m) => (
-          <View key={m.memberId} style={styles.row}>
-            <View style={styles.grow}>
-              <Text variant="bodyStrong">{m.label}</Text>
-              <Text variant="caption" tone="muted">
-                {m.range.lowLabel === m.range.highLabel
-                  ? m.range.lowLabel
-                  : `${m.range.lowLabel} to ${m.range.highLabel}`}
-                {m.missingPrices ? ` · ${m.missingPrices} prices missing` : ''}
+          <View key={m.memberId} style={styles.member}>
+            <View style={styles.row}>
+              <View style={styles.grow}>
+                <Text variant="bodyStrong">{m.label}</Text>
+                <Text variant="caption" tone="muted">
+                  {m.range.lowLabel === m.range.highLabel
+                    ? m.range.lowLabel
+                    : `${m.range.lowLabel} to ${m.range.highLabel}`}
+                  {m.design ? ` · engineer’s design, request ${m.design.requestNumber}` : ''}
+                  {m.missingPrices ? ` · ${m.missingPrices} prices missing` : ''}
+                </Text>
+              </View>
+              <Text>
+                {formatDollars(m.range.lowCents)} to {formatDollars(m.range.highCents)}
               </Text>
+              <LinkButton
+                label="Open"
+                variant="quiet"
+                href={{
+                  pathname: '/jobs/[jobId]/budget/[memberId]',
+                  params: { jobId, memberId: m.memberId },
+                }}
+              />
             </View>
-            <Text>
-              {formatDollars(m.range.lowCents)} to {formatDollars(m.range.highCents)}
-            </Text>
-            <LinkButton
-              label="Open"
-              variant="quiet"
-              href={{ pathname: '/jobs/[jobId]/budget/[memberId]', params: { jobId, memberId: m.memberId } }}
-            />
+            {m.changeOrder ? <ChangeOrderNotice change={m.changeOrder} testID="job-change-order" /> : null}
           </View>
         ))}
         {budget.members.length === 0 ? (
@@ -131,6 +146,7 @@ export function JobBudgetScreen({ jobId }: { jobId: string }) {
 }
 
 const styles = StyleSheet.create({
+  member: { gap: spacing.xs },
   row: {
     flexDirection: 'row',
     flexWrap: 'wrap',

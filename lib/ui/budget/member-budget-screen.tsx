@@ -11,6 +11,7 @@ import type { BudgetChoicesInput, LineOverrideInput, MemberBudgetView } from '@/
 import { Button } from '../button';
 import { Card } from '../card';
 import { Notice } from '../notice';
+import { ChangeOrderNotice } from './change-order-notice';
 import { ErrorView } from '../error-view';
 import { LinkButton } from '../link-button';
 import { LoadingView } from '../loading-view';
@@ -73,8 +74,19 @@ export function MemberBudgetScreen({ jobId, memberId }: { jobId: string; memberI
         </Text>
         <Text tone="muted">{budget.range.basis}.</Text>
         <Text testID="budget-total">
-          At the preliminary size ({budget.sizeLabel}): {formatDollars(budget.totalCents, true)}
+          {budget.design
+            ? `At the engineer’s member (${budget.design.label}): `
+            : `At the preliminary size (${budget.sizeLabel}): `}
+          {formatDollars(budget.totalCents, true)}
         </Text>
+        {budget.design && budget.preliminaryRange ? (
+          <Text variant="caption" tone="muted" testID="budget-preliminary-range">
+            Budgeted at the preliminary size ({budget.sizeLabel}, superseded):{' '}
+            {formatDollars(budget.preliminaryRange.lowCents)} to{' '}
+            {formatDollars(budget.preliminaryRange.highCents)}
+          </Text>
+        ) : null}
+        {budget.changeOrder ? <ChangeOrderNotice change={budget.changeOrder} /> : null}
         {budget.missingPrices.length ? (
           <Notice tone="error" title="Prices missing">
             {budget.missingPrices.join(', ')}: add them to the price book.

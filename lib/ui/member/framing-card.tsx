@@ -8,6 +8,8 @@ import { FieldMessages } from '@/lib/ui/field-messages';
 import { Text } from '@/lib/ui/text';
 import { framingInputSchema } from '@/shared/schemas/calc/framing';
 import type { MemberCheckResult } from '@/shared/schemas/calc/member';
+import type { MemberDesign } from '@/shared/schemas/requests/member-design';
+import { designedHeader } from './designed-header';
 import { MeasureField } from './measure-field';
 import { DraftReader } from './member-input';
 
@@ -46,8 +48,19 @@ function ListLines({ list, title }: { list: FramingList; title: string }) {
   );
 }
 
-/** A header's framing list from the rough opening and the wall height at each end. */
-export function FramingCard({ result, yearBuilt }: { result: MemberCheckResult; yearBuilt: number | null }) {
+/**
+ * A header's framing list from the rough opening and the wall height at each end: at the preliminary size,
+ * or once the engineer has designed the member, at the engineer's member and bearing.
+ */
+export function FramingCard({
+  result,
+  yearBuilt,
+  design,
+}: {
+  result: MemberCheckResult;
+  yearBuilt: number | null;
+  design?: MemberDesign;
+}) {
   const [opening, setOpening] = useState<Opening>(() => ({
     width: formatIn(result.spans.clearSpanFt * 12),
     height: '82-1/2',
@@ -57,6 +70,8 @@ export function FramingCard({ result, yearBuilt }: { result: MemberCheckResult; 
     topPlates: yearBuilt !== null && yearBuilt < SINGLE_PLATE_BEFORE ? '1' : '2',
   }));
   const set = (key: keyof Opening) => (value: string) => setOpening((o) => ({ ...o, [key]: value }));
+  const designed = useMemo(() => (design ? designedHeader(design) : null), [design]);
+  const fromDesign = designed && 'header' in designed ? designed : null;
   const lists = useMemo(() => {
     const r = new DraftReader();
     const errors = r.errors;
@@ -75,8 +90,8 @@ export function FramingCard({ result, yearBuilt }: { result: MemberCheckResult; 
         sillHeightIn: sill,
         wallHeightIn: wall,
         topPlates: Number(opening.topPlates),
-        jacksPerSide: result.bearing.jackStuds,
-        header: {
+        jacksPerSide: fromDesign?.jacksPerSide ?? result.bearing.jackStuds,
+        header: fromDesign?.header ?? {
           label: result.member.sizeLabel.replace(/^\d-ply /, ''),
           depthIn: result.member.dIn,
           plies: result.member.plies,
@@ -95,11 +110,20 @@ export function FramingCard({ result, yearBuilt }: { result: MemberCheckResult; 
       }
     }
     return { errors, out };
-  }, [opening, result]);
+  }, [opening, result, fromDesign]);
   const same = opening.wallLeft.trim() === opening.wallRight.trim();
   const e = lists.errors;
   return (
     <Card title="Framing list" testID="framing-list">
+      {design ? (
+        <Text variant="caption" testID="framing-from-design">
+          {fromDesign
+            ? `Rebuilt from the engineer’s member: ${design.designation} (request ${design.requestNumber}, version ${design.version}). The preliminary ${design.preliminaryLabel} is superseded.`
+            : designed && 'problem' in designed
+              ? designed.problem
+              : null}
+        </Text>
+      ) : null}
       <View style={styles.grid}>
         <View style={styles.cell}>
           <MeasureField

@@ -10,6 +10,7 @@ import { Text } from '@/lib/ui/text';
 import { TextLink } from '@/lib/ui/text-link';
 import type { Job } from '@/shared/schemas/jobs';
 import type { Member, MemberCreateBody } from '@/shared/schemas/members';
+import type { MemberDesign } from '@/shared/schemas/requests/member-design';
 import { BasicsCard } from './basics-card';
 import { ConditionsCard } from './conditions-card';
 import { draftFromInput } from './draft-from-input';
@@ -24,6 +25,7 @@ import { draftPathOf, readMemberDraft, type FieldErrors } from './member-input';
 import { ResultPane } from './result-pane';
 import { ShortlistPanel } from './shortlist-panel';
 import { SpanCard } from './span-card';
+import { SupersededNotice } from './superseded-notice';
 
 /** Two panes (inputs | result) from this content width up, px. */
 const TWO_PANE_MIN = 1000;
@@ -41,6 +43,8 @@ type MemberEditorProps = {
   justSaved?: boolean;
   /** A new member started from a bearing screen's answers. */
   prefill?: ScreenPrefill;
+  /** The engineer's member from a Designed request: it supersedes the preliminary size. */
+  design?: MemberDesign;
 };
 
 const NO_ERRORS: FieldErrors = {};
@@ -72,6 +76,7 @@ export function MemberEditor({
   onSave,
   justSaved,
   prefill,
+  design,
 }: MemberEditorProps) {
   const initial = useMemo<MemberDraft>(
     () =>
@@ -178,6 +183,7 @@ export function MemberEditor({
           </Notice>
         ) : null}
         {differs ? <Notice tone="info">{differs}</Notice> : null}
+        {design ? <SupersededNotice design={design} /> : null}
       </>
     );
     return (
@@ -208,13 +214,13 @@ export function MemberEditor({
             />
           ) : null}
           {result && draftKind === 'header' ? (
-            <FramingCard result={result} yearBuilt={job.yearBuilt} />
+            <FramingCard result={result} yearBuilt={job.yearBuilt} design={design} />
           ) : null}
         </ResultPane>
       </View>
     );
     // save and form change identity every render but only their latest draft matters (latestDraft).
-  }, [result, prescriptive, live, status, differs, materialId, sizeId, draftKind, job, member]);
+  }, [result, prescriptive, live, status, differs, materialId, sizeId, draftKind, job, member, design]);
   const saveButton = (
     <Button
       label={member ? 'Save changes' : 'Save member'}

@@ -4,15 +4,19 @@ import {
   checkMember,
   getMaterial,
   getSize,
+  listMaterials,
+  listSizes,
   pieceWeightLb,
   planShoring,
   sizeFootingPad,
+  type MaterialFamily,
   type MemberSize,
 } from '@/lib/calc';
 import {
   temporaryWalls,
   type BudgetChoices,
   type BudgetFacts,
+  type MemberMaterial,
   type MemberSizeFacts,
   type PostFacts,
 } from '@/lib/budget';
@@ -20,6 +24,8 @@ import type { MemberCheckInput, MemberCheckResult } from '@/shared/schemas/calc/
 import type { BudgetChoicesInput } from '@/shared/schemas/budgets';
 import type { Job } from '@/shared/schemas/jobs';
 import type { Member } from '@/shared/schemas/members';
+import type { MemberDesign } from '@/shared/schemas/requests/member-design';
+import { DESIGNED_MATERIAL_LABELS, type DesignedMaterial } from '@/shared/schemas/requests/reply';
 
 /** Floor to ceiling when the estimator gives none, ft (common practice: an 8 ft wall). */
 export const DEFAULT_WALL_HEIGHT_FT = 8;
@@ -215,4 +221,82 @@ export function postAndFootingAlternate(
     },
   ];
   return facts;
+}
+
+/** The engine's family for each designed material the price book prices by size; the rest are priced otherwise. */
+const CATALOGUE_FAMILY: Partial<Record<DesignedMaterial, MaterialFamily>> = {
+  sawn: 'sawn',
+  lvl: 'lvl',
+  glulam: 'glulam',
+};
+/** Sizes within this are the same size, in (dressed sizes are given to 1/16 in). */
+const SAME_IN = 1 / 32;
+
+/**
+ * The catalogue size the engineer's member is: same family, plies and section within 1/32 in, in the
+ * member's own material when it is of that family (its species and grade), else in the family's first.
+ */
+export function catalogueSizeOf(
+  design: MemberDesign,
+  ownMaterialId: string,
+): { materialId: string; size: MemberSize } | null {
+  const family = CATALOGUE_FAMILY[design.material];
+  if (!family || design.depthIn === null) return null;
+  const own = listMaterials(family).find((m) => m.id === ownMaterialId);
+  const materials = own ? [own] : listMaterials(family).slice(0, 1);
+  for (const material of materials) {
+    const size = listSizes(material.id).find(
+      (s) =>
+        Math.abs(s.dIn - design.depthIn!) <= SAME_IN &&
+        (design.plies === null || s.plies === design.plies) &&
+        (design.widthIn === null || Math.abs(s.bIn - design.widthIn) <= SAME_IN),
+    );
+    if (size) return { materialId: material.id, size };
+  }
+  return null;
+}
+
+/** What the engineer's member is made of, in words ("LVL 2.0E", "Steel W shape"). */
+export const designedFamilyLabel = (design: MemberDesign) => DESIGNED_MATERIAL_LABELS[design.material];
+
+/**
+ * The budget facts of the engineer's member in place of the preliminary size: priced from the price book by
+ * its catalogue size when it has one; a steel W shape or a flitch beam as the steel or flitch line; any other
+ * (a PSL, an unusual size) as a line to price by hand. The length to buy takes the engineer's bearing lengths
+ * when both are given; hangers, posts and shoring stay the member's own.
+ */
+export function designedFacts(
+  member: Member,
+  job: Job,
+  choices: BudgetChoices,
+  design: MemberDesign,
+  shoring: BudgetFacts['shoring'],
+): { facts: BudgetFacts; material: MemberMaterial } {
+  const lengthToBuyFt =
+    design.bearingLeftIn !== null && design.bearingRightIn !== null
+      ? member.input.clearSpanFt + (design.bearingLeftIn + design.bearingRightIn) / 12
+      : member.result.spans.lengthToBuyFt;
+  const label = `${designedFamilyLabel(design)}${design.grade ? ` ${design.grade}` : ''} (engineer's design)`;
+  const found = catalogueSizeOf(design, member.materialId);
+  if (found) {
+    const size = { ...sizeFacts(found.materialId, found.size, lengthToBuyFt), materialLabel: label };
+    return {
+      facts: memberFacts(member, job, choices, size, lengthToBuyFt, member.result, shoring),
+      material: 'wood',
+    };
+  }
+  const preliminary = sizeFacts(member.materialId, getSize(member.materialId, member.sizeId), lengthToBuyFt);
+  const size: MemberSizeFacts = {
+    ...preliminary,
+    family: 'by-hand',
+    materialLabel: "(engineer's design)",
+    sizeId: 'engineer',
+    sizeLabel: design.designation,
+    plies: design.plies ?? 1,
+    bIn: design.widthIn ?? preliminary.bIn,
+    dIn: design.depthIn ?? preliminary.dIn,
+  };
+  const material: MemberMaterial =
+    design.material === 'steel-w' ? 'steel' : design.material === 'flitch' ? 'flitch' : 'wood';
+  return { facts: memberFacts(member, job, choices, size, lengthToBuyFt, member.result, shoring), material };
 }

@@ -4,6 +4,7 @@ import { notFound, AppError } from '@/server/app-error';
 import { recordAudit, type Actor } from '@/server/api/audit/audit.repository';
 import { findJob } from '@/server/api/jobs/jobs.repository';
 import { findMember, listMembers } from '@/server/api/members/members.repository';
+import { designsOfJob } from '@/server/api/requests/member-designs';
 import { isStale, staleAfterDays } from '@/server/api/price-book/price-book.service';
 import type {
   JobBudget,
@@ -46,7 +47,7 @@ function scopeText(job: Job, views: readonly MemberBudgetView[]): string {
   const parts = views.map((v) => {
     const groups = new Set(v.lines.map((l) => l.group));
     const work = [
-      `${v.memberLabel}: a new member (${v.sizeLabel}, preliminary)`,
+      `${v.memberLabel}: a new member (${v.design ? `${v.design.label}, the engineer’s design` : `${v.sizeLabel}, preliminary`})`,
       groups.has('shoring') ? 'temporary shoring' : null,
       groups.has('posts-and-footing') ? 'posts and footings' : null,
       groups.has('hardware') ? 'hangers and fastening' : null,
@@ -73,15 +74,18 @@ export function createBudgetsService(db: Db) {
     const member = findMember(db, orgId, memberId);
     if (!member) throw notFound('Member');
     const job = jobOf(orgId, member.jobId);
-    return memberBudgetView(member, job, findMemberBudget(db, orgId, memberId), priceBook(db, orgId));
+    const design = designsOfJob(db, orgId, member.jobId).find((d) => d.memberId === memberId);
+    return memberBudgetView(member, job, findMemberBudget(db, orgId, memberId), priceBook(db, orgId), design);
   };
   const jobViews = (orgId: string, jobId: string) => {
     const job = jobOf(orgId, jobId);
     const book = priceBook(db, orgId);
+    const designs = designsOfJob(db, orgId, jobId);
     const views = listMembers(db, orgId, jobId).map((item) => {
       const member = findMember(db, orgId, item.id);
       if (!member) throw notFound('Member');
-      return memberBudgetView(member, job, findMemberBudget(db, orgId, item.id), book);
+      const design = designs.find((d) => d.memberId === item.id);
+      return memberBudgetView(member, job, findMemberBudget(db, orgId, item.id), book, design);
     });
     return { job, views };
   };
@@ -121,9 +125,12 @@ export function createBudgetsService(db: Db) {
           totalCents: v.totalCents,
           range: v.range,
           missingPrices: v.missingPrices.length,
+          design: v.design,
+          changeOrder: v.changeOrder,
         })),
         lowCents: views.reduce((sum, v) => sum + v.range.lowCents, 0),
         highCents: views.reduce((sum, v) => sum + v.range.highCents, 0),
+        changeOrders: views.filter((v) => v.changeOrder).length,
         sent: listSentBudgets(db, orgId, jobId).map((s) => ({
           id: s.id,
           clientName: s.clientName,

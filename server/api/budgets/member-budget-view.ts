@@ -2,17 +2,21 @@ import {
   budgetRange,
   buildMemberBudget,
   cheapestPassing,
+  designChange,
   nextSizeUp,
   type BudgetChoices,
   type BudgetFacts,
   type MemberBudget,
   type PriceAmounts,
 } from '@/lib/budget';
-import { CAUTION_TEXT, checkMember, getSize } from '@/lib/calc';
+import { CAUTION_TEXT, checkMember, getMaterial, getSize } from '@/lib/calc';
 import type { BudgetOverrides, MemberBudgetView } from '@/shared/schemas/budgets';
 import type { Job } from '@/shared/schemas/jobs';
 import type { Member } from '@/shared/schemas/members';
+import type { MemberDesign } from '@/shared/schemas/requests/member-design';
+import { DESIGNED_MATERIAL_LABELS } from '@/shared/schemas/requests/reply';
 import {
+  designedFacts,
   memberFacts,
   memberShortlist,
   shoringFor,
@@ -33,15 +37,25 @@ const NOTES = [
   'The budget never goes into the engineer’s design request.',
 ];
 
+/** What the member was budgeted as, in the change order's words. */
+function budgetedFamily(member: Member, material: BudgetChoices['material']): string {
+  if (material === 'steel') return DESIGNED_MATERIAL_LABELS['steel-w'];
+  if (material === 'flitch') return DESIGNED_MATERIAL_LABELS.flitch;
+  return DESIGNED_MATERIAL_LABELS[getMaterial(member.materialId).family];
+}
+
 /**
  * A member's whole budget: the lines at the preliminary size, the range to the next size up, every shortlist
  * size priced side by side with the cheapest passing one marked, and the scenarios that change the cost most.
+ * Once the engineer has designed the member (`design`), the lines and total are rebuilt from the engineer's
+ * member, the range closes on it, and a change order rises when it differs from the budgeted size.
  */
 export function memberBudgetView(
   member: Member,
   job: Job,
   saved: SavedBudget | undefined,
   book: PriceBookState,
+  design?: MemberDesign,
 ): MemberBudgetView {
   const given = saved?.choices ?? { allowances: [], oldHouse: [], engineerSiteVisit: false };
   const overrides: BudgetOverrides = saved?.overrides ?? {};
@@ -175,7 +189,41 @@ export function memberBudgetView(
       'knob-and-tube wiring, a vent stack in the wall, an asbestos test',
     );
 
-  const lines = budget.lines.map((line) => ({
+  let shown = budget;
+  let shownRange = range;
+  let changeOrder: MemberBudgetView['changeOrder'] = null;
+  if (design) {
+    const designed = designedFacts(member, job, choices, design, shoring);
+    shown = buildMemberBudget(
+      designed.facts,
+      { ...choices, material: designed.material },
+      book.amounts,
+      overrides,
+    );
+    shownRange = budgetRange({ label: design.designation, totalCents: shown.totalCents }, null);
+    shownRange.basis = `The engineer's member (request ${design.requestNumber}, version ${design.version}): the range closes on it`;
+    changeOrder = designChange(
+      {
+        label: `${size.label} ${member.summary.materialLabel}`,
+        family: budgetedFamily(member, choices.material),
+        plies: size.plies,
+        bIn: size.bIn,
+        dIn: size.dIn,
+        lowCents: range.lowCents,
+        highCents: range.highCents,
+      },
+      {
+        label: design.designation,
+        family: DESIGNED_MATERIAL_LABELS[design.material],
+        plies: design.material === 'steel-w' ? 1 : design.plies,
+        bIn: design.widthIn,
+        dIn: design.depthIn,
+        totalCents: shown.totalCents,
+      },
+    );
+  }
+
+  const lines = shown.lines.map((line) => ({
     ...line,
     stalePrice: line.priceKey !== null && book.stale.has(line.priceKey),
   }));
@@ -188,17 +236,27 @@ export function memberBudgetView(
     choices: given,
     overrides,
     lines,
-    subtotalCents: budget.subtotalCents,
-    totalCents: budget.totalCents,
-    range,
-    schedule: budget.schedule,
-    supply: budget.supply,
+    subtotalCents: shown.subtotalCents,
+    totalCents: shown.totalCents,
+    range: shownRange,
+    design: design
+      ? {
+          requestId: design.requestId,
+          requestNumber: design.requestNumber,
+          version: design.version,
+          label: `${design.designation} (${DESIGNED_MATERIAL_LABELS[design.material]})`,
+        }
+      : null,
+    preliminaryRange: design ? range : null,
+    changeOrder,
+    schedule: shown.schedule,
+    supply: shown.supply,
     comparison,
     scenarios,
-    missingPrices: budget.missingPrices,
+    missingPrices: shown.missingPrices,
     stalePrices: [...new Set(lines.filter((l) => l.stalePrice).map((l) => l.priceKey!))],
-    unusedOverrides: budget.unusedOverrides,
-    notes: [...NOTES, ...(budget.supply.note ? [budget.supply.note] : [])],
+    unusedOverrides: shown.unusedOverrides,
+    notes: [...NOTES, ...(shown.supply.note ? [shown.supply.note] : [])],
     updatedAt: saved?.updatedAt ?? null,
   };
 }

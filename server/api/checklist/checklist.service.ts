@@ -8,15 +8,22 @@ import type {
   Checklist,
   ChecklistItemKey,
   ChecklistItemPatch,
+  EngineerItemPatch,
   JobProgressList,
 } from '@/shared/schemas/job-checklist';
 import { checklistOf, progressOf } from './checklist-items';
 import { listChecklistRows, upsertChecklistRow } from './checklist.repository';
+import { engineerItemsOf } from './engineer-items';
+import { listEngineerItems, listItemPhotos, updateEngineerItem } from './engineer-items.repository';
+
+const PHOTO_TYPES = new Set(['image/jpeg', 'image/png', 'image/heic']);
+const photoError = (message: string) => new AppError('bad_request', message, { photoIds: [message] });
 
 /**
  * The job checklist of the actor's firm's jobs. Items start where the job puts them (lead-safe by the year
  * built, the engineer's design by the screens); each change records who and when. A raised lead-safe item
- * set "not needed" must say why in its note.
+ * set "not needed" must say why in its note. Beside the fixed items stand the engineer's "verify in the
+ * field" items from the structured replies; one whose photo is asked for is done only with a photo.
  */
 export function createChecklistService(db: Db) {
   const build = (orgId: string, jobId: string): Checklist => {
@@ -24,7 +31,8 @@ export function createChecklistService(db: Db) {
     if (!job) throw notFound('Job');
     const engineer = engineerNeededOf(listScreens(db, orgId, jobId));
     const items = checklistOf(job.yearBuilt, engineer, listChecklistRows(db, orgId, jobId));
-    return { jobId, items, progress: progressOf(items) };
+    const engineerItems = engineerItemsOf(db, listEngineerItems(db, orgId, jobId));
+    return { jobId, items, engineerItems, progress: progressOf([...items, ...engineerItems]) };
   };
 
   return {
@@ -56,9 +64,37 @@ export function createChecklistService(db: Db) {
       return build(actor.orgId, jobId);
     },
 
+    updateEngineerItem(actor: Actor, jobId: string, itemId: string, patch: EngineerItemPatch): Checklist {
+      db.transaction((tx) => {
+        openJob(tx, actor.orgId, jobId);
+        const current = listEngineerItems(tx, actor.orgId, jobId).find((i) => i.row.id === itemId)?.row;
+        if (!current) throw notFound('Checklist item');
+        const photoIds = patch.photoIds ?? current.photoIds;
+        const photos = listItemPhotos(tx, photoIds);
+        for (const id of photoIds) {
+          const photo = photos.find((p) => p.id === id);
+          if (!photo || photo.requestId !== current.requestId || photo.side !== 'firm')
+            throw photoError('Attach photos uploaded to this design request by your firm');
+          if (!PHOTO_TYPES.has(photo.mimeType)) throw photoError('Attach a photo (JPEG, PNG or HEIC)');
+        }
+        const state = patch.state ?? current.state;
+        if (current.photoAsked && state === 'done' && photoIds.length === 0)
+          throw photoError('The engineer asked for a photo of this: add it before marking it done');
+        const note = patch.note ?? current.note;
+        updateEngineerItem(tx, itemId, { state, note, photoIds, updatedBy: actor.userId });
+        recordAudit(tx, actor, {
+          action: 'checklist.engineer-item',
+          subject: jobId,
+          detail: { itemId, requestId: current.requestId, state, photos: photoIds.length },
+        });
+      });
+      return build(actor.orgId, jobId);
+    },
+
     /** Every open job's progress and "engineer needed" mark, for the jobs list. */
     progress(orgId: string): JobProgressList {
       const rows = listChecklistRows(db, orgId);
+      const engineerItems = listEngineerItems(db, orgId);
       const engineerJobs = new Set(listEngineerScreens(db, orgId).map((s) => s.jobId));
       return {
         jobs: listJobs(db, orgId, false).map((job) => {
@@ -68,7 +104,12 @@ export function createChecklistService(db: Db) {
             engineer,
             rows.filter((r) => r.jobId === job.id),
           );
-          return { jobId: job.id, progress: progressOf(items), engineerNeeded: engineer.needed };
+          const fromEngineer = engineerItems.filter((i) => i.row.jobId === job.id).map((i) => i.row);
+          return {
+            jobId: job.id,
+            progress: progressOf([...items, ...fromEngineer]),
+            engineerNeeded: engineer.needed,
+          };
         }),
       };
     },

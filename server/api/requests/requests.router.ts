@@ -12,6 +12,10 @@ import {
   revisionSchema,
   statusChangeSchema,
 } from '@/shared/schemas/requests/workflow';
+import { findJob } from '@/server/api/jobs/jobs.repository';
+import { notFound } from '@/server/app-error';
+import type { JobDesigns } from '@/shared/schemas/requests/member-design';
+import { designsOfJob } from './member-designs';
 import type { RequestViewer } from './request-access';
 import type { RequestsService } from './requests.service';
 
@@ -27,6 +31,19 @@ export const viewerOf = (res: Response): RequestViewer => ({
 interface RequestsDeps {
   db: Db;
   requests: RequestsService;
+}
+
+/** `/api/jobs/:jobId/designs`: the engineer's members that supersede the job's preliminary sizes. */
+export function jobDesignsRouter(db: Db): Router {
+  const router = Router({ mergeParams: true });
+  router.use(requireMember(db), requireRole('owner', 'contractor', 'estimator'));
+  router.get('/', validate({ params: jobParams }), (req, res) => {
+    const orgId = res.locals.member.orgId;
+    if (!findJob(db, orgId, req.params.jobId)) throw notFound('Job');
+    const body: JobDesigns = { designs: designsOfJob(db, orgId, req.params.jobId) };
+    res.json(body);
+  });
+  return router;
 }
 
 /** `/api/jobs/:jobId/requests`: the job's requests and a new Draft (the sending firm's roles). */

@@ -3,6 +3,7 @@ import { newId } from '@/db/new-id';
 import { requestInvitations } from '@/db/schema';
 import { AppError, notFound } from '@/server/app-error';
 import { findUserByEmail } from '@/server/api/auth/auth.repository';
+import { syncEngineerItems } from '@/server/api/checklist/engineer-items.repository';
 import { findJob } from '@/server/api/jobs/jobs.repository';
 import { findUser, listMemberships } from '@/server/api/me/me.repository';
 import { findMember } from '@/server/api/members/members.repository';
@@ -376,6 +377,11 @@ export function createRequestsService(deps: { db: Db; mailer: Mailer; appOrigin:
         if (Object.keys(fields).length > 0)
           throw new AppError('bad_request', 'Some fields need attention', fields);
         insertReply(tx, { requestId: row.id, version: row.version, reply, userId: viewer.userId });
+        syncEngineerItems(
+          tx,
+          { orgId: row.orgId, jobId: row.jobId, requestId: row.id, version: row.version },
+          reply.verifyInField,
+        );
         event(tx, viewer, row, side, 'replied', reply.note);
         auditRequest(tx, viewer, row, 'request.reply', {
           version: row.version,

@@ -125,6 +125,11 @@ describe('send', () => {
     const [mail] = await mailTo(server, world.engineer.body.email);
     expect(mail.subject).toContain('Design request 1 v1 from Sample Remodeling');
     expect(mail.text).toContain(`${TEST_APP_ORIGIN}/requests/${id}`);
+    // The HTML part as the fake SMTP server received it: the same link, in an anchor.
+    const wire = server.db.select().from(mailOutbox).where(eq(mailOutbox.id, mail.id)).get();
+    expect(wire?.captured).toBe(true);
+    expect(wire?.html).toContain(`href="${TEST_APP_ORIGIN}/requests/${id}"`);
+    expect(wire?.html).toContain('Sample Remodeling');
     const actions = server.db.select().from(auditEvents).where(eq(auditEvents.subject, id)).all();
     expect(actions.map((a) => a.action)).toEqual(['request.create', 'request.send']);
   });

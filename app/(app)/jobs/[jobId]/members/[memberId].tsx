@@ -3,6 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { spacing } from '@/lib/theme';
 import { TextLink } from '@/lib/ui/text-link';
 import { useJob } from '@/lib/hooks/use-job';
+import { useJobDesigns } from '@/lib/hooks/use-job-designs';
 import { useMe } from '@/lib/hooks/use-me';
 import { useMember } from '@/lib/hooks/use-member';
 import { useMemberSave } from '@/lib/hooks/use-member-save';
@@ -18,6 +19,7 @@ export default function MemberPage() {
   }>();
   const job = useJob(jobId);
   const member = useMember(memberId);
+  const designs = useJobDesigns(jobId);
   const { data: me } = useMe();
   const save = useMemberSave(jobId, memberId);
   const error = job.error ?? member.error;
@@ -46,6 +48,7 @@ export default function MemberPage() {
           storageKey={`${me.user.id}.${job.data.id}.${member.data.id}`}
           onSave={save}
           justSaved={saved === '1'}
+          design={designs.data?.find((d) => d.memberId === memberId)}
         />
       </WorkspaceSuspense>
     </View>
