@@ -15,3 +15,9 @@ export function WorkspaceSuspense({ children }: { children: ReactNode }) {
 export const LazySpanTableBuilder = lazy(() =>
   loadWorkspace().then((m) => ({ default: m.SpanTableBuilder })),
 );
+
+/** The step-by-step bearing screen, loaded with the engine when it first opens. */
+export const LazyScreenWizard = lazy(() => loadWorkspace().then((m) => ({ default: m.ScreenWizard })));
+
+/** A screen's outcome page, loaded with the engine (nonbearing header rule, framing list). */
+export const LazyScreenOutcome = lazy(() => loadWorkspace().then((m) => ({ default: m.ScreenOutcome })));

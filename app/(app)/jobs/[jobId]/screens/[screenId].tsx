@@ -1,10 +1,9 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useScreen } from '@/lib/hooks/use-screen';
 import { useScreenSave } from '@/lib/hooks/use-screen-save';
-import { LazyScreenOutcome, LazyScreenWizard } from '@/lib/ui/bearing/lazy-bearing';
 import { Button } from '@/lib/ui/button';
 import { ErrorView } from '@/lib/ui/error-view';
-import { WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
+import { LazyScreenOutcome, LazyScreenWizard, WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
 import { LoadingView } from '@/lib/ui/loading-view';
 import { Screen } from '@/lib/ui/screen';
 import { TextLink } from '@/lib/ui/text-link';

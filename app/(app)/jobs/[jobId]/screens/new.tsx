@@ -1,7 +1,6 @@
 import { useLocalSearchParams } from 'expo-router';
 import { useScreenSave } from '@/lib/hooks/use-screen-save';
-import { LazyScreenWizard } from '@/lib/ui/bearing/lazy-bearing';
-import { WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
+import { LazyScreenWizard, WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
 import { Screen } from '@/lib/ui/screen';
 import { TextLink } from '@/lib/ui/text-link';
 
