@@ -4,7 +4,8 @@ import { recordAudit, type Actor } from '@/server/api/audit/audit.repository';
 import { findJob } from '@/server/api/jobs/jobs.repository';
 import type { Job } from '@/shared/schemas/jobs';
 import type { Member, MemberCreate, MemberListItem, MemberPatch } from '@/shared/schemas/members';
-import { evaluate } from './member-evaluation';
+import { evaluateHere, evaluateInPool, memberToEvaluate, type MemberToEvaluate } from './member-evaluation';
+import type { MemberFields } from './members.repository';
 import { deleteMember, findMember, insertMember, listMembers, updateMember } from './members.repository';
 
 /** The member's job, which must still be open for its members to change. */
@@ -15,6 +16,21 @@ function openJob(db: DbOrTx, orgId: string, jobId: string): Job {
     throw new AppError('conflict', 'This job is archived: its members can be read, not changed');
   return job;
 }
+
+/** True when two checks read the same values, so the result of one is the result of the other. */
+const sameCheck = (a: MemberToEvaluate, b: MemberToEvaluate) =>
+  a.label === b.label &&
+  a.wall === b.wall &&
+  a.buildingWidthFt === b.buildingWidthFt &&
+  a.groundSnowPsf === b.groundSnowPsf &&
+  JSON.stringify(a.input) === JSON.stringify(b.input);
+
+/**
+ * The stored fields for `now` (read in the write's transaction): the pool's result when it was computed from
+ * the same values, else (the job or the member changed while the pool worked) computed again here.
+ */
+const fieldsFor = (now: MemberToEvaluate, from: MemberToEvaluate, computed: MemberFields) =>
+  sameCheck(now, from) ? computed : evaluateHere(now);
 
 /**
  * Members of the actor's firm's jobs. Every save recomputes with lib/calc and stores the server's own result;
@@ -34,10 +50,13 @@ export function createMembersService(db: Db) {
       return member;
     },
 
-    create(actor: Actor, jobId: string, body: MemberCreate): Member {
+    /** The check runs in the calculation pool; the write then happens in one transaction. */
+    async create(actor: Actor, jobId: string, body: MemberCreate): Promise<Member> {
+      const toCheck = (job: Job) => memberToEvaluate(job, body.label, body.wall, body.input);
+      const from = toCheck(openJob(db, actor.orgId, jobId));
+      const computed = await evaluateInPool(from);
       return db.transaction((tx) => {
-        const job = openJob(tx, actor.orgId, jobId);
-        const fields = evaluate(job, body.label, body.wall, body.input);
+        const fields = fieldsFor(toCheck(openJob(tx, actor.orgId, jobId)), from, computed);
         const member = insertMember(tx, { orgId: actor.orgId, jobId, userId: actor.userId }, fields);
         recordAudit(tx, actor, {
           action: 'member.create',
@@ -48,17 +67,21 @@ export function createMembersService(db: Db) {
       });
     },
 
-    update(actor: Actor, memberId: string, patch: MemberPatch): Member {
-      return db.transaction((tx) => {
+    /** As create: the check in the pool, then the write in one transaction. */
+    async update(actor: Actor, memberId: string, patch: MemberPatch): Promise<Member> {
+      const read = (tx: DbOrTx) => {
         const saved = findMember(tx, actor.orgId, memberId);
         if (!saved) throw notFound('Member');
         const job = openJob(tx, actor.orgId, saved.jobId);
-        const fields = evaluate(
-          job,
-          patch.label ?? saved.label,
-          patch.wall ?? saved.wall,
-          patch.input ?? saved.input,
-        );
+        const label = patch.label ?? saved.label;
+        const wall = patch.wall ?? saved.wall;
+        return { saved, toCheck: memberToEvaluate(job, label, wall, patch.input ?? saved.input) };
+      };
+      const from = read(db).toCheck;
+      const computed = await evaluateInPool(from);
+      return db.transaction((tx) => {
+        const { saved, toCheck } = read(tx);
+        const fields = fieldsFor(toCheck, from, computed);
         const member = updateMember(tx, actor.orgId, saved, actor.userId, fields);
         if (!member) throw notFound('Member');
         recordAudit(tx, actor, {
