@@ -8,5 +8,8 @@ export default defineConfig({
     environment: 'node',
     pool: 'forks',
     testTimeout: 20000,
+    // A set-up that saves a member waits for the calculation pool's first thread to load the engine, which
+    // takes seconds on a busy machine.
+    hookTimeout: 60000,
   },
 });

@@ -15,3 +15,12 @@ export function WorkspaceSuspense({ children }: { children: ReactNode }) {
 export const LazySpanTableBuilder = lazy(() =>
   loadWorkspace().then((m) => ({ default: m.SpanTableBuilder })),
 );
+
+/** The step-by-step bearing screen, loaded with the engine when it first opens. */
+export const LazyScreenWizard = lazy(() => loadWorkspace().then((m) => ({ default: m.ScreenWizard })));
+
+/** A screen's outcome page, loaded with the engine (nonbearing header rule, framing list). */
+export const LazyScreenOutcome = lazy(() => loadWorkspace().then((m) => ({ default: m.ScreenOutcome })));
+
+/** The shoring planner, loaded with the engine: it computes the plan on the device as it is typed. */
+export const LazyShoringPlanner = lazy(() => loadWorkspace().then((m) => ({ default: m.ShoringPlanner })));

@@ -11,8 +11,9 @@ const MAX_QUEUE = 32;
 let pool: Piscina | undefined;
 
 /**
- * One pool of worker threads per process for the heavy calculations (a full shortlist or span table takes
- * 100–300 ms, and must not hold the event loop that answers everyone else). Its threads number one fewer
+ * One pool of worker threads per process for the heavy work (a full shortlist or span table takes 100–300 ms;
+ * a member save's check with its diagrams, a budget read and a design request's PDF take tens of
+ * milliseconds each), which must not hold the event loop that answers everyone else. Its threads number one fewer
  * than the cores (at least one); beyond `minThreads` they end after a minute idle.
  */
 function calcPool(minThreads = 0): Piscina {
@@ -35,17 +36,36 @@ export function startCalcPool(): void {
   calcPool(1);
 }
 
-/** Runs a task of calc-tasks.ts in the pool; the answer is the result as JSON text. */
-export async function runInPool(task: 'shortlist' | 'spanTable', input: unknown): Promise<string> {
-  let answer: CalcTaskAnswer;
+type Tasks = typeof import('./calc-tasks');
+
+/** Runs a task of calc-tasks.ts in the pool by name; a full queue answers 429 (rate_limited). */
+export async function runTask<K extends keyof Tasks>(
+  task: K,
+  input: Parameters<Tasks[K]>[0],
+): Promise<Awaited<ReturnType<Tasks[K]>>> {
   try {
-    answer = await calcPool().run(input, { name: task });
+    return (await calcPool().run(input, { name: task })) as Awaited<ReturnType<Tasks[K]>>;
   } catch (error) {
     if (error instanceof Error && /queue is at limit/i.test(error.message)) {
       throw new AppError('rate_limited', 'The calculation service is busy: try again in a moment');
     }
     throw error;
   }
+}
+
+type AnsweringTask = {
+  [K in keyof Tasks]: ReturnType<Tasks[K]> extends CalcTaskAnswer<unknown> ? K : never;
+}[keyof Tasks];
+
+/**
+ * Runs an engine task of calc-tasks.ts in the pool and answers its value; the engine's input error comes
+ * back as the CalcInputError it was in the thread, naming the same field with the same message.
+ */
+export async function runInPool<K extends AnsweringTask>(
+  task: K,
+  input: Parameters<Tasks[K]>[0],
+): Promise<Extract<ReturnType<Tasks[K]>, { ok: true }>['value']> {
+  const answer = (await runTask(task, input)) as CalcTaskAnswer<unknown>;
   if (!answer.ok) throw new CalcInputError(answer.field, answer.message);
-  return answer.json;
+  return answer.value as Extract<ReturnType<Tasks[K]>, { ok: true }>['value'];
 }

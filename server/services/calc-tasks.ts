@@ -1,17 +1,28 @@
 import { CalcInputError, buildShortlist, buildSpanTable } from '@/lib/calc';
+import type { SavedBudget } from '@/server/api/budgets/budgets.repository';
+import { memberBudgetView, type PriceBookState } from '@/server/api/budgets/member-budget-view';
+import type { MemberDesign } from '@/shared/schemas/requests/member-design';
+import { evaluateMember, type MemberToEvaluate } from '@/server/api/members/member-evaluation';
+import type { MemberFields } from '@/server/api/members/members.repository';
+import { requestPackagePdf, type PackagePhoto } from '@/server/services/pdf/request-package-pdf';
+import type { MemberBudgetView } from '@/shared/schemas/budgets';
+import type { Job } from '@/shared/schemas/jobs';
+import type { Member } from '@/shared/schemas/members';
 import type { ShortlistInput } from '@/shared/schemas/calc/shortlist';
 import type { SpanTableInput } from '@/shared/schemas/calc/span-table';
+import type { RequestPackage } from '@/shared/schemas/requests/package';
 
 /**
- * What a worker thread of the calculation pool sends back: the result already as JSON text (serializing a
- * large result is part of the heavy work), or the engine's input error by field, which does not survive
- * the trip between threads as a class.
+ * What a worker thread of the calculation pool sends back: the result (as JSON text where it goes straight
+ * into a response, since serializing a large result is part of the heavy work), or the engine's input error
+ * by field, which does not survive the trip between threads as a class.
  */
-export type CalcTaskAnswer = { ok: true; json: string } | { ok: false; field: string; message: string };
+export type CalcTaskAnswer<T = string> =
+  { ok: true; value: T } | { ok: false; field: string; message: string };
 
-function answer(work: () => unknown): CalcTaskAnswer {
+function answer<T>(work: () => T): CalcTaskAnswer<T> {
   try {
-    return { ok: true, json: JSON.stringify(work()) };
+    return { ok: true, value: work() };
   } catch (error) {
     if (error instanceof CalcInputError) return { ok: false, field: error.field, message: error.message };
     throw error;
@@ -20,10 +31,35 @@ function answer(work: () => unknown): CalcTaskAnswer {
 
 /** Runs in a worker thread (calc-worker.cjs): every size of the chosen materials, checked and sorted. */
 export function shortlist(input: ShortlistInput): CalcTaskAnswer {
-  return answer(() => buildShortlist(input));
+  return answer(() => JSON.stringify(buildShortlist(input)));
 }
 
 /** Runs in a worker thread (calc-worker.cjs): the largest span of each size at each tributary width. */
 export function spanTable(input: SpanTableInput): CalcTaskAnswer {
-  return answer(() => buildSpanTable(input));
+  return answer(() => JSON.stringify(buildSpanTable(input)));
+}
+
+/** Runs in a worker thread (calc-worker.cjs): what a member save stores (check, diagrams, verdict). */
+export function memberFields(input: MemberToEvaluate): CalcTaskAnswer<MemberFields> {
+  return answer(() => evaluateMember(input));
+}
+
+/** What one member's budget is priced from, as read from the database on the main thread. */
+export interface MemberBudgetFacts {
+  member: Member;
+  job: Job;
+  saved: SavedBudget | undefined;
+  book: PriceBookState;
+  /** The engineer's member when a request for it is Designed: the budget is priced from it. */
+  design?: MemberDesign;
+}
+
+/** Runs in a worker thread (calc-worker.cjs): each member's budget, priced from its stored check. */
+export function budgetViews(input: MemberBudgetFacts[]): CalcTaskAnswer<MemberBudgetView[]> {
+  return answer(() => input.map((f) => memberBudgetView(f.member, f.job, f.saved, f.book, f.design)));
+}
+
+/** Runs in a worker thread (calc-worker.cjs): the design request's PDF (pages, diagrams, photos). */
+export function packagePdf(input: { pkg: RequestPackage; photos: PackagePhoto[] }): Promise<Uint8Array> {
+  return requestPackagePdf(input.pkg, input.photos);
 }

@@ -27,17 +27,22 @@ const writer = requireRole('owner', 'estimator');
 /** `/api/members/:memberId/budget`: one member's budget (read, save choices and overrides, CSV). */
 export function memberBudgetRouter(deps: BudgetsDeps): Router {
   const router = readers(deps.db, { mergeParams: true });
-  router.get('/', validate({ params: memberParams }), (req, res) => {
-    res.json(deps.budgets.member(res.locals.member.orgId, req.params.memberId));
+  router.get('/', validate({ params: memberParams }), async (req, res) => {
+    res.json(await deps.budgets.member(res.locals.member.orgId, req.params.memberId));
   });
-  router.put('/', writer, validate({ params: memberParams, body: memberBudgetSaveSchema }), (req, res) => {
-    res.json(deps.budgets.save(actorOf(res), req.params.memberId, req.body));
-  });
-  router.get('/lines.csv', validate({ params: memberParams }), (req, res) => {
+  router.put(
+    '/',
+    writer,
+    validate({ params: memberParams, body: memberBudgetSaveSchema }),
+    async (req, res) => {
+      res.json(await deps.budgets.save(actorOf(res), req.params.memberId, req.body));
+    },
+  );
+  router.get('/lines.csv', validate({ params: memberParams }), async (req, res) => {
     res
       .type('text/csv; charset=utf-8')
       .attachment('member-budget.csv')
-      .send(deps.budgets.memberCsv(res.locals.member.orgId, req.params.memberId));
+      .send(await deps.budgets.memberCsv(res.locals.member.orgId, req.params.memberId));
   });
   return router;
 }
@@ -45,14 +50,14 @@ export function memberBudgetRouter(deps: BudgetsDeps): Router {
 /** `/api/jobs/:jobId/budget`: the job's members summed, and their lines as CSV. */
 export function jobBudgetRouter(deps: BudgetsDeps): Router {
   const router = readers(deps.db, { mergeParams: true });
-  router.get('/', validate({ params: jobParams }), (req, res) => {
-    res.json(deps.budgets.job(res.locals.member.orgId, req.params.jobId));
+  router.get('/', validate({ params: jobParams }), async (req, res) => {
+    res.json(await deps.budgets.job(res.locals.member.orgId, req.params.jobId));
   });
-  router.get('/lines.csv', validate({ params: jobParams }), (req, res) => {
+  router.get('/lines.csv', validate({ params: jobParams }), async (req, res) => {
     res
       .type('text/csv; charset=utf-8')
       .attachment('job-budget.csv')
-      .send(deps.budgets.jobCsv(res.locals.member.orgId, req.params.jobId));
+      .send(await deps.budgets.jobCsv(res.locals.member.orgId, req.params.jobId));
   });
   return router;
 }
@@ -60,8 +65,8 @@ export function jobBudgetRouter(deps: BudgetsDeps): Router {
 /** `/api/jobs/:jobId/budgets`: send the job budget to a client (frozen and dated). */
 export function jobSentBudgetsRouter(deps: BudgetsDeps): Router {
   const router = readers(deps.db, { mergeParams: true });
-  router.post('/', writer, validate({ params: jobParams, body: sendBudgetSchema }), (req, res) => {
-    res.status(201).json(deps.budgets.send(actorOf(res), req.params.jobId, req.body));
+  router.post('/', writer, validate({ params: jobParams, body: sendBudgetSchema }), async (req, res) => {
+    res.status(201).json(await deps.budgets.send(actorOf(res), req.params.jobId, req.body));
   });
   return router;
 }

@@ -6,6 +6,7 @@ import { findJob } from '@/server/api/jobs/jobs.repository';
 import { findMember, listMembers } from '@/server/api/members/members.repository';
 import { designsOfJob } from '@/server/api/requests/member-designs';
 import { isStale, staleAfterDays } from '@/server/api/price-book/price-book.service';
+import { runInPool } from '@/server/services/calc-pool';
 import type {
   JobBudget,
   MemberBudgetSave,
@@ -25,7 +26,7 @@ import {
   saveMemberBudget,
 } from './budgets.repository';
 import { clientSummaryPdf } from './client-summary-pdf';
-import { memberBudgetView, type PriceBookState } from './member-budget-view';
+import type { PriceBookState } from './member-budget-view';
 
 const DEFAULT_EXCLUSIONS = [
   'Hidden conditions found once the wall is open, beyond the allowances named',
@@ -70,30 +71,36 @@ export function createBudgetsService(db: Db) {
     if (!job) throw notFound('Job');
     return job;
   };
-  const view = (orgId: string, memberId: string): MemberBudgetView => {
+  // What a budget is priced from is read here; the pricing (a shortlist, a check per scenario) runs in the
+  // calculation pool.
+  const view = async (orgId: string, memberId: string): Promise<MemberBudgetView> => {
     const member = findMember(db, orgId, memberId);
     if (!member) throw notFound('Member');
     const job = jobOf(orgId, member.jobId);
     const design = designsOfJob(db, orgId, member.jobId).find((d) => d.memberId === memberId);
-    return memberBudgetView(member, job, findMemberBudget(db, orgId, memberId), priceBook(db, orgId), design);
+    const saved = findMemberBudget(db, orgId, memberId);
+    const [only] = await runInPool('budgetViews', [
+      { member, job, saved, book: priceBook(db, orgId), design },
+    ]);
+    return only;
   };
-  const jobViews = (orgId: string, jobId: string) => {
+  const jobViews = async (orgId: string, jobId: string) => {
     const job = jobOf(orgId, jobId);
     const book = priceBook(db, orgId);
     const designs = designsOfJob(db, orgId, jobId);
-    const views = listMembers(db, orgId, jobId).map((item) => {
+    const facts = listMembers(db, orgId, jobId).map((item) => {
       const member = findMember(db, orgId, item.id);
       if (!member) throw notFound('Member');
       const design = designs.find((d) => d.memberId === item.id);
-      return memberBudgetView(member, job, findMemberBudget(db, orgId, item.id), book, design);
+      return { member, job, saved: findMemberBudget(db, orgId, item.id), book, design };
     });
-    return { job, views };
+    return { job, views: await runInPool('budgetViews', facts) };
   };
 
   return {
     member: view,
 
-    save(actor: Actor, memberId: string, body: MemberBudgetSave): MemberBudgetView {
+    save(actor: Actor, memberId: string, body: MemberBudgetSave): Promise<MemberBudgetView> {
       db.transaction((tx) => {
         const member = findMember(tx, actor.orgId, memberId);
         if (!member) throw notFound('Member');
@@ -107,13 +114,13 @@ export function createBudgetsService(db: Db) {
       return view(actor.orgId, memberId);
     },
 
-    memberCsv(orgId: string, memberId: string): string {
-      const v = view(orgId, memberId);
+    async memberCsv(orgId: string, memberId: string): Promise<string> {
+      const v = await view(orgId, memberId);
       return budgetLinesCsv([{ label: v.memberLabel, lines: v.lines }]);
     },
 
-    job(orgId: string, jobId: string): JobBudget {
-      const { job, views } = jobViews(orgId, jobId);
+    async job(orgId: string, jobId: string): Promise<JobBudget> {
+      const { job, views } = await jobViews(orgId, jobId);
       return {
         jobId,
         jobName: job.name,
@@ -141,14 +148,13 @@ export function createBudgetsService(db: Db) {
       };
     },
 
-    jobCsv(orgId: string, jobId: string): string {
-      return budgetLinesCsv(
-        jobViews(orgId, jobId).views.map((v) => ({ label: v.memberLabel, lines: v.lines })),
-      );
+    async jobCsv(orgId: string, jobId: string): Promise<string> {
+      const { views } = await jobViews(orgId, jobId);
+      return budgetLinesCsv(views.map((v) => ({ label: v.memberLabel, lines: v.lines })));
     },
 
-    send(actor: Actor, jobId: string, body: SendBudget): SentBudget {
-      const { job, views } = jobViews(actor.orgId, jobId);
+    async send(actor: Actor, jobId: string, body: SendBudget): Promise<SentBudget> {
+      const { job, views } = await jobViews(actor.orgId, jobId);
       const missing = views.filter((v) => v.missingPrices.length > 0).map((v) => v.memberLabel);
       if (missing.length > 0)
         throw new AppError(

@@ -6,6 +6,7 @@ import {
   prescriptiveVerdict,
 } from '@/lib/calc';
 import { AppError } from '@/server/app-error';
+import { runInPool } from '@/server/services/calc-pool';
 import type { MemberCheckInput } from '@/shared/schemas/calc/member';
 import type { Job } from '@/shared/schemas/jobs';
 import type { MemberState, MemberSummary } from '@/shared/schemas/members';
@@ -23,41 +24,87 @@ function memberState(pass: boolean, engineerNeeded: boolean): MemberState {
   return engineerNeeded ? 'engineer-needed' : 'passes';
 }
 
+/** What a member's check reads: the member as it is saved and the two job values a header's verdict takes. */
+export interface MemberToEvaluate {
+  label: string;
+  wall: string;
+  input: MemberCheckInput;
+  buildingWidthFt: Job['buildingWidthFt'];
+  groundSnowPsf: Job['groundSnowPsf'];
+}
+
+/** The member to check from the job it belongs to and what is being saved. */
+export const memberToEvaluate = (
+  job: Job,
+  label: string,
+  wall: string,
+  input: MemberCheckInput,
+): MemberToEvaluate => ({
+  label,
+  wall,
+  input,
+  buildingWidthFt: job.buildingWidthFt,
+  groundSnowPsf: job.groundSnowPsf,
+});
+
 /**
  * Runs the engine on what is being saved: the check with its diagram samples, and for a header the
  * prescriptive-path verdict on the job's building width and ground snow. A beam always needs an engineer;
- * its reasons come from the same envelope test, so `engineerReasons` lists every one.
+ * its reasons come from the same envelope test, so `engineerReasons` lists every one. The engine's input
+ * error is thrown as it is (CalcInputError): this also runs in a worker thread of the calculation pool.
  */
-export function evaluate(job: Job, label: string, wall: string, given: MemberCheckInput): MemberFields {
-  const input: MemberCheckInput = { ...given, label };
+export function evaluateMember(given: MemberToEvaluate): MemberFields {
+  const { label, wall, buildingWidthFt, groundSnowPsf } = given;
+  const input: MemberCheckInput = { ...given.input, label };
+  const result = checkMember(input, { diagrams: true });
+  const facts = { member: input, buildingWidthFt, groundSnowPsf };
+  const prescriptive = input.kind === 'header' ? prescriptiveVerdict(facts) : null;
+  const engineerNeeded = prescriptive ? prescriptive.verdict === 'engineer-needed' : true;
+  const state = memberState(result.pass, engineerNeeded);
+  const summary: MemberSummary = {
+    state,
+    pass: result.pass,
+    governingCheck: result.governing.check,
+    governingRatio: result.governing.ratio,
+    warningsCount: result.warnings.length,
+    sizeLabel: result.member.sizeLabel,
+    materialLabel: result.member.materialLabel,
+    engineerReasons: state !== 'engineer-needed' ? [] : (prescriptive?.reasons ?? envelopeReasons(facts)),
+  };
+  return {
+    kind: input.kind,
+    label,
+    wall,
+    input,
+    materialId: input.materialId,
+    sizeId: input.sizeId,
+    summary,
+    result,
+    prescriptive,
+    engineVersion: ENGINE_VERSION,
+  };
+}
+
+/** {@link evaluateMember} on the event loop, the engine's input error as a 400 naming the member's field. */
+export function evaluateHere(given: MemberToEvaluate): MemberFields {
   try {
-    const result = checkMember(input, { diagrams: true });
-    const facts = { member: input, buildingWidthFt: job.buildingWidthFt, groundSnowPsf: job.groundSnowPsf };
-    const prescriptive = input.kind === 'header' ? prescriptiveVerdict(facts) : null;
-    const engineerNeeded = prescriptive ? prescriptive.verdict === 'engineer-needed' : true;
-    const state = memberState(result.pass, engineerNeeded);
-    const summary: MemberSummary = {
-      state,
-      pass: result.pass,
-      governingCheck: result.governing.check,
-      governingRatio: result.governing.ratio,
-      warningsCount: result.warnings.length,
-      sizeLabel: result.member.sizeLabel,
-      materialLabel: result.member.materialLabel,
-      engineerReasons: state !== 'engineer-needed' ? [] : (prescriptive?.reasons ?? envelopeReasons(facts)),
-    };
-    return {
-      kind: input.kind,
-      label,
-      wall,
-      input,
-      materialId: input.materialId,
-      sizeId: input.sizeId,
-      summary,
-      result,
-      prescriptive,
-      engineVersion: ENGINE_VERSION,
-    };
+    return evaluateMember(given);
+  } catch (error) {
+    throw asFieldError(error);
+  }
+}
+
+/** {@link evaluateHere} for a member of `job`. */
+export const evaluate = (job: Job, label: string, wall: string, given: MemberCheckInput): MemberFields =>
+  evaluateHere(memberToEvaluate(job, label, wall, given));
+
+/**
+ * {@link evaluateMember} in the calculation pool, so a save does not hold the event loop for the check and
+ * its diagram samples; the same result, and the same 400 naming the member's field.
+ */
+export async function evaluateInPool(given: MemberToEvaluate): Promise<MemberFields> {
+  try {
+    return await runInPool('memberFields', given);
   } catch (error) {
     throw asFieldError(error);
   }

@@ -35,8 +35,8 @@ export function jobMembersRouter(deps: MembersDeps): Router {
     res.json({ members: deps.members.list(res.locals.member.orgId, req.params.jobId) });
   });
 
-  router.post('/', validate({ params: jobParams, body: memberCreateSchema }), (req, res) => {
-    sendCreated(res, deps.members.create(actorOf(res), req.params.jobId, req.body));
+  router.post('/', validate({ params: jobParams, body: memberCreateSchema }), async (req, res) => {
+    sendCreated(res, await deps.members.create(actorOf(res), req.params.jobId, req.body));
   });
 
   return router;
@@ -50,9 +50,13 @@ export function membersRouter(deps: MembersDeps): Router {
     res.json(deps.members.get(res.locals.member.orgId, req.params.memberId));
   });
 
-  router.patch('/:memberId', validate({ params: memberParams, body: memberPatchSchema }), (req, res) => {
-    res.json(deps.members.update(actorOf(res), req.params.memberId, req.body));
-  });
+  router.patch(
+    '/:memberId',
+    validate({ params: memberParams, body: memberPatchSchema }),
+    async (req, res) => {
+      res.json(await deps.members.update(actorOf(res), req.params.memberId, req.body));
+    },
+  );
 
   router.delete('/:memberId', validate({ params: memberParams }), (req, res) => {
     deps.members.remove(actorOf(res), req.params.memberId);

@@ -6,7 +6,8 @@ import { recordAudit, type Actor } from '@/server/api/audit/audit.repository';
 import { findJob } from '@/server/api/jobs/jobs.repository';
 import type { Job } from '@/shared/schemas/jobs';
 import type { Member, MemberCreate, MemberListItem, MemberPatch } from '@/shared/schemas/members';
-import { evaluate } from './member-evaluation';
+import { evaluateHere, evaluateInPool, memberToEvaluate, type MemberToEvaluate } from './member-evaluation';
+import type { MemberFields } from './members.repository';
 import {
   deleteMember,
   findMember,
@@ -24,6 +25,21 @@ function openJob(db: DbOrTx, orgId: string, jobId: string): Job {
     throw new AppError('conflict', 'This job is archived: its members can be read, not changed');
   return job;
 }
+
+/** True when two checks read the same values, so the result of one is the result of the other. */
+const sameCheck = (a: MemberToEvaluate, b: MemberToEvaluate) =>
+  a.label === b.label &&
+  a.wall === b.wall &&
+  a.buildingWidthFt === b.buildingWidthFt &&
+  a.groundSnowPsf === b.groundSnowPsf &&
+  JSON.stringify(a.input) === JSON.stringify(b.input);
+
+/**
+ * The stored fields for `now` (read in the write's transaction): the pool's result when it was computed from
+ * the same values, else (the job or the member changed while the pool worked) computed again here.
+ */
+const fieldsFor = (now: MemberToEvaluate, from: MemberToEvaluate, computed: MemberFields) =>
+  sameCheck(now, from) ? computed : evaluateHere(now);
 
 /**
  * Members of the actor's firm's jobs. Every save recomputes with lib/calc and stores the server's own result;
@@ -43,11 +59,16 @@ export function createMembersService(db: Db) {
       return member;
     },
 
-    /** A create sent again with the same device-chosen id answers the member it made (see alreadyCreated). */
-    create(actor: Actor, jobId: string, body: MemberCreate): Created<Member> {
+    /**
+     * The check runs in the calculation pool; the write then happens in one transaction. A create sent again
+     * with the same device-chosen id answers the member it made (see alreadyCreated).
+     */
+    async create(actor: Actor, jobId: string, body: MemberCreate): Promise<Created<Member>> {
+      const toCheck = (job: Job) => memberToEvaluate(job, body.label, body.wall, body.input);
+      const from = toCheck(openJob(db, actor.orgId, jobId));
+      const computed = await evaluateInPool(from);
       return db.transaction((tx) => {
-        const job = openJob(tx, actor.orgId, jobId);
-        const fields = evaluate(job, body.label, body.wall, body.input);
+        const fields = fieldsFor(toCheck(openJob(tx, actor.orgId, jobId)), from, computed);
         if (body.id) {
           const found = findMemberInAnyFirm(tx, body.id);
           const asSent = { jobId, label: fields.label, wall: fields.wall, input: fields.input };
@@ -69,21 +90,25 @@ export function createMembersService(db: Db) {
       });
     },
 
-    update(actor: Actor, memberId: string, patch: MemberPatch): Member {
+    /** As create: the check in the pool, then the write in one transaction (refused on a stale baseVersion). */
+    async update(actor: Actor, memberId: string, patch: MemberPatch): Promise<Member> {
       const { baseVersion, ...changes } = patch;
-      return db.transaction((tx) => {
+      const read = (tx: DbOrTx) => {
         const saved = findMember(tx, actor.orgId, memberId);
         if (!saved) throw notFound('Member');
         if (baseVersion !== undefined && baseVersion !== saved.version) {
           throw versionConflict('This member', saved);
         }
         const job = openJob(tx, actor.orgId, saved.jobId);
-        const fields = evaluate(
-          job,
-          patch.label ?? saved.label,
-          patch.wall ?? saved.wall,
-          patch.input ?? saved.input,
-        );
+        const label = patch.label ?? saved.label;
+        const wall = patch.wall ?? saved.wall;
+        return { saved, toCheck: memberToEvaluate(job, label, wall, patch.input ?? saved.input) };
+      };
+      const from = read(db).toCheck;
+      const computed = await evaluateInPool(from);
+      return db.transaction((tx) => {
+        const { saved, toCheck } = read(tx);
+        const fields = fieldsFor(toCheck, from, computed);
         const member = updateMember(tx, actor.orgId, saved, actor.userId, fields);
         if (!member) throw notFound('Member');
         recordAudit(tx, actor, {

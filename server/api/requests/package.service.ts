@@ -3,7 +3,8 @@ import { ZipArchive } from 'archiver';
 import type { Db } from '@/db/client';
 import { toCsv } from '@/lib/format/csv';
 import { AppError } from '@/server/app-error';
-import { requestPackagePdf, type PackagePhoto } from '@/server/services/pdf/request-package-pdf';
+import { runTask } from '@/server/services/calc-pool';
+import type { PackagePhoto } from '@/server/services/pdf/request-package-pdf';
 import type { FileStorage } from '@/server/services/storage/file-storage';
 import {
   REQUEST_PACKAGE_FORMAT,
@@ -70,7 +71,8 @@ export function createPackageService(deps: { db: Db; storage: FileStorage }) {
           mimeType: stored.previewKey ? 'image/jpeg' : stored.mimeType,
         });
       }
-      const bytes = await requestPackagePdf(pkg, photos);
+      // Laying out the pages and drawing the diagrams and photos is heavy: it runs in the calculation pool.
+      const bytes = await runTask('packagePdf', { pkg, photos });
       return { bytes, fileName: `design-request-${pkg.request.number}-v${pkg.request.version}.pdf` };
     },
 

@@ -11,10 +11,13 @@ import { REQUEST_STATE_LABELS } from '@/shared/schemas/requests/workflow';
 import { drawMemberDiagrams, drawSketch } from './pdf-diagrams';
 import { MUTED, PAGE, RULE, PdfWriter } from './pdf-writer';
 
-/** A photo's bytes for the PDF: the downscaled copy when there is one; null for a HEIC (not decodable here). */
+/**
+ * A photo's bytes for the PDF: the downscaled copy when there is one; null for a HEIC (not decodable here).
+ * Plain bytes rather than a Buffer: the PDF is made in a worker thread, and a Buffer arrives there as bytes.
+ */
 export interface PackagePhoto {
   file: SnapshotFile;
-  bytes: Buffer | null;
+  bytes: Uint8Array | null;
   mimeType: string;
 }
 

@@ -1,8 +1,7 @@
 import { useLocalSearchParams } from 'expo-router';
 import { useMe } from '@/lib/hooks/use-me';
 import { useScreenSave } from '@/lib/hooks/use-screen-save';
-import { LazyScreenWizard } from '@/lib/ui/bearing/lazy-bearing';
-import { WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
+import { LazyScreenWizard, WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
 import { LoadingView } from '@/lib/ui/loading-view';
 import { Screen } from '@/lib/ui/screen';
 import { TextLink } from '@/lib/ui/text-link';

@@ -1,9 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 import { useMember } from '@/lib/hooks/use-member';
 import { useShoring } from '@/lib/hooks/use-shoring';
-import { LazyShoringPlanner } from '@/lib/ui/bearing/lazy-bearing';
 import { ErrorView } from '@/lib/ui/error-view';
-import { WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
+import { LazyShoringPlanner, WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
 import { LoadingView } from '@/lib/ui/loading-view';
 import { Screen } from '@/lib/ui/screen';
 import { Text } from '@/lib/ui/text';
