@@ -183,7 +183,6 @@ export function MemberEditor({
           </Notice>
         ) : null}
         {differs ? <Notice tone="info">{differs}</Notice> : null}
-        {design ? <SupersededNotice design={design} /> : null}
       </>
     );
     return (
@@ -242,6 +241,7 @@ export function MemberEditor({
         </Text>
         {twoPane ? saveButton : null}
       </View>
+      {design ? <SupersededNotice design={design} /> : null}
     </View>
   );
 
