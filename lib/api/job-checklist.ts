@@ -1,26 +1,8 @@
-import {
-  checklistSchema,
-  jobProgressListSchema,
-  type ChecklistItemKey,
-  type ChecklistState,
-} from '@/shared/schemas/job-checklist';
+import { checklistSchema, jobProgressListSchema } from '@/shared/schemas/job-checklist';
 import { apiRequest } from './client';
 
 export const fetchChecklist = (jobId: string) =>
   apiRequest('GET', `/api/jobs/${encodeURIComponent(jobId)}/checklist`, checklistSchema);
-
-/** Sets one item's state and/or note; answers with the whole checklist. */
-export const updateChecklistItem = (
-  jobId: string,
-  key: ChecklistItemKey,
-  patch: { state?: ChecklistState; note?: string },
-) =>
-  apiRequest(
-    'PATCH',
-    `/api/jobs/${encodeURIComponent(jobId)}/checklist/${encodeURIComponent(key)}`,
-    checklistSchema,
-    patch,
-  );
 
 /** Every open job's checklist progress, for the jobs list. */
 export const fetchJobProgress = () =>

@@ -1,26 +1,83 @@
 import { useCallback } from 'react';
-import useSWR, { useSWRConfig } from 'swr';
-import { fetchChecklist, updateChecklistItem } from '@/lib/api/job-checklist';
+import useSWR from 'swr';
+import { useSWRConfig } from 'swr';
+import { fetchChecklist } from '@/lib/api/job-checklist';
 import { keys } from '@/lib/api/keys';
-import type { ChecklistItemKey, ChecklistState } from '@/shared/schemas/job-checklist';
+import { cacheKey, nextVersion, queueWrite, withBaseVersion } from '@/lib/offline/queue-write';
+import {
+  checklistSchema,
+  type Checklist,
+  type ChecklistItemKey,
+  type ChecklistState,
+} from '@/shared/schemas/job-checklist';
 import { useMe } from './use-me';
 
-/** The job's checklist, and a way to set one item (the jobs list's progress follows). */
+type Patch = { state?: ChecklistState; note?: string };
+
+/** The checklist with one item changed on the device, its progress counted again. */
+function patched(
+  checklist: Checklist,
+  key: ChecklistItemKey,
+  patch: Patch,
+  by: { id: string; name: string },
+) {
+  const items = checklist.items.map((item) =>
+    item.key === key
+      ? nextVersion({
+          ...item,
+          ...patch,
+          updatedBy: by.id,
+          updatedByName: by.name,
+          updatedAt: new Date().toISOString(),
+        })
+      : item,
+  );
+  const count = (state: ChecklistState) => items.filter((i) => i.state === state).length;
+  return {
+    ...checklist,
+    items,
+    progress: {
+      done: count('done'),
+      notNeeded: count('not-needed'),
+      toDo: count('to-do'),
+      total: items.length,
+    },
+  };
+}
+
+/**
+ * The job's checklist, and a way to set one item through the device's queue (the jobs list's progress
+ * follows once the server has it).
+ */
 export function useChecklist(jobId: string) {
   const { data: me } = useMe();
   const orgId = me?.activeOrgId ?? '';
   const { mutate } = useSWRConfig();
   const swr = useSWR(me ? keys.checklist(orgId, jobId) : null, () => fetchChecklist(jobId));
+  const current = swr.data;
   const setItem = useCallback(
-    async (key: ChecklistItemKey, patch: { state?: ChecklistState; note?: string }) => {
-      const next = await updateChecklistItem(jobId, key, patch);
-      await Promise.all([
-        mutate(keys.checklist(orgId, jobId), next, { revalidate: false }),
-        mutate(keys.jobProgress(orgId)),
-      ]);
-      return next;
+    async (key: ChecklistItemKey, patch: Patch) => {
+      if (!me || !current) throw new Error('The checklist is not loaded yet');
+      const item = current.items.find((i) => i.key === key);
+      const local = patched(current, key, patch, me.user);
+      const saved = await queueWrite(checklistSchema, {
+        key: crypto.randomUUID(),
+        orgId,
+        entity: 'checklist',
+        create: false,
+        recordId: `${jobId}:${key}`,
+        group: jobId,
+        label: `Checklist: ${item?.title ?? key}`,
+        method: 'PATCH',
+        path: `/api/jobs/${encodeURIComponent(jobId)}/checklist/${encodeURIComponent(key)}`,
+        body: withBaseVersion(patch, item),
+        localRecord: local,
+        cache: { recordKey: cacheKey(keys.checklist(orgId, jobId)) },
+      });
+      if (saved.state === 'sent') await mutate(keys.jobProgress(orgId));
+      return saved.data ?? local;
     },
-    [jobId, mutate, orgId],
+    [current, jobId, me, mutate, orgId],
   );
   return { ...swr, setItem };
 }

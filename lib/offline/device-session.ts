@@ -1,6 +1,6 @@
 import { overlayPending } from './overlay';
 import { createOutbox, type Outbox, type Sender, type SubmitResult } from './outbox';
-import type { DeviceStore, NewOutboxItem, OutboxItem } from './outbox-types';
+import type { DeviceStore, NewOutboxItem, OutboxItem, StoredBlob } from './outbox-types';
 
 /** SWR's `mutate`, as the session needs it: set data (or an updater) and/or revalidate one key. */
 export type CacheMutate = (
@@ -141,10 +141,14 @@ export function createDeviceSession(deps: DeviceSessionDeps) {
       return isMeKey(key) ? opened.store.getMeta(ME_META) : undefined;
     },
     overlay: (key: string, data: unknown) => overlayPending(key, data, snapshot.items),
-    /** Stores and sends one write; when it has to wait, the device's copy shows in its record and list. */
-    async submit(input: NewOutboxItem): Promise<SubmitResult> {
+    /**
+     * Stores and sends one write (a photo's blob is kept on the device first, so the upload resumes after a
+     * reload); when it has to wait, the device's copy shows in its record and list.
+     */
+    async submit(input: NewOutboxItem, blob?: StoredBlob): Promise<SubmitResult> {
       const opened = await session();
       if (!opened) throw new Error('No device session: sign in first');
+      if (blob) await opened.store.putBlob(blob);
       const result = await opened.outbox.submit(input);
       if (result.state === 'queued' || result.state === 'conflict') {
         await refresh(opened);

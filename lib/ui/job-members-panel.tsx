@@ -12,6 +12,7 @@ import { ErrorView } from './error-view';
 import { Icon } from './icon';
 import { LinkButton } from './link-button';
 import { memberStateLook } from './member-state';
+import { DeviceMark } from './offline/device-mark';
 import { RecomputeNotice } from './recompute-notice';
 import { checkNames } from './result/check-names';
 import { Text } from './text';
@@ -33,6 +34,7 @@ function MemberRow({ member }: { member: MemberListItem }) {
             <View style={cardRowStyles.text}>
               <Text variant="bodyStrong">{member.label}</Text>
               <Text tone={look.tone}>{look.word}</Text>
+              <DeviceMark recordId={member.id} />
               <Text variant="caption" tone="muted">
                 {member.kind === 'header' ? 'Header' : 'Beam'}
                 {member.wall ? ` · ${member.wall}` : ''} · {member.summary.sizeLabel}{' '}

@@ -1,10 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { useSWRConfig } from 'swr';
 import { ApiError } from '@/lib/api/client';
-import { keys } from '@/lib/api/keys';
-import { saveShoring } from '@/lib/api/shoring-plans';
-import { useMe } from '@/lib/hooks/use-me';
+import { useShoringSave } from '@/lib/hooks/use-shoring-save';
 import { spacing } from '@/lib/theme';
 import { Button } from '@/lib/ui/button';
 import { Card } from '@/lib/ui/card';
@@ -65,11 +62,19 @@ function formOf(saved: ShoringRecord | null): Form {
 }
 
 /** The temporary shoring planner of a member: layout, studs or rented shores, what the walls stand on. */
-export function ShoringPlanner({ memberId, saved }: { memberId: string; saved: ShoringRecord | null }) {
-  const { data: me } = useMe();
-  const { mutate } = useSWRConfig();
+export function ShoringPlanner({
+  jobId,
+  memberId,
+  saved,
+}: {
+  jobId: string;
+  memberId: string;
+  saved: ShoringRecord | null;
+}) {
+  const saveShoring = useShoringSave(jobId, memberId, saved);
   const [form, setForm] = useState<Form>(() => formOf(saved));
   const [record, setRecord] = useState(saved);
+  const [waiting, setWaiting] = useState(false);
   const [problem, setProblem] = useState<ApiError | null>(null);
   const [busy, setBusy] = useState(false);
   const set =
@@ -81,7 +86,7 @@ export function ShoringPlanner({ memberId, saved }: { memberId: string; saved: S
   const plan = async () => {
     setBusy(true);
     try {
-      const next = await saveShoring(memberId, {
+      const next = await saveShoring({
         layout: form.layout,
         joistSpanAFt: num(form.spanA),
         joistSpanBFt: form.layout === 'both-sides' ? num(form.spanB) : undefined,
@@ -98,8 +103,8 @@ export function ShoringPlanner({ memberId, saved }: { memberId: string; saved: S
         standsOn: form.standsOn,
       });
       setRecord(next);
+      setWaiting(next === null);
       setProblem(null);
-      if (me) await mutate(keys.shoring(me.activeOrgId, memberId), next, { revalidate: false });
     } catch (error) {
       if (!(error instanceof ApiError)) throw error;
       setProblem(error);
@@ -238,6 +243,12 @@ export function ShoringPlanner({ memberId, saved }: { memberId: string; saved: S
           testID="shoring-save"
         />
       </Card>
+      {waiting ? (
+        <Notice tone="info" title="Saved on this device only" testID="shoring-waiting">
+          No signal: the plan is sent when there is, and the server works out the walls from the member’s
+          saved loads. The result shows here once it has.
+        </Notice>
+      ) : null}
       {record ? <ShoringResult record={record} /> : null}
     </View>
   );

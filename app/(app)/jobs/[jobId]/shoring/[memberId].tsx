@@ -22,7 +22,7 @@ export default function ShoringPage() {
         The temporary walls carry this member’s saved loads ({member.data.input.clearSpanFt} ft clear span)
         while the wall comes out.
       </Text>
-      <ShoringPlanner memberId={memberId} saved={shoring.data} />
+      <ShoringPlanner jobId={jobId} memberId={memberId} saved={shoring.data} />
     </Screen>
   );
 }
