@@ -146,6 +146,18 @@ describe('device session', () => {
     expect(session.snapshot().items).toEqual([]);
   });
 
+  it('a request that cannot reach the server marks the device offline, and an answer marks it online again', async () => {
+    let online = false;
+    const { session } = setup(() => (online ? { status: 201, body: undefined } : 'offline'));
+    await session.open('u1');
+    await session.submit(newMember());
+    expect(session.snapshot().online).toBe(false);
+    online = true;
+    await session.remember(membersKey, []);
+    expect(session.snapshot().online).toBe(true);
+    await expect.poll(() => session.snapshot().items.length).toBe(0);
+  });
+
   it('sign-out deletes the person’s database, the pointer and the runtime caches', async () => {
     const { session, databases, pointer, caches } = setup();
     await session.remember(JSON.stringify(['me', null]), me('u1'));
