@@ -43,6 +43,6 @@ const styles = StyleSheet.create({
     paddingHorizontal: spacing.md,
     borderRadius: radii.pill,
     borderWidth: 1,
-    flexShrink: 1,
+    flexShrink: 0,
   },
 });

@@ -28,8 +28,8 @@ export function syncSummary(snapshot: DeviceSnapshot, now: number = Date.now()):
     ? `last sync ${syncTimeLabel(snapshot.lastSyncAt, now)}`
     : 'not synced yet';
   const connection = snapshot.online ? 'Online' : 'Offline';
-  const parts = [connection];
-  if (stuck > 0) parts.push(plural(stuck, 'needs you', 'need you'));
+  // Something to decide says so first (the pill's icon and colour change too); the connection is in `long`.
+  const parts = stuck > 0 ? [plural(stuck, 'needs you', 'need you')] : [connection];
   if (waiting > 0) parts.push(`${waiting} waiting`);
   if (stuck === 0 && waiting === 0) parts.push(snapshot.lastSyncAt ? 'all sent' : 'nothing waiting');
   const queue =

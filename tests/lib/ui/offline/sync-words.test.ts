@@ -44,7 +44,8 @@ describe('syncSummary', () => {
     const items = [item({ status: 'conflict' }), item({ seq: 2 })];
     const s = syncSummary(snapshot({ items, lastSyncAt: now }), now);
     expect(s.tone).toBe('attention');
-    expect(s.short).toBe('Online · 1 needs you · 1 waiting');
+    expect(s.short).toBe('1 needs you · 1 waiting');
+    expect(s.long).toMatch(/^Online, last sync /);
     expect(s.long).toContain('2 changes are only on this device; 1 needs your decision.');
   });
 
