@@ -73,24 +73,26 @@ export function OutboxItemCard({ item }: { item: OutboxItem }) {
           <ConflictCompare mine={item.body} server={item.current} />
         </>
       ) : null}
-      <View style={styles.buttons}>
-        {item.status === 'conflict' ? (
-          <>
-            {button('keepMine', 'Keep mine', 'primary')}
-            {button('keepTheirs', 'Take the server’s', 'secondary')}
-          </>
-        ) : null}
-        {item.status === 'failed' ? button('retry', 'Try again', 'primary') : null}
-        {item.status === 'failed' && !confirmDiscard ? (
-          <Button
-            label="Throw away…"
-            variant="quiet"
-            disabled={busy !== null}
-            testID={`outbox-ask-discard-${item.seq}`}
-            onPress={() => setConfirmDiscard(true)}
-          />
-        ) : null}
-      </View>
+      {item.status === 'waiting' ? null : (
+        <View style={styles.buttons}>
+          {item.status === 'conflict' ? (
+            <>
+              {button('keepMine', 'Keep mine', 'primary')}
+              {button('keepTheirs', 'Take the server’s', 'secondary')}
+            </>
+          ) : null}
+          {item.status === 'failed' ? button('retry', 'Try again', 'primary') : null}
+          {item.status === 'failed' && !confirmDiscard ? (
+            <Button
+              label="Throw away…"
+              variant="quiet"
+              disabled={busy !== null}
+              testID={`outbox-ask-discard-${item.seq}`}
+              onPress={() => setConfirmDiscard(true)}
+            />
+          ) : null}
+        </View>
+      )}
       {confirmDiscard ? (
         <Notice tone="warning" title="Throw this change away?">
           {`"${item.label}" is only on this device; it is lost for good.`}
