@@ -153,7 +153,15 @@ export async function insertDemoData(
       }
       firm.jobs.forEach((job, jobIndex) => {
         const createdAt = at(1000 + jobIndex);
-        const row = { id: newId(), orgId, ...job, createdAt, updatedAt: createdAt, archivedAt: null };
+        const row = {
+          id: newId(),
+          orgId,
+          ...job,
+          createdAt,
+          updatedAt: createdAt,
+          archivedAt: null,
+          version: 1,
+        };
         tx.insert(jobs)
           .values({ ...row, createdBy: userIds[0] })
           .run();

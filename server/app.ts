@@ -7,6 +7,7 @@ import type { Db } from '@/db/client';
 import { apiRouter } from './api/api.router';
 import { readSession } from './middleware/auth';
 import { errorHandler } from './middleware/error-handler';
+import { idempotency } from './middleware/idempotency';
 import { originCheck } from './middleware/origin-check';
 import { requestId, requestLog } from './middleware/request-log';
 import { securityHeaders } from './middleware/security-headers';
@@ -85,6 +86,7 @@ export function createApp(options: AppOptions): Express {
     express.json({ limit: '200kb' }),
     readSession(sessions),
     originCheck([options.appOrigin]),
+    idempotency(options.db),
   );
   app.use(
     '/api',

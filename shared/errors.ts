@@ -9,11 +9,19 @@ export const apiErrorBodySchema = z.object({
       'forbidden',
       'not_found',
       'conflict',
+      /** An Idempotency-Key sent again with another method, path or body. */
+      'idempotency_key_reused',
+      /** A create's client id is another record's (in this firm or any other). */
+      'id_taken',
+      /** An edit's `baseVersion` is not the record's version; `current` is the record now. */
+      'version_conflict',
       'rate_limited',
       'internal',
     ]),
     message: z.string(),
     fields: z.record(z.string(), z.array(z.string())).optional(),
+    /** With `version_conflict`: the record as its GET answers it, for the person to choose between. */
+    current: z.unknown().optional(),
     /** The server's id of the request (also in the log and the X-Request-Id header): quote it to support. */
     requestId: z.string().optional(),
   }),

@@ -1,4 +1,4 @@
-import { primaryKey, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import { integer, primaryKey, sqliteTable, text } from 'drizzle-orm/sqlite-core';
 import { checklistItemKeys, checklistStates } from '@/shared/schemas/job-checklist';
 import { jobs } from './jobs';
 import { organizations } from './organizations';
@@ -21,6 +21,8 @@ export const jobChecklistItems = sqliteTable(
       .notNull()
       .references(() => users.id),
     updatedAt: text('updated_at').notNull(),
+    /** 1 on the first change, +1 on every change after it; an untouched item (no row) is version 0. */
+    version: integer('version').notNull().default(1),
   },
   (t) => [primaryKey({ columns: [t.jobId, t.itemKey] })],
 );

@@ -30,6 +30,8 @@ export const jobs = sqliteTable(
     createdAt: text('created_at').notNull(),
     updatedAt: text('updated_at').notNull(),
     archivedAt: text('archived_at'),
+    /** 1 on create, +1 on every change: a device's edit names the version it was made on. */
+    version: integer('version').notNull().default(1),
   },
   (t) => [index('jobs_org_created').on(t.orgId, t.createdAt)],
 );

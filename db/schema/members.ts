@@ -1,4 +1,4 @@
-import { index, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import { index, integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
 import type { MemberCheckInput, MemberCheckResult, PrescriptiveResult } from '@/shared/schemas/calc/member';
 import { memberKinds } from '@/shared/schemas/calc/member';
 import type { MemberSummary } from '@/shared/schemas/members';
@@ -39,6 +39,8 @@ export const members = sqliteTable(
       .references(() => users.id),
     createdAt: text('created_at').notNull(),
     updatedAt: text('updated_at').notNull(),
+    /** 1 on create, +1 on every change (a recompute after a job change included). */
+    version: integer('version').notNull().default(1),
   },
   (t) => [index('members_job_created').on(t.jobId, t.createdAt)],
 );

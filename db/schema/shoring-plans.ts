@@ -1,4 +1,4 @@
-import { sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import { integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
 import type { ShoringPlanBody, ShoringResult } from '@/shared/schemas/shoring-plans';
 import { jobs } from './jobs';
 import { members } from './members';
@@ -26,4 +26,11 @@ export const shoringPlans = sqliteTable('shoring_plans', {
     .notNull()
     .references(() => users.id),
   updatedAt: text('updated_at').notNull(),
+  /**
+   * The plan's own id, chosen by the device that made it (or the server); null on plans saved before plans
+   * had one.
+   */
+  id: text('id').unique(),
+  /** 1 on the first save, +1 on every save after it. */
+  version: integer('version').notNull().default(1),
 });

@@ -12,7 +12,7 @@ export const users = sqliteTable('users', {
 });
 
 /**
- * lucia v3 session rows; `expires_at` is Unix seconds, as @lucia-auth/adapter-drizzle writes it. `created_at`
+ * lucia v3 session rows; `expires_at` is Unix seconds. `created_at`
  * and `user_agent` let a person tell their sessions apart (null on sessions from before they were kept).
  */
 export const sessions = sqliteTable(

@@ -12,18 +12,22 @@ export class ApiError extends Error {
   readonly status: number;
   /** Field path → messages, from a 400 answer. */
   readonly fields: Record<string, string[]>;
+  /** With `version_conflict`: the server's record now, as its GET answers it. */
+  readonly current: unknown;
 
   constructor(
     code: ApiErrorCode | ClientErrorCode,
     status: number,
     message: string,
     fields: Record<string, string[]> = {},
+    current?: unknown,
   ) {
     super(message);
     this.name = 'ApiError';
     this.code = code;
     this.status = status;
     this.fields = fields;
+    this.current = current;
   }
 }
 
@@ -62,8 +66,8 @@ export async function apiRequest<S extends z.ZodType>(
   if (!response.ok) {
     const parsed = apiErrorBodySchema.safeParse(json);
     if (parsed.success) {
-      const { code, message, fields } = parsed.data.error;
-      throw new ApiError(code, response.status, message, fields);
+      const { code, message, fields, current } = parsed.data.error;
+      throw new ApiError(code, response.status, message, fields, current);
     }
     throw new ApiError(
       'bad_response',

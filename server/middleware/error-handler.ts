@@ -9,6 +9,9 @@ const STATUS: Record<ApiErrorCode, number> = {
   forbidden: 403,
   not_found: 404,
   conflict: 409,
+  idempotency_key_reused: 409,
+  id_taken: 409,
+  version_conflict: 409,
   rate_limited: 429,
   internal: 500,
 };
@@ -59,7 +62,11 @@ function describe(error: unknown): { status: number; body: ApiErrorBody } {
     status: STATUS[code],
     body: { error: fields ? { code, message, fields } : { code, message } },
   });
-  if (error instanceof AppError) return body(error.code, error.message, error.fields);
+  if (error instanceof AppError) {
+    const described = body(error.code, error.message, error.fields);
+    if (error.current === undefined) return described;
+    return { ...described, body: { error: { ...described.body.error, current: error.current } } };
+  }
   if (error instanceof CalcInputError)
     return body('bad_request', error.message, { [error.field]: [error.message] });
   const read = requestReadError(error);

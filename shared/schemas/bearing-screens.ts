@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { screenAnswersSchema } from './bearing-screen-answers';
 import { bearingScreenOutcomeSchema } from './calc/framing';
+import { baseVersionSchema, changesAField, clientIdSchema, versionSchema } from './sync';
 import { visibleTextSchema } from './visible-text';
 
 /**
@@ -11,14 +12,23 @@ import { visibleTextSchema } from './visible-text';
 const wallLabel = visibleTextSchema('Name the wall (e.g. "Kitchen / dining")', 80);
 
 /** `POST /api/jobs/:jobId/screens`. */
-export const screenCreateSchema = z.object({ wallLabel, answers: screenAnswersSchema });
+export const screenCreateSchema = z.object({
+  wallLabel,
+  answers: screenAnswersSchema,
+  /** The id the device chose when it made the screen offline. */
+  id: clientIdSchema.optional(),
+});
 export type ScreenCreate = z.infer<typeof screenCreateSchema>;
 export type ScreenCreateBody = z.input<typeof screenCreateSchema>;
 
 /** `PATCH /api/screens/:screenId`: only the fields sent change; new answers are screened again. */
 export const screenPatchSchema = z
-  .object({ wallLabel: wallLabel.optional(), answers: screenAnswersSchema.optional() })
-  .refine((patch) => Object.values(patch).some((value) => value !== undefined), {
+  .object({
+    wallLabel: wallLabel.optional(),
+    answers: screenAnswersSchema.optional(),
+    baseVersion: baseVersionSchema.optional(),
+  })
+  .refine(changesAField, {
     message: 'Change at least one field',
   });
 export type ScreenPatch = z.infer<typeof screenPatchSchema>;
@@ -67,7 +77,7 @@ export const screenSchema = z.object({
   answers: screenAnswersSchema,
   outcome: bearingScreenOutcomeSchema,
   result: screenResultSchema,
-  version: z.number().int(),
+  version: versionSchema,
   engineVersion: z.string(),
   createdBy: z.string(),
   updatedBy: z.string(),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { baseVersionSchema, versionSchema } from './sync';
 
 /**
  * The job checklist (DESIGN.md §6 "Job checklist"): the same items on every job, each to do, done or not
@@ -85,6 +86,7 @@ export const checklistItemPatchSchema = z
   .object({
     state: checklistStateSchema.optional(),
     note: z.string().trim().max(500, { message: 'At most 500 characters' }).optional(),
+    baseVersion: baseVersionSchema.optional(),
   })
   .refine((patch) => patch.state !== undefined || patch.note !== undefined, {
     message: 'Change the state or the note',
@@ -105,6 +107,8 @@ export const checklistItemSchema = z.object({
   updatedBy: z.string().nullable(),
   updatedByName: z.string().nullable(),
   updatedAt: z.string().nullable(),
+  /** 0 while nobody has set it, then +1 on every change. */
+  version: versionSchema,
 });
 export type ChecklistItem = z.infer<typeof checklistItemSchema>;
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { baseVersionSchema, changesAField, clientIdSchema, versionSchema } from './sync';
 import { visibleTextSchema } from './visible-text';
 
 export const loadStandardEditions = ['ASCE 7-16', 'ASCE 7-22'] as const;
@@ -76,6 +77,10 @@ export const jobInputSchema = z.object({
 });
 export type JobInput = z.input<typeof jobInputSchema>;
 
+/** `POST /api/jobs`: the fields, and the id the device chose when it made the job offline. */
+export const jobCreateSchema = jobInputSchema.extend({ id: clientIdSchema.optional() });
+export type JobCreate = z.output<typeof jobCreateSchema>;
+
 export const jobUpdateSchema = jobInputSchema.partial();
 
 export const jobSchema = jobInputSchema.extend({
@@ -84,6 +89,8 @@ export const jobSchema = jobInputSchema.extend({
   createdAt: z.string(),
   updatedAt: z.string(),
   archivedAt: z.string().nullable(),
+  /** 1 on create, +1 on every change (docs/sync-protocol.md). */
+  version: versionSchema,
 });
 export type Job = z.infer<typeof jobSchema>;
 
@@ -110,8 +117,9 @@ export const jobPatchSchema = z
     groundSnowSource: jobField.groundSnowSource.unwrap().optional(),
     foundation: jobField.foundation.unwrap().optional(),
     notes: jobField.notes.unwrap().optional(),
+    baseVersion: baseVersionSchema.optional(),
   })
-  .refine((patch) => Object.values(patch).some((value) => value !== undefined), {
+  .refine(changesAField, {
     message: 'Change at least one field',
   });
 export type JobPatch = z.infer<typeof jobPatchSchema>;

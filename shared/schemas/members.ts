@@ -6,6 +6,7 @@ import {
   memberKinds,
   prescriptiveResultSchema,
 } from '@/shared/schemas/calc/member';
+import { baseVersionSchema, changesAField, clientIdSchema, versionSchema } from './sync';
 import { visibleTextSchema } from './visible-text';
 
 /**
@@ -22,14 +23,21 @@ export const memberCreateSchema = z.object({
   label,
   wall: wall.default(''),
   input: memberCheckInputSchema,
+  /** The id the device chose when it made the member offline. */
+  id: clientIdSchema.optional(),
 });
 export type MemberCreate = z.infer<typeof memberCreateSchema>;
 export type MemberCreateBody = z.input<typeof memberCreateSchema>;
 
 /** `PATCH /api/members/:memberId`: only the fields sent change; a new input is recomputed. */
 export const memberPatchSchema = z
-  .object({ label: label.optional(), wall: wall.optional(), input: memberCheckInputSchema.optional() })
-  .refine((patch) => Object.values(patch).some((value) => value !== undefined), {
+  .object({
+    label: label.optional(),
+    wall: wall.optional(),
+    input: memberCheckInputSchema.optional(),
+    baseVersion: baseVersionSchema.optional(),
+  })
+  .refine(changesAField, {
     message: 'Change at least one field',
   });
 export type MemberPatch = z.infer<typeof memberPatchSchema>;
@@ -76,6 +84,8 @@ export const memberSchema = z.object({
   updatedBy: z.string(),
   createdAt: z.string(),
   updatedAt: z.string(),
+  /** 1 on create, +1 on every change (a recompute after a job change included). */
+  version: versionSchema,
 });
 export type Member = z.infer<typeof memberSchema>;
 

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { shoringWallInputSchema } from './calc/materials';
 import { shoringLayouts, shoringSurfaceSchema } from './calc/shoring';
+import { baseVersionSchema, clientIdSchema, versionSchema } from './sync';
 
 /**
  * A temporary shoring plan saved on a member (DESIGN.md §1 step 4): the member's own loads (its saved input)
@@ -17,34 +18,48 @@ const positive = (label: string, max: number, unit: string) =>
 
 export const shoringMethods = ['stud-walls', 'rented-shores'] as const;
 
-/** `PUT /api/members/:memberId/shoring`. */
-export const shoringPlanBodySchema = z
-  .object({
-    layout: z.enum(shoringLayouts),
-    joistSpanAFt: positive('the joist span on side A', 40, 'ft').optional(),
-    joistSpanBFt: positive('the joist span on side B', 40, 'ft').optional(),
-    setbackFt: positive('the setback', 10, 'ft').optional(),
-    /** Stud walls built on site, or rented adjustable shores under a beam. */
-    method: z.enum(shoringMethods).default('stud-walls'),
-    /** The temporary walls' studs (also checked when shores carry a beam: the plan compares both). */
-    studs: shoringWallInputSchema.omit({ loadPlf: true, CD: true }),
-    /** The capacity printed on the rented shore for the height it is extended to, lb. */
-    shoreRatedCapacityLb: positive('the rated capacity', 50_000, 'lb').optional(),
-    standsOn: shoringSurfaceSchema,
-    floorJoistSpacingIn: positive('the floor joist spacing', 48, 'in').optional(),
-    soilBearingPsf: positive('the soil bearing', 12_000, 'psf').optional(),
-    /** Length of each temporary wall; default: the member's clear span plus 1 ft past each end. */
-    wallLengthFt: positive('the wall length', 80, 'ft').optional(),
-  })
-  .superRefine((body, ctx) => {
-    if (body.method === 'rented-shores' && body.shoreRatedCapacityLb === undefined) {
-      ctx.addIssue({
-        code: 'custom',
-        path: ['shoreRatedCapacityLb'],
-        message: 'Enter the rated capacity printed on the shore',
-      });
-    }
-  });
+const shoringPlanFields = z.object({
+  layout: z.enum(shoringLayouts),
+  joistSpanAFt: positive('the joist span on side A', 40, 'ft').optional(),
+  joistSpanBFt: positive('the joist span on side B', 40, 'ft').optional(),
+  setbackFt: positive('the setback', 10, 'ft').optional(),
+  /** Stud walls built on site, or rented adjustable shores under a beam. */
+  method: z.enum(shoringMethods).default('stud-walls'),
+  /** The temporary walls' studs (also checked when shores carry a beam: the plan compares both). */
+  studs: shoringWallInputSchema.omit({ loadPlf: true, CD: true }),
+  /** The capacity printed on the rented shore for the height it is extended to, lb. */
+  shoreRatedCapacityLb: positive('the rated capacity', 50_000, 'lb').optional(),
+  standsOn: shoringSurfaceSchema,
+  floorJoistSpacingIn: positive('the floor joist spacing', 48, 'in').optional(),
+  soilBearingPsf: positive('the soil bearing', 12_000, 'psf').optional(),
+  /** Length of each temporary wall; default: the member's clear span plus 1 ft past each end. */
+  wallLengthFt: positive('the wall length', 80, 'ft').optional(),
+});
+
+function shoresNeedTheirCapacity(
+  body: { method: string; shoreRatedCapacityLb?: number },
+  ctx: z.RefinementCtx,
+): void {
+  if (body.method === 'rented-shores' && body.shoreRatedCapacityLb === undefined) {
+    ctx.addIssue({
+      code: 'custom',
+      path: ['shoreRatedCapacityLb'],
+      message: 'Enter the rated capacity printed on the shore',
+    });
+  }
+}
+
+/** The plan as saved and fed to the engine. */
+export const shoringPlanBodySchema = shoringPlanFields.superRefine(shoresNeedTheirCapacity);
+
+/**
+ * `PUT /api/members/:memberId/shoring`: the plan, with the id the device chose when it made the plan offline
+ * or the version an edit was made on.
+ */
+export const shoringPlanPutSchema = shoringPlanFields
+  .extend({ id: clientIdSchema.optional(), baseVersion: baseVersionSchema.optional() })
+  .superRefine(shoresNeedTheirCapacity);
+export type ShoringPlanPut = z.infer<typeof shoringPlanPutSchema>;
 export type ShoringPlanBody = z.infer<typeof shoringPlanBodySchema>;
 export type ShoringPlanBodyInput = z.input<typeof shoringPlanBodySchema>;
 
@@ -110,6 +125,8 @@ export const shoringResultSchema = z.object({
 export type ShoringResult = z.infer<typeof shoringResultSchema>;
 
 export const shoringRecordSchema = z.object({
+  /** Null on plans saved before plans had an id. */
+  id: z.string().nullable(),
   memberId: z.string(),
   jobId: z.string(),
   input: shoringPlanBodySchema,
@@ -118,6 +135,7 @@ export const shoringRecordSchema = z.object({
   updatedBy: z.string(),
   updatedByName: z.string(),
   updatedAt: z.string(),
+  version: versionSchema,
 });
 export type ShoringRecord = z.infer<typeof shoringRecordSchema>;
 

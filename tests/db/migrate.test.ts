@@ -24,6 +24,7 @@ describe('migrations', () => {
       'design_request_versions',
       'design_requests',
       'engineer_replies',
+      'idempotency_keys',
       'invitations',
       'job_checklist_items',
       'jobs',
@@ -76,6 +77,7 @@ describe('migrations', () => {
       'updated_by',
       'created_at',
       'updated_at',
+      'version',
     ]);
     expect(db.all(sql`select name from pragma_index_list('members')`)).toContainEqual({
       name: 'members_job_created',
@@ -104,5 +106,51 @@ describe('migrations', () => {
     expect(db.get<{ n: number }>(sql`select count(*) as n from members`)).toEqual({ n: 1 });
     db.run(sql`delete from jobs where id = 'j'`);
     expect(db.get<{ n: number }>(sql`select count(*) as n from members`)).toEqual({ n: 0 });
+  });
+
+  it('0008 keeps idempotency keys once per person and gives every synced row a version starting at 1', () => {
+    database = openDatabase(':memory:');
+    migrateDatabase(database.db);
+    const { db } = database;
+    const columns = (table: string) =>
+      db.all<{ name: string }>(sql`select name from pragma_table_info(${table})`).map((c) => c.name);
+    expect(columns('idempotency_keys')).toEqual([
+      'user_id',
+      'key',
+      'method',
+      'path',
+      'body_hash',
+      'status',
+      'response',
+      'created_at',
+    ]);
+    for (const table of ['jobs', 'members', 'shoring_plans', 'job_checklist_items', 'bearing_screens']) {
+      expect(columns(table), table).toContain('version');
+    }
+    expect(columns('shoring_plans')).toContain('id');
+    db.run(
+      sql`insert into users (id, email, name, password_hash, created_at) values ('u', 'u@x.test', 'U', 'h', 'now')`,
+    );
+    db.run(
+      sql`insert into organizations (id, name, kind, created_at) values ('o', 'Firm', 'contracting', 'now')`,
+    );
+    db.run(
+      sql`insert into jobs (id, org_id, name, address, stories, roof_type, roof_pitch_in12, load_standard,
+        ground_snow_psf, ground_snow_source, foundation, notes, created_by, created_at, updated_at)
+        values ('j', 'o', 'Job', '', 1, 'gable', 6, 'ASCE 7-22', 0, '', 'unknown', '', 'u', 'now', 'now')`,
+    );
+    expect(db.get(sql`select version from jobs where id = 'j'`)).toEqual({ version: 1 });
+    const keep = (key: string) =>
+      db.run(
+        sql`insert into idempotency_keys (user_id, key, method, path, body_hash, created_at)
+          values ('u', ${key}, 'POST', '/api/jobs', 'h', 'now')`,
+      );
+    keep('key-00000001');
+    expect(() => keep('key-00000001')).toThrow(
+      expect.objectContaining({ cause: expect.objectContaining({ code: 'SQLITE_CONSTRAINT_UNIQUE' }) }),
+    );
+    db.run(sql`delete from jobs where id = 'j'`);
+    db.run(sql`delete from users where id = 'u'`);
+    expect(db.get<{ n: number }>(sql`select count(*) as n from idempotency_keys`)).toEqual({ n: 0 });
   });
 });

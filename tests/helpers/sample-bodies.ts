@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import type { z } from 'zod';
 import {
   passwordResetRequestSchema,
@@ -9,7 +10,7 @@ import type { MemberCheckInputBody } from '@/shared/schemas/calc/member';
 import { memberCheckRequestSchema } from '@/shared/schemas/calc/requests';
 import { shortlistInputSchema } from '@/shared/schemas/calc/shortlist';
 import { spanTableInputSchema } from '@/shared/schemas/calc/span-table';
-import { jobInputSchema, jobPatchSchema } from '@/shared/schemas/jobs';
+import { jobCreateSchema, jobPatchSchema } from '@/shared/schemas/jobs';
 import { memberCreateSchema, memberPatchSchema } from '@/shared/schemas/members';
 import { acceptInvitationSchema, createInvitationSchema } from '@/shared/schemas/orgs';
 import { requestComposeSchema, requestPatchSchema } from '@/shared/schemas/requests/compose';
@@ -23,7 +24,7 @@ import {
 } from '@/shared/schemas/requests/workflow';
 import { screenCreateSchema, screenPatchSchema } from '@/shared/schemas/bearing-screens';
 import { checklistItemPatchSchema } from '@/shared/schemas/job-checklist';
-import { shoringPlanBodySchema } from '@/shared/schemas/shoring-plans';
+import { shoringPlanPutSchema } from '@/shared/schemas/shoring-plans';
 import { memberBudgetSaveSchema, sendBudgetSchema } from '@/shared/schemas/budgets';
 import {
   priceBookSettingsSchema,
@@ -60,7 +61,8 @@ export const SAMPLE_BODIES = new Map<z.ZodType, () => unknown>([
   [passwordResetSchema, () => ({ password: 'a brand new passphrase' })],
   [createInvitationSchema, () => ({ email: `invitee-${unique()}@example.test`, role: 'estimator' })],
   [acceptInvitationSchema, () => ({ name: 'Invited Person', password: 'a long enough password' })],
-  [jobInputSchema, () => ({ name: `Sample job ${unique()}`, stories: 2 })],
+  // A device-chosen id, as the offline queue sends it (docs/sync-protocol.md).
+  [jobCreateSchema, () => ({ id: randomUUID(), name: `Sample job ${unique()}`, stories: 2 })],
   [jobPatchSchema, () => ({ notes: `Patched ${unique()}` })],
   [memberCreateSchema, () => ({ label: `Sample member ${unique()}`, input: SAMPLE_HEADER })],
   [memberPatchSchema, () => ({ wall: `Wall ${unique()}` })],
@@ -96,7 +98,7 @@ export const SAMPLE_BODIES = new Map<z.ZodType, () => unknown>([
   [screenPatchSchema, () => ({ answers: { bracedWall: { value: 'unsure' } } })],
   [checklistItemPatchSchema, () => ({ state: 'done', note: `Checked ${unique()}` })],
   [
-    shoringPlanBodySchema,
+    shoringPlanPutSchema,
     () => ({
       layout: 'both-sides',
       joistSpanAFt: 12,

@@ -70,6 +70,7 @@ export function checklistOf(
       updatedBy: row?.updatedBy ?? null,
       updatedByName: row?.updatedByName ?? null,
       updatedAt: row?.updatedAt ?? null,
+      version: row?.version ?? 0,
     };
   });
 }

@@ -1,4 +1,4 @@
-import { and, eq } from 'drizzle-orm';
+import { and, eq, sql } from 'drizzle-orm';
 import type { DbOrTx } from '@/db/client';
 import { jobChecklistItems, users } from '@/db/schema';
 import type { ChecklistItemKey, ChecklistState } from '@/shared/schemas/job-checklist';
@@ -11,6 +11,7 @@ export interface ChecklistRow {
   updatedBy: string;
   updatedByName: string;
   updatedAt: string;
+  version: number;
 }
 
 const columns = {
@@ -21,6 +22,7 @@ const columns = {
   updatedBy: jobChecklistItems.updatedBy,
   updatedByName: users.name,
   updatedAt: jobChecklistItems.updatedAt,
+  version: jobChecklistItems.version,
 };
 
 /** The items someone has set on the job (or, without `jobId`, on every job of the firm). */
@@ -45,10 +47,16 @@ export function upsertChecklistRow(
 ): void {
   const updatedAt = new Date().toISOString();
   db.insert(jobChecklistItems)
-    .values({ ...row, orgId, updatedAt })
+    .values({ ...row, orgId, updatedAt, version: 1 })
     .onConflictDoUpdate({
       target: [jobChecklistItems.jobId, jobChecklistItems.itemKey],
-      set: { state: row.state, note: row.note, updatedBy: row.updatedBy, updatedAt },
+      set: {
+        state: row.state,
+        note: row.note,
+        updatedBy: row.updatedBy,
+        updatedAt,
+        version: sql`${jobChecklistItems.version} + 1`,
+      },
     })
     .run();
 }

@@ -1,5 +1,5 @@
 import type { Db } from '@/db/client';
-import { AppError, notFound } from '@/server/app-error';
+import { AppError, notFound, versionConflict } from '@/server/app-error';
 import { recordAudit, type Actor } from '@/server/api/audit/audit.repository';
 import { findJob, listJobs } from '@/server/api/jobs/jobs.repository';
 import { listEngineerScreens, listScreens } from '@/server/api/screens/screens.repository';
@@ -35,6 +35,10 @@ export function createChecklistService(db: Db) {
         openJob(tx, actor.orgId, jobId);
         const current = build(actor.orgId, jobId).items.find((i) => i.key === key);
         if (!current) throw notFound('Checklist item');
+        // An item nobody has set is version 0; `current` is the item as the checklist's GET lists it.
+        if (patch.baseVersion !== undefined && patch.baseVersion !== current.version) {
+          throw versionConflict('This checklist item', current);
+        }
         const state = patch.state ?? current.state;
         const note = patch.note ?? current.note;
         if (key === 'lead-safe' && current.raised && state === 'not-needed' && note === '') {
@@ -46,7 +50,7 @@ export function createChecklistService(db: Db) {
         recordAudit(tx, actor, {
           action: 'checklist.update',
           subject: jobId,
-          detail: { item: key, state, fields: Object.keys(patch) },
+          detail: { item: key, state, fields: Object.keys(patch).filter((f) => f !== 'baseVersion') },
         });
       });
       return build(actor.orgId, jobId);

@@ -49,17 +49,43 @@ export function findJob(db: DbOrTx, orgId: string, jobId: string): Job | undefin
   return row && toJob(row);
 }
 
-export function insertJob(db: DbOrTx, orgId: string, createdBy: string, fields: JobFields): Job {
+/** The job holding `jobId` in whatever firm, with its maker: only for checking a device-chosen id. */
+export function findJobInAnyFirm(db: DbOrTx, jobId: string): (Job & { createdBy: string }) | undefined {
+  return db.select().from(jobs).where(eq(jobs.id, jobId)).get();
+}
+
+/** Makes the job with `id` (a device-chosen one) or a new id. */
+export function insertJob(
+  db: DbOrTx,
+  orgId: string,
+  createdBy: string,
+  fields: JobFields,
+  id: string = newId(),
+): Job {
   const now = new Date().toISOString();
-  const row = { id: newId(), orgId, createdBy, ...fields, createdAt: now, updatedAt: now, archivedAt: null };
+  const row = {
+    id,
+    orgId,
+    createdBy,
+    ...fields,
+    createdAt: now,
+    updatedAt: now,
+    archivedAt: null,
+    version: 1,
+  };
   db.insert(jobs).values(row).run();
   return toJob(row);
 }
 
-export function updateJob(db: DbOrTx, orgId: string, jobId: string, patch: JobPatch): Job | undefined {
+export function updateJob(
+  db: DbOrTx,
+  orgId: string,
+  jobId: string,
+  patch: Omit<JobPatch, 'baseVersion'>,
+): Job | undefined {
   const row = db
     .update(jobs)
-    .set({ ...patch, updatedAt: new Date().toISOString() })
+    .set({ ...patch, updatedAt: new Date().toISOString(), version: sql`${jobs.version} + 1` })
     .where(and(eq(jobs.id, jobId), eq(jobs.orgId, orgId)))
     .returning()
     .get();
@@ -73,7 +99,7 @@ export function archiveJob(db: DbOrTx, orgId: string, jobId: string): Job | unde
   if (!job || job.archivedAt) return job;
   const row = db
     .update(jobs)
-    .set({ archivedAt: now, updatedAt: now })
+    .set({ archivedAt: now, updatedAt: now, version: sql`${jobs.version} + 1` })
     .where(and(eq(jobs.id, jobId), eq(jobs.orgId, orgId)))
     .returning()
     .get();

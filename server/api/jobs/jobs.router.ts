@@ -3,7 +3,8 @@ import { z } from 'zod';
 import type { Db } from '@/db/client';
 import { requireMember, requireRole, signedInUser } from '@/server/middleware/auth';
 import { validate } from '@/server/middleware/validate';
-import { jobInputSchema, jobPatchSchema } from '@/shared/schemas/jobs';
+import { jobCreateSchema, jobPatchSchema } from '@/shared/schemas/jobs';
+import { sendCreated } from '@/server/api/client-ids';
 import type { JobsService } from './jobs.service';
 
 const jobParams = z.object({ jobId: z.string().min(1).max(100) });
@@ -22,8 +23,8 @@ export function jobsRouter(deps: { db: Db; jobs: JobsService }): Router {
     res.json({ jobs: deps.jobs.list(res.locals.member.orgId, req.query.archived === '1') });
   });
 
-  router.post('/', validate({ body: jobInputSchema }), (req, res) => {
-    res.status(201).json(deps.jobs.create(actorOf(res), req.body));
+  router.post('/', validate({ body: jobCreateSchema }), (req, res) => {
+    sendCreated(res, deps.jobs.create(actorOf(res), req.body));
   });
 
   router.get('/:jobId', validate({ params: jobParams }), (req, res) => {

@@ -46,6 +46,11 @@ export function listMembers(db: DbOrTx, orgId: string, jobId: string): MemberLis
   return membersOfJob(db).all({ jobId, orgId });
 }
 
+/** The member holding `memberId` in whatever firm: only for checking a device-chosen id. */
+export function findMemberInAnyFirm(db: DbOrTx, memberId: string): (Member & { orgId: string }) | undefined {
+  return db.select().from(members).where(eq(members.id, memberId)).get();
+}
+
 /** Only a member of `orgId`: another firm's id reads as missing. */
 export function findMember(db: DbOrTx, orgId: string, memberId: string): Member | undefined {
   return memberById(db).get({ memberId, orgId });
@@ -55,16 +60,18 @@ export function insertMember(
   db: DbOrTx,
   owner: { orgId: string; jobId: string; userId: string },
   fields: MemberFields,
+  id: string = newId(),
 ): Member {
   const now = new Date().toISOString();
   const member: Member = {
-    id: newId(),
+    id,
     jobId: owner.jobId,
     ...fields,
     createdBy: owner.userId,
     updatedBy: owner.userId,
     createdAt: now,
     updatedAt: now,
+    version: 1,
   };
   db.insert(members)
     .values({ ...member, orgId: owner.orgId })
@@ -73,8 +80,9 @@ export function insertMember(
 }
 
 /**
- * Writes a recomputed member over `saved` (read in the same transaction) and answers the member as stored,
- * built from what was written rather than read back: the result's JSON is not parsed again.
+ * Writes a recomputed member over `saved` (read in the same transaction), as its next version, and answers
+ * the member as stored, built from what was written rather than read back: the result's JSON is not parsed
+ * again.
  */
 export function updateMember(
   db: DbOrTx,
@@ -83,7 +91,7 @@ export function updateMember(
   updatedBy: string,
   fields: MemberFields,
 ): Member | undefined {
-  const changes = { ...fields, updatedBy, updatedAt: new Date().toISOString() };
+  const changes = { ...fields, updatedBy, updatedAt: new Date().toISOString(), version: saved.version + 1 };
   const { changes: written } = db
     .update(members)
     .set(changes)

@@ -4,6 +4,7 @@ import type { Db } from '@/db/client';
 import { requireMember, requireRole, signedInUser } from '@/server/middleware/auth';
 import { validate } from '@/server/middleware/validate';
 import { memberCreateSchema, memberPatchSchema } from '@/shared/schemas/members';
+import { sendCreated } from '@/server/api/client-ids';
 import type { MembersService } from './members.service';
 
 const jobParams = z.object({ jobId: z.string().min(1).max(100) });
@@ -35,7 +36,7 @@ export function jobMembersRouter(deps: MembersDeps): Router {
   });
 
   router.post('/', validate({ params: jobParams, body: memberCreateSchema }), (req, res) => {
-    res.status(201).json(deps.members.create(actorOf(res), req.params.jobId, req.body));
+    sendCreated(res, deps.members.create(actorOf(res), req.params.jobId, req.body));
   });
 
   return router;

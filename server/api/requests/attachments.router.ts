@@ -3,7 +3,9 @@ import multer from 'multer';
 import { z } from 'zod';
 import type { Db } from '@/db/client';
 import { AppError } from '@/server/app-error';
+import { sendCreated } from '@/server/api/client-ids';
 import { requireMember } from '@/server/middleware/auth';
+import { idempotentUpload } from '@/server/middleware/idempotency';
 import { validate } from '@/server/middleware/validate';
 import { MAX_UPLOAD_BYTES } from '@/server/services/uploads/sniff-type';
 import { fieldErrors } from '@/shared/errors';
@@ -64,12 +66,14 @@ export function attachmentsRouter(deps: { db: Db; attachments: AttachmentsServic
     res.json({ files: deps.attachments.list(viewerOf(res), req.params.requestId) });
   });
 
-  router.post('/', validate({ params: requestParams }), upload, async (req, res) => {
+  router.post('/', validate({ params: requestParams }), upload, idempotentUpload, async (req, res) => {
     const fields = uploadFieldsSchema.safeParse(req.body ?? {});
     if (!fields.success)
       throw new AppError('bad_request', 'Some fields need attention', fieldErrors(fields.error));
-    const file = await deps.attachments.upload(viewerOf(res), req.params.requestId, req.file, fields.data);
-    res.status(201).json(file);
+    sendCreated(
+      res,
+      await deps.attachments.upload(viewerOf(res), req.params.requestId, req.file, fields.data),
+    );
   });
 
   router.get('/:attachmentId', validate({ params: fileParams, query: downloadQuery }), async (req, res) => {

@@ -1,7 +1,8 @@
 import { createHash } from 'node:crypto';
 import type { Db } from '@/db/client';
 import { newId } from '@/db/new-id';
-import { AppError, notFound } from '@/server/app-error';
+import { AppError, idTaken, notFound } from '@/server/app-error';
+import type { Created } from '@/server/api/client-ids';
 import { photoFacts } from '@/server/services/uploads/photo-preview';
 import { sniffUploadType } from '@/server/services/uploads/sniff-type';
 import type { FileStorage } from '@/server/services/storage/file-storage';
@@ -15,7 +16,13 @@ import {
 import { auditRequest, openRequest, type RequestViewer } from './request-access';
 import { toFile } from './request-detail';
 import { assertMay } from './request-transitions';
-import { findAttachment, insertAttachment, listAttachments, type RequestRow } from './requests.repository';
+import {
+  findAttachment,
+  findAttachmentAnywhere,
+  insertAttachment,
+  listAttachments,
+  type RequestRow,
+} from './requests.repository';
 
 export interface UploadedFile {
   originalname: string;
@@ -30,6 +37,32 @@ const PURPOSE_ACTION: Record<UploadFields['purpose'], RequestAction> = {
   message: 'message',
   design: 'upload-design',
 };
+
+/**
+ * A device-chosen file id already held: the same upload sent again (same request, person, fields and bytes)
+ * answers that file; any other holder, in whatever firm, is 409 id_taken and says nothing of it.
+ */
+function sentBefore(
+  db: Db,
+  viewer: RequestViewer,
+  requestId: string,
+  fields: UploadFields,
+  file: { name: string; sha256: string },
+): RequestFile | undefined {
+  if (!fields.id) return undefined;
+  const found = findAttachmentAnywhere(db, fields.id);
+  if (!found) return undefined;
+  const same =
+    found.requestId === requestId &&
+    found.uploadedBy === viewer.userId &&
+    found.purpose === fields.purpose &&
+    found.place === fields.place &&
+    found.caption === fields.caption &&
+    found.fileName === file.name &&
+    found.sha256 === file.sha256;
+  if (!same) throw idTaken();
+  return toFile(found);
+}
 
 function checkPurpose(row: RequestRow, side: RequestSide, purpose: UploadFields['purpose']): void {
   if (purpose === 'photo' && side !== 'firm')
@@ -50,12 +83,15 @@ export function createAttachmentsService(deps: { db: Db; storage: FileStorage })
       requestId: string,
       file: UploadedFile | undefined,
       fields: UploadFields,
-    ) {
+    ): Promise<Created<RequestFile>> {
       const { row, side } = openRequest(db, viewer, requestId);
       checkPurpose(row, side, fields.purpose);
       if (!file) throw fileError('Choose a file to upload');
       const name = uploadFileNameSchema.safeParse(file.originalname);
       if (!name.success) throw fileError(name.error.issues[0].message);
+      const sha256 = createHash('sha256').update(file.buffer).digest('hex');
+      const before = sentBefore(db, viewer, requestId, fields, { name: name.data, sha256 });
+      if (before) return { record: before, replayed: true };
       const mimeType = await sniffUploadType(file.buffer);
       if (!mimeType)
         throw fileError('Send a JPEG, PNG, HEIC or PDF file (judged by its content, not its name)');
@@ -70,12 +106,12 @@ export function createAttachmentsService(deps: { db: Db; storage: FileStorage })
           })
         : null;
       try {
-        return db.transaction((tx): RequestFile => {
+        const saved = db.transaction((tx): RequestFile => {
           // The state may have moved while the file was read and stored.
           const again = openRequest(tx, viewer, requestId);
           checkPurpose(again.row, again.side, fields.purpose);
           const saved = {
-            id: newId(),
+            id: fields.id ?? newId(),
             requestId,
             side,
             purpose: fields.purpose,
@@ -87,7 +123,7 @@ export function createAttachmentsService(deps: { db: Db; storage: FileStorage })
             mimeType,
             sizeBytes: file.buffer.length,
             storageKey,
-            sha256: createHash('sha256').update(file.buffer).digest('hex'),
+            sha256,
             previewKey,
             widthPx: facts.widthPx,
             heightPx: facts.heightPx,
@@ -103,6 +139,7 @@ export function createAttachmentsService(deps: { db: Db; storage: FileStorage })
           });
           return toFile(saved);
         });
+        return { record: saved, replayed: false };
       } catch (error) {
         await storage.remove(storageKey);
         if (previewKey) await storage.remove(previewKey);

@@ -226,6 +226,11 @@ export function findAttachment(db: DbOrTx, requestId: string, attachmentId: stri
     .get();
 }
 
+/** The file holding `attachmentId` in whatever request: only for checking a device-chosen id. */
+export function findAttachmentAnywhere(db: DbOrTx, attachmentId: string) {
+  return db.select().from(attachments).where(eq(attachments.id, attachmentId)).get();
+}
+
 export function insertAttachment(db: DbOrTx, row: AttachmentRow): void {
   db.insert(attachments).values(row).run();
 }

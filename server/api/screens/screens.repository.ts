@@ -46,6 +46,24 @@ export function listEngineerScreens(db: DbOrTx, orgId: string): { jobId: string 
     .all();
 }
 
+/** Who made the screen holding `screenId`, in whatever firm, and what: only for checking a device-chosen id. */
+export function findScreenInAnyFirm(
+  db: DbOrTx,
+  screenId: string,
+): (Pick<Screen, 'jobId' | 'wallLabel' | 'answers' | 'createdBy'> & { orgId: string }) | undefined {
+  return db
+    .select({
+      orgId: bearingScreens.orgId,
+      jobId: bearingScreens.jobId,
+      wallLabel: bearingScreens.wallLabel,
+      answers: bearingScreens.answers,
+      createdBy: bearingScreens.createdBy,
+    })
+    .from(bearingScreens)
+    .where(eq(bearingScreens.id, screenId))
+    .get();
+}
+
 /** Only a screen of `orgId`: another firm's id reads as missing. */
 export function findScreen(db: DbOrTx, orgId: string, screenId: string): Screen | undefined {
   return selectScreens(db)
@@ -111,9 +129,9 @@ export function insertScreen(
   db: DbOrTx,
   owner: { orgId: string; jobId: string; userId: string },
   fields: ScreenFields,
+  id: string = newId(),
 ): string {
   const at = new Date().toISOString();
-  const id = newId();
   db.insert(bearingScreens)
     .values({
       id,

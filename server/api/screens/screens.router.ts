@@ -4,6 +4,7 @@ import type { Db } from '@/db/client';
 import { requireMember, requireRole, signedInUser } from '@/server/middleware/auth';
 import { validate } from '@/server/middleware/validate';
 import { screenCreateSchema, screenPatchSchema } from '@/shared/schemas/bearing-screens';
+import { sendCreated } from '@/server/api/client-ids';
 import type { ScreensService } from './screens.service';
 
 const jobParams = z.object({ jobId: z.string().min(1).max(100) });
@@ -32,7 +33,7 @@ export function jobScreensRouter(deps: ScreensDeps): Router {
   });
 
   router.post('/', validate({ params: jobParams, body: screenCreateSchema }), (req, res) => {
-    res.status(201).json(deps.screens.create(actorOf(res), req.params.jobId, req.body));
+    sendCreated(res, deps.screens.create(actorOf(res), req.params.jobId, req.body));
   });
 
   return router;

@@ -1,6 +1,8 @@
 import type { Db, DbOrTx } from '@/db/client';
 import { ENGINE_VERSION, screenWall } from '@/lib/calc';
-import { AppError, notFound } from '@/server/app-error';
+import { AppError, notFound, versionConflict } from '@/server/app-error';
+import { alreadyCreated, type Created } from '@/server/api/client-ids';
+import { sameContent } from '@/server/services/idempotency/idempotency-store';
 import { recordAudit, type Actor } from '@/server/api/audit/audit.repository';
 import { findJob } from '@/server/api/jobs/jobs.repository';
 import type { ScreenAnswers } from '@/shared/schemas/bearing-screen-answers';
@@ -15,6 +17,7 @@ import type {
 import type { Job } from '@/shared/schemas/jobs';
 import {
   findScreen,
+  findScreenInAnyFirm,
   insertScreen,
   listScreenVersions,
   listScreens,
@@ -46,6 +49,11 @@ export function engineerNeededOf(screens: Screen[]): EngineerNeeded {
   return { needed: reasons.length > 0, reasons };
 }
 
+/** The screen as its GET answers it: with its earlier versions, newest first. */
+function withHistory(db: DbOrTx, screen: Screen, orgId: string): ScreenWithHistory {
+  return { ...screen, history: listScreenVersions(db, orgId, screen.id, screen.version) };
+}
+
 /**
  * Bearing screens of the actor's firm's jobs, one wall each. Every save recomputes the outcome with
  * lib/calc and keeps the earlier answers in the screen's history. A screen or job id of another firm is "not
@@ -66,34 +74,49 @@ export function createScreensService(db: Db) {
     },
 
     get(orgId: string, screenId: string): ScreenWithHistory {
-      const screen = read(db, orgId, screenId);
-      return { ...screen, history: listScreenVersions(db, orgId, screenId, screen.version) };
+      return withHistory(db, read(db, orgId, screenId), orgId);
     },
 
-    create(actor: Actor, jobId: string, body: ScreenCreate): Screen {
+    /** A create sent again with the same device-chosen id answers the screen it made (see alreadyCreated). */
+    create(actor: Actor, jobId: string, body: ScreenCreate): Created<Screen> {
       return db.transaction((tx) => {
         openJob(tx, actor.orgId, jobId);
         const fields = evaluate(body.wallLabel, body.answers);
-        const id = insertScreen(tx, { orgId: actor.orgId, jobId, userId: actor.userId }, fields);
+        if (body.id) {
+          const found = findScreenInAnyFirm(tx, body.id);
+          const asSent = { jobId, wallLabel: fields.wallLabel, answers: fields.answers };
+          const same = () =>
+            !!found &&
+            sameContent({ jobId: found.jobId, wallLabel: found.wallLabel, answers: found.answers }, asSent);
+          if (alreadyCreated(found, actor, same)) {
+            return { record: read(tx, actor.orgId, body.id), replayed: true };
+          }
+        }
+        const owner = { orgId: actor.orgId, jobId, userId: actor.userId };
+        const id = insertScreen(tx, owner, fields, body.id);
         recordAudit(tx, actor, {
           action: 'screen.create',
           subject: id,
           detail: { jobId, wallLabel: fields.wallLabel, outcome: fields.outcome },
         });
-        return read(tx, actor.orgId, id);
+        return { record: read(tx, actor.orgId, id), replayed: false };
       });
     },
 
     update(actor: Actor, screenId: string, patch: ScreenPatch): Screen {
+      const { baseVersion, ...changes } = patch;
       return db.transaction((tx) => {
         const saved = read(tx, actor.orgId, screenId);
+        if (baseVersion !== undefined && baseVersion !== saved.version) {
+          throw versionConflict('This bearing screen', withHistory(tx, saved, actor.orgId));
+        }
         openJob(tx, actor.orgId, saved.jobId);
         const fields = evaluate(patch.wallLabel ?? saved.wallLabel, patch.answers ?? saved.answers);
         updateScreen(tx, actor.orgId, saved, actor.userId, fields);
         recordAudit(tx, actor, {
           action: 'screen.update',
           subject: screenId,
-          detail: { jobId: saved.jobId, fields: Object.keys(patch), outcome: fields.outcome },
+          detail: { jobId: saved.jobId, fields: Object.keys(changes), outcome: fields.outcome },
         });
         return read(tx, actor.orgId, screenId);
       });

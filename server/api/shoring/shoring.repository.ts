@@ -1,4 +1,4 @@
-import { and, eq } from 'drizzle-orm';
+import { and, eq, sql } from 'drizzle-orm';
 import type { DbOrTx } from '@/db/client';
 import { shoringPlans, users } from '@/db/schema';
 import type { ShoringRecord } from '@/shared/schemas/shoring-plans';
@@ -7,6 +7,7 @@ import type { ShoringRecord } from '@/shared/schemas/shoring-plans';
 export function findShoring(db: DbOrTx, orgId: string, memberId: string): ShoringRecord | undefined {
   return db
     .select({
+      id: shoringPlans.id,
       memberId: shoringPlans.memberId,
       jobId: shoringPlans.jobId,
       input: shoringPlans.input,
@@ -15,6 +16,7 @@ export function findShoring(db: DbOrTx, orgId: string, memberId: string): Shorin
       updatedBy: shoringPlans.updatedBy,
       updatedByName: users.name,
       updatedAt: shoringPlans.updatedAt,
+      version: shoringPlans.version,
     })
     .from(shoringPlans)
     .innerJoin(users, eq(users.id, shoringPlans.updatedBy))
@@ -22,14 +24,30 @@ export function findShoring(db: DbOrTx, orgId: string, memberId: string): Shorin
     .get();
 }
 
+/** The plan holding `planId`, in whatever firm: only for checking a device-chosen id. */
+export function findShoringByPlanId(
+  db: DbOrTx,
+  planId: string,
+): { orgId: string; memberId: string } | undefined {
+  return db
+    .select({ orgId: shoringPlans.orgId, memberId: shoringPlans.memberId })
+    .from(shoringPlans)
+    .where(eq(shoringPlans.id, planId))
+    .get();
+}
+
+/**
+ * Makes the member's plan (version 1, with `id`) or writes its next version; a plan keeps the id it was
+ * made with.
+ */
 export function saveShoring(
   db: DbOrTx,
   orgId: string,
-  row: Omit<ShoringRecord, 'updatedByName' | 'updatedAt'>,
+  row: Omit<ShoringRecord, 'updatedByName' | 'updatedAt' | 'version'> & { id: string },
 ): void {
   const updatedAt = new Date().toISOString();
   db.insert(shoringPlans)
-    .values({ ...row, orgId, updatedAt })
+    .values({ ...row, orgId, updatedAt, version: 1 })
     .onConflictDoUpdate({
       target: shoringPlans.memberId,
       set: {
@@ -38,6 +56,7 @@ export function saveShoring(
         engineVersion: row.engineVersion,
         updatedBy: row.updatedBy,
         updatedAt,
+        version: sql`${shoringPlans.version} + 1`,
       },
     })
     .run();

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { clientIdSchema } from '../sync';
 import { photoPlaceSchema } from './snapshot';
 
 /**
@@ -93,6 +94,8 @@ export const uploadFieldsSchema = z.object({
   purpose: z.enum(['photo', 'message', 'design']).default('photo'),
   place: photoPlaceSchema.default('other'),
   caption: z.string().trim().max(300, { message: 'At most 300 characters' }).default(''),
+  /** The id the device chose when it took the photo offline. */
+  id: clientIdSchema.optional(),
 });
 export type UploadFields = z.output<typeof uploadFieldsSchema>;
 

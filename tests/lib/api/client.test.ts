@@ -96,3 +96,24 @@ describe('apiRequest', () => {
     await expect(apiRequest('DELETE', '/api/jobs/j1', noContentSchema)).resolves.toBeUndefined();
   });
 });
+
+describe('ApiError of a sync conflict', () => {
+  it('exposes the code and the server’s current record of a 409 version_conflict', async () => {
+    const current = { id: 'j1', name: 'Attic', version: 3 };
+    answer(
+      409,
+      JSON.stringify({ error: { code: 'version_conflict', message: 'Changed elsewhere', current } }),
+    );
+    const error = await failure(apiRequest('PATCH', '/api/jobs/j1', z.object({}), { baseVersion: 2 }));
+    expect(error.code).toBe('version_conflict');
+    expect(error.status).toBe(409);
+    expect(error.current).toEqual(current);
+  });
+
+  it('has no current on other errors', async () => {
+    answer(409, JSON.stringify({ error: { code: 'id_taken', message: 'That id is already used' } }));
+    const error = await failure(apiRequest('POST', '/api/jobs', z.object({}), { name: 'x' }));
+    expect(error.code).toBe('id_taken');
+    expect(error.current).toBeUndefined();
+  });
+});

@@ -37,6 +37,7 @@ describe('draftToJobFields', () => {
       createdAt: '2026-01-01T00:00:00.000Z',
       updatedAt: '2026-01-01T00:00:00.000Z',
       archivedAt: null,
+      version: 1,
       name: 'Ortiz living room',
       address: '12 Elm St',
       yearBuilt: 1958,

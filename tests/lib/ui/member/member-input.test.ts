@@ -29,6 +29,7 @@ const job: Job = {
   createdAt: '2026-01-01T00:00:00.000Z',
   updatedAt: '2026-01-01T00:00:00.000Z',
   archivedAt: null,
+  version: 1,
 };
 
 function beamDraft(): MemberDraft {
