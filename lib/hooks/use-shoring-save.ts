@@ -23,13 +23,12 @@ export function useShoringSave(jobId: string, memberId: string, saved: ShoringRe
     async (body: ShoringPlanBodyInput): Promise<ShoringSaved> => {
       if (!me) throw new Error('Sign in again to save.');
       const orgId = me.activeOrgId;
-      const savedId = (saved as { id?: unknown } | null)?.id;
       const result = await queueWrite(shoringAnswerSchema, {
         key: crypto.randomUUID(),
         orgId,
         entity: 'shoring',
         create: !saved,
-        recordId: typeof savedId === 'string' ? savedId : `shoring:${memberId}`,
+        recordId: saved?.id ?? `shoring:${memberId}`,
         group: jobId,
         label: saved ? 'Shoring plan changed' : 'New shoring plan',
         method: 'PUT',

@@ -191,5 +191,5 @@ describe('field mode (phone)', () => {
       await first.close();
       await second.close();
     }
-  });
+  }, 240_000);
 });
