@@ -53,6 +53,7 @@ const saved: Member = JSON.parse(
     result,
     prescriptive: prescriptiveVerdict({ member: input, buildingWidthFt: 28, groundSnowPsf: 0 }),
     engineVersion: ENGINE_VERSION,
+    version: 1,
     createdBy: 'u1',
     updatedBy: 'u1',
     createdAt: '2026-01-01T00:00:00.000Z',
