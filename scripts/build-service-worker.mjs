@@ -16,6 +16,9 @@ export async function buildServiceWorker(outputDir = 'dist') {
       '_expo/static/**/*.{js,css}',
       'assets/**/*.{ttf,otf,woff,woff2,png,jpg,svg}',
     ],
+    // Expo puts package assets (the Inter fonts) under assets/_main/node_modules/: Workbox's default
+    // ignore of node_modules would leave them out of the precache.
+    globIgnores: ['sw.js'],
     // Expo names these files by their content hash, so the URL alone identifies the version.
     dontCacheBustURLsMatching: /\/(_expo\/static|assets)\//,
     maximumFileSizeToCacheInBytes: 8 * 1024 * 1024,

@@ -1,27 +1,12 @@
 import {
   checklistSchema,
   jobProgressListSchema,
-  type ChecklistItemKey,
-  type ChecklistState,
   type EngineerItemPatch,
 } from '@/shared/schemas/job-checklist';
 import { apiRequest } from './client';
 
 export const fetchChecklist = (jobId: string) =>
   apiRequest('GET', `/api/jobs/${encodeURIComponent(jobId)}/checklist`, checklistSchema);
-
-/** Sets one item's state and/or note; answers with the whole checklist. */
-export const updateChecklistItem = (
-  jobId: string,
-  key: ChecklistItemKey,
-  patch: { state?: ChecklistState; note?: string },
-) =>
-  apiRequest(
-    'PATCH',
-    `/api/jobs/${encodeURIComponent(jobId)}/checklist/${encodeURIComponent(key)}`,
-    checklistSchema,
-    patch,
-  );
 
 /** Sets one of the engineer's items: state, note and/or photos; answers with the whole checklist. */
 export const updateEngineerItem = (jobId: string, itemId: string, patch: EngineerItemPatch) =>

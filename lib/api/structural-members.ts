@@ -1,14 +1,9 @@
-import {
-  memberListSchema,
-  memberSchema,
-  type MemberCreateBody,
-  type MemberPatchBody,
-} from '@/shared/schemas/members';
+import { memberListSchema, memberSchema } from '@/shared/schemas/members';
 import { apiRequest, noContentSchema } from './client';
 
 /**
  * Members of a job in the structural sense (headers and beams: DESIGN.md §3 "Member"). The firm's people
- * are in orgs.ts (`fetchMembers`). Every save answers with the server's own result.
+ * are in orgs.ts (`fetchMembers`). Creates and edits go through the device's queue (lib/hooks/use-member-save.ts).
  */
 
 const jobMembersPath = (jobId: string) => `/api/jobs/${encodeURIComponent(jobId)}/members`;
@@ -19,12 +14,6 @@ export const fetchJobMembers = (jobId: string) =>
   apiRequest('GET', jobMembersPath(jobId), memberListSchema).then((body) => body.members);
 
 export const fetchMember = (memberId: string) => apiRequest('GET', memberPath(memberId), memberSchema);
-
-export const createMember = (jobId: string, body: MemberCreateBody) =>
-  apiRequest('POST', jobMembersPath(jobId), memberSchema, body);
-
-export const updateMember = (memberId: string, patch: MemberPatchBody) =>
-  apiRequest('PATCH', memberPath(memberId), memberSchema, patch);
 
 /** Deletes the member for good. */
 export const deleteMember = (memberId: string) => apiRequest('DELETE', memberPath(memberId), noContentSchema);

@@ -1,23 +1,90 @@
 import { useCallback } from 'react';
-import useSWR, { useSWRConfig } from 'swr';
-import { fetchChecklist, updateChecklistItem, updateEngineerItem } from '@/lib/api/job-checklist';
+import useSWR from 'swr';
+import { useSWRConfig } from 'swr';
+import { fetchChecklist, updateEngineerItem } from '@/lib/api/job-checklist';
 import { keys } from '@/lib/api/keys';
-import type {
-  Checklist,
-  ChecklistItemKey,
-  ChecklistState,
-  EngineerItemPatch,
+import { cacheKey, nextVersion, queueWrite, withBaseVersion } from '@/lib/offline/queue-write';
+import {
+  checklistSchema,
+  type Checklist,
+  type ChecklistItemKey,
+  type ChecklistState,
+  type EngineerItemPatch,
 } from '@/shared/schemas/job-checklist';
 import { useMe } from './use-me';
 
-/** The job's checklist, and ways to set one item or one of the engineer's (the jobs list's progress follows). */
+type Patch = { state?: ChecklistState; note?: string };
+
+/** The checklist with one item changed on the device, its progress counted again. */
+function patched(
+  checklist: Checklist,
+  key: ChecklistItemKey,
+  patch: Patch,
+  by: { id: string; name: string },
+) {
+  const items = checklist.items.map((item) =>
+    item.key === key
+      ? nextVersion({
+          ...item,
+          ...patch,
+          updatedBy: by.id,
+          updatedByName: by.name,
+          updatedAt: new Date().toISOString(),
+        })
+      : item,
+  );
+  const all = [...items, ...checklist.engineerItems];
+  const count = (state: ChecklistState) => all.filter((i) => i.state === state).length;
+  return {
+    ...checklist,
+    items,
+    progress: {
+      done: count('done'),
+      notNeeded: count('not-needed'),
+      toDo: count('to-do'),
+      total: all.length,
+    },
+  };
+}
+
+/**
+ * The job's checklist, and a way to set one item through the device's queue (the jobs list's progress
+ * follows once the server has it). The engineer's items are set straight on the server: their photos are
+ * files of the request, uploaded first.
+ */
 export function useChecklist(jobId: string) {
   const { data: me } = useMe();
   const orgId = me?.activeOrgId ?? '';
   const { mutate } = useSWRConfig();
   const swr = useSWR(me ? keys.checklist(orgId, jobId) : null, () => fetchChecklist(jobId));
-  const settle = useCallback(
-    async (next: Checklist) => {
+  const current = swr.data;
+  const setItem = useCallback(
+    async (key: ChecklistItemKey, patch: Patch) => {
+      if (!me || !current) throw new Error('The checklist is not loaded yet');
+      const item = current.items.find((i) => i.key === key);
+      const local = patched(current, key, patch, me.user);
+      const saved = await queueWrite(checklistSchema, {
+        key: crypto.randomUUID(),
+        orgId,
+        entity: 'checklist',
+        create: false,
+        recordId: `${jobId}:${key}`,
+        group: jobId,
+        label: `Checklist: ${item?.title ?? key}`,
+        method: 'PATCH',
+        path: `/api/jobs/${encodeURIComponent(jobId)}/checklist/${encodeURIComponent(key)}`,
+        body: withBaseVersion(patch, item),
+        localRecord: local,
+        cache: { recordKey: cacheKey(keys.checklist(orgId, jobId)) },
+      });
+      if (saved.state === 'sent') await mutate(keys.jobProgress(orgId));
+      return saved.data ?? local;
+    },
+    [current, jobId, me, mutate, orgId],
+  );
+  const setEngineerItem = useCallback(
+    async (itemId: string, patch: EngineerItemPatch) => {
+      const next = await updateEngineerItem(jobId, itemId, patch);
       await Promise.all([
         mutate(keys.checklist(orgId, jobId), next, { revalidate: false }),
         mutate(keys.jobProgress(orgId)),
@@ -25,16 +92,6 @@ export function useChecklist(jobId: string) {
       return next;
     },
     [jobId, mutate, orgId],
-  );
-  const setItem = useCallback(
-    async (key: ChecklistItemKey, patch: { state?: ChecklistState; note?: string }) =>
-      settle(await updateChecklistItem(jobId, key, patch)),
-    [jobId, settle],
-  );
-  const setEngineerItem = useCallback(
-    async (itemId: string, patch: EngineerItemPatch) =>
-      settle(await updateEngineerItem(jobId, itemId, patch)),
-    [jobId, settle],
   );
   return { ...swr, setItem, setEngineerItem };
 }

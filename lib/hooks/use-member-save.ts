@@ -1,41 +1,69 @@
 import { useRouter } from 'expo-router';
 import { useCallback } from 'react';
-import { useSWRConfig } from 'swr';
 import { ApiError } from '@/lib/api/client';
 import { keys } from '@/lib/api/keys';
-import { createMember, updateMember } from '@/lib/api/structural-members';
+import { cacheKey, nextVersion, queueWrite, withBaseVersion } from '@/lib/offline/queue-write';
+import type { DeviceMemberFields } from '@/lib/ui/member/device-member';
 import type { SaveOutcome } from '@/lib/ui/member/member-editor';
-import type { MemberCreateBody } from '@/shared/schemas/members';
+import { memberSchema, type Member, type MemberCreateBody } from '@/shared/schemas/members';
 import { useMe } from './use-me';
 
 /**
- * Saves a member of a job: a new one is created and the page moves to its own address; an existing one is
- * updated. The job's member list and the member's cache take the server's answer.
+ * Saves a member of a job through the device's queue: a new one gets its id here (the server keeps it) and
+ * the page moves to its own address; an existing one is updated on the version it was read at. Online the
+ * server's answer replaces the cache; with no signal the device's own result shows until it is sent.
  */
-export function useMemberSave(jobId: string, memberId?: string) {
+export function useMemberSave(jobId: string, member?: Member) {
   const { data: me } = useMe();
-  const { mutate } = useSWRConfig();
   const router = useRouter();
-  const orgId = me?.activeOrgId ?? '';
   return useCallback(
-    async (body: MemberCreateBody): Promise<SaveOutcome> => {
+    async (body: MemberCreateBody, device: DeviceMemberFields): Promise<SaveOutcome> => {
+      if (!me) return { ok: false, fields: {}, message: 'Sign in again to save.' };
+      const orgId = me.activeOrgId;
+      const id = member?.id ?? crypto.randomUUID();
+      const now = new Date().toISOString();
+      const local: Member = {
+        ...(member ?? { version: 1, createdBy: me.user.id, createdAt: now }),
+        ...device,
+        id,
+        jobId,
+        label: body.label,
+        wall: body.wall ?? '',
+        updatedBy: me.user.id,
+        updatedAt: now,
+      } as Member;
       try {
-        const member = memberId ? await updateMember(memberId, body) : await createMember(jobId, body);
-        await Promise.all([
-          mutate(keys.member(orgId, member.id), member, { revalidate: false }),
-          mutate(keys.jobMembers(orgId, jobId)),
-        ]);
-        if (!memberId)
+        const saved = await queueWrite(memberSchema, {
+          key: crypto.randomUUID(),
+          orgId,
+          entity: 'member',
+          create: !member,
+          recordId: id,
+          group: jobId,
+          label: member ? `Member ${body.label} changed` : `New member ${body.label}`,
+          method: member ? 'PATCH' : 'POST',
+          path: member
+            ? `/api/members/${encodeURIComponent(id)}`
+            : `/api/jobs/${encodeURIComponent(jobId)}/members`,
+          body: member ? withBaseVersion(body, member) : { ...body, id },
+          localRecord: member ? nextVersion(local) : local,
+          cache: {
+            recordKey: cacheKey(keys.member(orgId, id)),
+            listKey: cacheKey(keys.jobMembers(orgId, jobId)),
+          },
+        });
+        const shown = saved.data ?? local;
+        if (!member)
           router.replace({
             pathname: '/jobs/[jobId]/members/[memberId]',
-            params: { jobId, memberId: member.id, saved: '1' },
+            params: { jobId, memberId: shown.id, saved: saved.state === 'sent' ? '1' : 'device' },
           });
-        return { ok: true, member };
+        return { ok: true, member: shown, onDevice: saved.state === 'waiting' };
       } catch (error) {
         if (!(error instanceof ApiError)) throw error;
         return { ok: false, fields: error.fields, message: error.message };
       }
     },
-    [jobId, memberId, mutate, orgId, router],
+    [jobId, member, me, router],
   );
 }

@@ -5,12 +5,14 @@ import { setActiveOrgId } from '@/lib/api/active-org';
 import { resetPassword, signIn, signOut, signOutEverywhere, signUp } from '@/lib/api/auth';
 import { isFirmScopedKey, keys } from '@/lib/api/keys';
 import { acceptInvitation } from '@/lib/api/orgs';
+import { device } from '@/lib/offline/device';
 import type { SignInInput, SignUpInput } from '@/shared/schemas/auth';
 import type { AcceptInvitationInput } from '@/shared/schemas/orgs';
 
 /**
  * Sign in, sign up, password reset, invitation acceptance, sign out (here or everywhere) and firm switching. Each leaves the SWR cache clean
- * for the new session; the session gates then route the person to the right screen.
+ * for the new session and opens (or, signing out, deletes) the person's own device store; the session gates then route the person to the
+ * right screen.
  */
 export function useSessionActions() {
   const { mutate } = useSWRConfig();
@@ -21,7 +23,8 @@ export function useSessionActions() {
   return {
     signIn: useCallback(
       async (input: SignInInput) => {
-        await signIn(input);
+        const me = await signIn(input);
+        await device.open(me.user.id);
         setActiveOrgId(null);
         await refreshFirmData();
       },
@@ -29,7 +32,8 @@ export function useSessionActions() {
     ),
     signUp: useCallback(
       async (input: SignUpInput) => {
-        await signUp(input);
+        const me = await signUp(input);
+        await device.open(me.user.id);
         setActiveOrgId(null);
         await refreshFirmData();
       },
@@ -38,7 +42,8 @@ export function useSessionActions() {
     /** Sets a new password with a reset link; the server ends every other session and signs this one in. */
     resetPassword: useCallback(
       async (token: string, input: { password: string }) => {
-        await resetPassword(token, input);
+        const me = await resetPassword(token, input);
+        await device.open(me.user.id);
         setActiveOrgId(null);
         await refreshFirmData();
         router.replace('/');
@@ -48,16 +53,22 @@ export function useSessionActions() {
     acceptInvitation: useCallback(
       async (token: string, input: AcceptInvitationInput) => {
         const me = await acceptInvitation(token, input);
+        await device.open(me.user.id);
         setActiveOrgId(me.activeOrgId);
         await refreshFirmData();
         router.replace('/');
       },
       [refreshFirmData, router],
     ),
-    /** Ends the session; `returnTo` (an in-app path) is where sign-in leads afterwards. */
+    /**
+     * Ends the session and deletes this person's device store (records, waiting changes, photos) and the
+     * worker's runtime caches; `returnTo` (an in-app path) is where sign-in leads afterwards. Callers warn
+     * first when changes still wait (`useDeviceStatus().items`).
+     */
     signOut: useCallback(
       async (returnTo?: string) => {
         await signOut();
+        await device.end();
         setActiveOrgId(null);
         await mutate(isFirmScopedKey, undefined, { revalidate: false });
         router.replace(returnTo ?? '/sign-in');
@@ -68,6 +79,7 @@ export function useSessionActions() {
     /** Ends every session of the person (this one too) and goes to sign-in. */
     signOutEverywhere: useCallback(async () => {
       await signOutEverywhere();
+      await device.end();
       setActiveOrgId(null);
       await mutate(isFirmScopedKey, undefined, { revalidate: false });
       router.replace('/sign-in');

@@ -1,6 +1,6 @@
 import { overlayPending } from './overlay';
-import { createOutbox, type Outbox, type Sender, type SubmitResult } from './outbox';
-import type { DeviceStore, NewOutboxItem, OutboxItem } from './outbox-types';
+import { createOutbox, NetworkFailure, type Outbox, type Sender, type SubmitResult } from './outbox';
+import type { DeviceStore, NewOutboxItem, OutboxItem, StoredBlob } from './outbox-types';
 
 /** SWR's `mutate`, as the session needs it: set data (or an updater) and/or revalidate one key. */
 export type CacheMutate = (
@@ -53,6 +53,22 @@ export function createDeviceSession(deps: DeviceSessionDeps) {
     for (const listener of listeners) listener();
   };
 
+  /** What the last request told of the connection (the browser's online flag can say "online" without one). */
+  const heard = (reached: boolean) => {
+    if (snapshot.online !== reached) emit({ online: reached });
+  };
+
+  const send: Sender = async (item, blob) => {
+    try {
+      const answer = await deps.send(item, blob);
+      heard(true);
+      return answer;
+    } catch (error) {
+      if (error instanceof NetworkFailure) heard(false);
+      throw error;
+    }
+  };
+
   async function refresh(open: Open) {
     if (currentUser !== open.userId) return;
     const [items, lastSyncAt] = await Promise.all([open.outbox.list(), open.store.getMeta('lastSyncAt')]);
@@ -96,7 +112,7 @@ export function createDeviceSession(deps: DeviceSessionDeps) {
         store,
         outbox: createOutbox({
           store,
-          send: deps.send,
+          send,
           now,
           onSent: (item, body) => sent(store, item, body),
           onDiscarded: (item) => discarded(store, item),
@@ -130,10 +146,14 @@ export function createDeviceSession(deps: DeviceSessionDeps) {
       if (!opened) return;
       await opened.store.putRecord(key, data);
       if (meId) await opened.store.setMeta(ME_META, data);
-      emit({ lastSyncAt: now() });
+      const wasOffline = !snapshot.online;
+      emit({ lastSyncAt: now(), online: true });
+      // The server answered again: what waits goes now rather than at its next backoff.
+      if (wasOffline) void opened.outbox.wake();
     },
     /** The device's copy of a key when the server cannot be reached. */
     async recall(key: string): Promise<unknown> {
+      heard(false);
       const opened = await session();
       if (!opened) return undefined;
       const stored = await opened.store.getRecord(key);
@@ -141,10 +161,14 @@ export function createDeviceSession(deps: DeviceSessionDeps) {
       return isMeKey(key) ? opened.store.getMeta(ME_META) : undefined;
     },
     overlay: (key: string, data: unknown) => overlayPending(key, data, snapshot.items),
-    /** Stores and sends one write; when it has to wait, the device's copy shows in its record and list. */
-    async submit(input: NewOutboxItem): Promise<SubmitResult> {
+    /**
+     * Stores and sends one write (a photo's blob is kept on the device first, so the upload resumes after a
+     * reload); when it has to wait, the device's copy shows in its record and list.
+     */
+    async submit(input: NewOutboxItem, blob?: StoredBlob): Promise<SubmitResult> {
       const opened = await session();
       if (!opened) throw new Error('No device session: sign in first');
+      if (blob) await opened.store.putBlob(blob);
       const result = await opened.outbox.submit(input);
       if (result.state === 'queued' || result.state === 'conflict') {
         await refresh(opened);

@@ -5,6 +5,7 @@ import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import type { Me } from '@/shared/schemas/auth';
 import { colors, layout, spacing } from '@/lib/theme';
 import { NavLink } from './nav-link';
+import { SyncPill } from './offline/sync-pill';
 import { isNavItemActive, navItemsForRole } from './nav-items';
 import { roleLabel } from './role-label';
 import { Text } from './text';
@@ -13,7 +14,7 @@ import { Wordmark } from './wordmark';
 
 /**
  * The signed-in frame: bottom tabs on a phone (< 768 px wide), a side navigation on a wide screen.
- * The tabs a person sees follow their role in the active firm.
+ * The tabs a person sees follow their role in the active firm; the sync pill shows in the header.
  */
 export function AppShell({ me, children }: { me: Me; children: ReactNode }) {
   const { width } = useWindowDimensions();
@@ -41,6 +42,7 @@ export function AppShell({ me, children }: { me: Me; children: ReactNode }) {
           <Text variant="caption" tone="muted" numberOfLines={2}>
             {firmLine}
           </Text>
+          <SyncPill />
           <View style={styles.sideLinks}>{links}</View>
         </View>
         <View style={styles.content}>
@@ -54,10 +56,13 @@ export function AppShell({ me, children }: { me: Me; children: ReactNode }) {
   return (
     <View style={styles.phoneRoot}>
       <View style={[styles.topBar, { paddingTop: spacing.sm + insets.top }]}>
-        <Wordmark />
-        <Text variant="caption" tone="muted" numberOfLines={2} style={styles.topFirm}>
-          {firmLine}
-        </Text>
+        <View style={styles.topBrand}>
+          <Wordmark />
+          <Text variant="caption" tone="muted" numberOfLines={1}>
+            {firmLine}
+          </Text>
+        </View>
+        <SyncPill />
       </View>
       <UnconfirmedEmailNotice me={me} />
       <View style={styles.content}>{children}</View>
@@ -91,7 +96,7 @@ const styles = StyleSheet.create({
     borderBottomColor: colors.line,
     backgroundColor: colors.surface,
   },
-  topFirm: { flexShrink: 1, textAlign: 'right' },
+  topBrand: { flexShrink: 1, gap: spacing.xxs },
   content: { flex: 1 },
   tabBar: {
     flexDirection: 'row',

@@ -14,6 +14,7 @@ import { ErrorView } from './error-view';
 import { Icon } from './icon';
 import { LinkButton } from './link-button';
 import { memberStateLook } from './member-state';
+import { DeviceMark } from './offline/device-mark';
 import { RecomputeNotice } from './recompute-notice';
 import { checkNames } from './result/check-names';
 import { Text } from './text';
@@ -45,6 +46,7 @@ function MemberRow({ member, design }: { member: MemberListItem; design?: Member
               ) : (
                 <Text tone={look.tone}>{look.word}</Text>
               )}
+              <DeviceMark recordId={member.id} />
               <Text variant="caption" tone="muted" style={design ? styles.superseded : undefined}>
                 {member.kind === 'header' ? 'Header' : 'Beam'}
                 {member.wall ? ` · ${member.wall}` : ''} · {member.summary.sizeLabel}{' '}

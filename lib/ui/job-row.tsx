@@ -6,6 +6,7 @@ import { colors, layout, radii, spacing } from '@/lib/theme';
 import { Icon } from './icon';
 import { progressText } from './bearing/progress-text';
 import { yearBuiltLabel } from './job-labels';
+import { DeviceMark } from './offline/device-mark';
 import { Text } from './text';
 
 /** One job in the list: name, address, year built, load standard and checklist progress; opens the job. */
@@ -29,6 +30,7 @@ export function JobRow({ job, progress }: { job: Job; progress?: JobProgressList
               <Text variant="caption" tone="muted">
                 {yearBuiltLabel(job)} · {job.loadStandard}
               </Text>
+              <DeviceMark recordId={job.id} />
               {progress ? (
                 <Text variant="caption" testID="job-progress">
                   {progressText(progress.progress)}

@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
+import { useDeviceStatus } from '@/lib/hooks/use-device-status';
 import { useSessionActions } from '@/lib/hooks/use-session-actions';
 import { useSessions } from '@/lib/hooks/use-sessions';
 import { useSubmit } from '@/lib/hooks/use-submit';
@@ -12,6 +13,7 @@ import { dateTimeLabel } from './date-label';
 import { ErrorView } from './error-view';
 import { Icon } from './icon';
 import { Notice } from './notice';
+import { waitingLossText } from './offline/waiting-loss-text';
 import { Text } from './text';
 
 function SessionLine({ session, first }: { session: SessionRow; first: boolean }) {
@@ -45,6 +47,8 @@ export function SessionsCard() {
   const { signOutEverywhere } = useSessionActions();
   const leaving = useSubmit(signOutEverywhere);
   const [confirming, setConfirming] = useState(false);
+  const device = useDeviceStatus();
+  const loss = waitingLossText(device.items.length, device.online);
 
   return (
     <Card title="Where you are signed in" testID="sessions">
@@ -63,6 +67,7 @@ export function SessionsCard() {
             Every browser listed here is signed out, this one too. Anyone using a lost phone or a shared
             computer has to sign in again.
           </Notice>
+          {loss ? <Notice tone="warning">{loss}</Notice> : null}
           <View style={styles.buttons}>
             <Button
               label="Sign out everywhere"

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { ApiError } from '@/lib/api/client';
+import { DeviceMark } from '@/lib/ui/offline/device-mark';
 import { useChecklist } from '@/lib/hooks/use-checklist';
 import { colors, radii, spacing } from '@/lib/theme';
 import { Button } from '@/lib/ui/button';
@@ -22,9 +23,12 @@ const STATES = [
 
 function ItemRow({
   item,
+  recordId,
   onSet,
 }: {
   item: ChecklistItem;
+  /** The item's name in the device's queue (its "only on this device" mark). */
+  recordId: string;
   onSet: (patch: { state?: ChecklistState; note?: string }) => Promise<string[] | null>;
 }) {
   const [note, setNote] = useState(item.note);
@@ -58,6 +62,7 @@ function ItemRow({
         ) : null}
       </View>
       <FieldMessages messages={errors ?? undefined} />
+      <DeviceMark recordId={recordId} />
       {item.updatedByName && item.updatedAt ? (
         <Text variant="caption" tone="muted">
           Set by {item.updatedByName}, {new Date(item.updatedAt).toLocaleString()}
@@ -85,6 +90,7 @@ export function ChecklistPanel({ jobId }: { jobId: string }) {
         <ItemRow
           key={item.key}
           item={item}
+          recordId={`${jobId}:${item.key}`}
           onSet={async (patch) => {
             try {
               await setItem(item.key, patch);

@@ -4,6 +4,7 @@ import { useJobScreens } from '@/lib/hooks/use-job-screens';
 import { colors } from '@/lib/theme';
 import { Card } from '@/lib/ui/card';
 import { cardRowStyles as styles } from '@/lib/ui/card-row-styles';
+import { DeviceMark } from '@/lib/ui/offline/device-mark';
 import { ErrorView } from '@/lib/ui/error-view';
 import { Icon } from '@/lib/ui/icon';
 import { LinkButton } from '@/lib/ui/link-button';
@@ -35,6 +36,7 @@ function ScreenRow({ screen }: { screen: Screen }) {
               <Text variant="caption" tone="muted">
                 Version {screen.version} · {screen.updatedByName}
               </Text>
+              <DeviceMark recordId={screen.id} />
             </View>
             <Icon name="chevronRight" color={colors.inkMuted} />
           </View>

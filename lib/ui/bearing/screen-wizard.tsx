@@ -1,6 +1,6 @@
 import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { applicableQuestions } from '@/lib/calc';
+import { applicableQuestions, screenWall } from '@/lib/calc';
 import { spacing } from '@/lib/theme';
 import { Button } from '@/lib/ui/button';
 import { Card } from '@/lib/ui/card';
@@ -9,14 +9,17 @@ import { Text } from '@/lib/ui/text';
 import { TextField } from '@/lib/ui/text-field';
 import type { ScreenAnswer, ScreenAnswers, ScreenQuestionId } from '@/shared/schemas/bearing-screen-answers';
 import { useScreenDraft, type ScreenDraft } from '@/lib/hooks/use-screen-draft';
+import type { StoredScreenResult } from '@/shared/schemas/bearing-screens';
 import { AnswerStep } from './answer-step';
 import { QUESTION_ORDER } from './question-copy';
 
 type Step = 'wall' | ScreenQuestionId | 'spans';
 
+/** `device`: the outcome this device computed (the server's engine), kept while a save waits for signal. */
 export type WizardSave = (
   wallLabel: string,
   answers: ScreenAnswers,
+  device: StoredScreenResult,
 ) => Promise<{ ok: true } | { ok: false; message: string; fields: Record<string, string[]> }>;
 
 function spanText(ft: number | undefined) {
@@ -80,12 +83,13 @@ export function ScreenWizard({
     const kept = Object.fromEntries(
       Object.entries(answers).filter(([id]) => applying.has(id as ScreenQuestionId)),
     ) as ScreenAnswers;
-    setBusy(true);
-    const outcome = await onSave(wallLabel, {
+    const final: ScreenAnswers = {
       ...kept,
       joistSpanAFt: readSpan(spans.a),
       joistSpanBFt: readSpan(spans.b),
-    });
+    };
+    setBusy(true);
+    const outcome = await onSave(wallLabel, final, screenWall(final));
     setBusy(false);
     if (outcome.ok) device.forget();
     setProblem(outcome.ok ? null : { message: outcome.message, fields: outcome.fields });

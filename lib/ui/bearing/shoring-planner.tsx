@@ -1,10 +1,7 @@
 import { useDeferredValue, useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { useSWRConfig } from 'swr';
 import { ApiError } from '@/lib/api/client';
-import { keys } from '@/lib/api/keys';
-import { saveShoring } from '@/lib/api/shoring-plans';
-import { useMe } from '@/lib/hooks/use-me';
+import { useShoringSave } from '@/lib/hooks/use-shoring-save';
 import { spacing } from '@/lib/theme';
 import { Button } from '@/lib/ui/button';
 import { Card } from '@/lib/ui/card';
@@ -96,16 +93,18 @@ function bodyOf(form: Form): ShoringPlanBodyInput {
  * server's own result, which then shows, and the screen says so if the two differ.
  */
 export function ShoringPlanner({
+  jobId,
   memberId,
   member,
   saved,
 }: {
+  jobId: string;
   memberId: string;
   member: MemberCheckInput;
   saved: ShoringRecord | null;
 }) {
-  const { data: me } = useMe();
-  const { mutate } = useSWRConfig();
+  const saveShoring = useShoringSave(jobId, memberId, saved);
+  const [waiting, setWaiting] = useState(false);
   const [form, setForm] = useState<Form>(() => formOf(saved));
   const [record, setRecord] = useState(saved);
   const [savedForm, setSavedForm] = useState<Form | null>(() => (saved ? formOf(saved) : null));
@@ -130,11 +129,13 @@ export function ShoringPlanner({
   const plan = async () => {
     setBusy(true);
     try {
-      const next = await saveShoring(memberId, bodyOf(form));
-      setRecord(next);
-      setSavedForm(form);
+      const next = await saveShoring(bodyOf(form));
+      if (next) {
+        setRecord(next);
+        setSavedForm(form);
+      }
+      setWaiting(next === null);
       setProblem(null);
-      if (me) await mutate(keys.shoring(me.activeOrgId, memberId), next, { revalidate: false });
     } catch (error) {
       if (!(error instanceof ApiError)) throw error;
       setProblem(error);
@@ -273,6 +274,12 @@ export function ShoringPlanner({
           testID="shoring-save"
         />
       </Card>
+      {waiting ? (
+        <Notice tone="info" title="Saved on this device only" testID="shoring-waiting">
+          No signal: the plan is sent when there is, and the server works out the walls from the member’s
+          saved loads. The plan below is this device’s until then.
+        </Notice>
+      ) : null}
       {showSaved ? (
         <>
           <Notice tone="success" title="Saved" testID="shoring-status">

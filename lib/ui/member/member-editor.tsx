@@ -13,6 +13,7 @@ import type { Member, MemberCreateBody } from '@/shared/schemas/members';
 import type { MemberDesign } from '@/shared/schemas/requests/member-design';
 import { BasicsCard } from './basics-card';
 import { ConditionsCard } from './conditions-card';
+import { deviceMemberFields, type DeviceMemberFields } from './device-member';
 import { draftFromInput } from './draft-from-input';
 import { FramingCard } from './framing-card';
 import { jsonEqual } from '@/lib/ui/json-equal';
@@ -30,7 +31,9 @@ import { SupersededNotice } from './superseded-notice';
 /** Two panes (inputs | result) from this content width up, px. */
 const TWO_PANE_MIN = 1000;
 
-export type SaveOutcome = { ok: true; member: Member } | { ok: false; fields: FieldErrors; message: string };
+/** `onDevice`: no signal, the member is saved on this device and waits to be sent. */
+export type SaveOutcome =
+  { ok: true; member: Member; onDevice: boolean } | { ok: false; fields: FieldErrors; message: string };
 
 type MemberEditorProps = {
   job: Job;
@@ -38,9 +41,10 @@ type MemberEditorProps = {
   kind: MemberKind;
   /** Device storage key of the draft (carries the user, job and member). */
   storageKey: string;
-  onSave: (body: MemberCreateBody) => Promise<SaveOutcome>;
-  /** The member was created just before this page opened: say it was saved. */
-  justSaved?: boolean;
+  /** `device`: the device's own result, kept for the member while a save waits for signal. */
+  onSave: (body: MemberCreateBody, device: DeviceMemberFields) => Promise<SaveOutcome>;
+  /** The member was created just before this page opened: say where it was saved. */
+  justSaved?: 'server' | 'device';
   /** A new member started from a bearing screen's answers. */
   prefill?: ScreenPrefill;
   /** The engineer's member from a Designed request: it supersedes the preliminary size. */
@@ -49,6 +53,10 @@ type MemberEditorProps = {
 
 const NO_ERRORS: FieldErrors = {};
 const savedStatus = { tone: 'success', text: 'Saved. The result shown is the server’s.' } as const;
+const deviceStatus = {
+  tone: 'success',
+  text: 'Saved on this device only: it is sent when there is signal. The result shown is this device’s own check until the server’s replaces it.',
+} as const;
 
 /** Messages that only say a required field is still empty: held back until the person tries to save. */
 const isEmptyFieldMessage = (message: string) =>
@@ -93,7 +101,7 @@ export function MemberEditor({
   const [attempted, setAttempted] = useState(false);
   const [serverErrors, setServerErrors] = useState<FieldErrors>({});
   const [status, setStatus] = useState<{ tone: 'success' | 'error'; text: string } | null>(
-    justSaved ? savedStatus : null,
+    justSaved === 'server' ? savedStatus : justSaved === 'device' ? deviceStatus : null,
   );
   const [busy, setBusy] = useState(false);
   /** The draft as last saved (null for a member not saved yet): "dirty" compares with it. */
@@ -134,13 +142,16 @@ export function MemberEditor({
       return;
     }
     setBusy(true);
-    const outcome = await onSave({ label: draft.label, wall: draft.wall, input: reading.input });
+    const outcome = await onSave(
+      { label: draft.label, wall: draft.wall, input: reading.input },
+      deviceMemberFields(job, draft.label, checked),
+    );
     setBusy(false);
     if (outcome.ok) {
       setServerErrors({});
       savedDraft.current = draft;
       form.forget();
-      setStatus(savedStatus);
+      setStatus(outcome.onDevice ? deviceStatus : savedStatus);
     } else {
       const mapped: FieldErrors = {};
       for (const [path, messages] of Object.entries(outcome.fields)) {

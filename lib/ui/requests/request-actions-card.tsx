@@ -9,6 +9,8 @@ import {
   sendRequest,
   uploadRequestFile,
 } from '@/lib/api/design-requests';
+import { usePhotoUpload } from '@/lib/hooks/use-photo-upload';
+import { ApiError } from '@/lib/api/client';
 import { spacing } from '@/lib/theme';
 import { PHOTO_PLACE_LABELS, photoPlaces, type PhotoPlace } from '@/shared/schemas/requests/snapshot';
 import type { RequestDetail } from '@/shared/schemas/requests/views';
@@ -38,6 +40,8 @@ export function RequestActionsCard({
   const [place, setPlace] = useState<PhotoPlace>('attic-over-wall');
   const [busy, setBusy] = useState<string | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
+  const [queued, setQueued] = useState(false);
+  const queuePhoto = usePhotoUpload(request.id);
   const can = (action: RequestDetail['actions'][number]) => request.actions.includes(action);
 
   async function run(name: string, act: () => Promise<RequestDetail>) {
@@ -53,7 +57,25 @@ export function RequestActionsCard({
     }
   }
 
-  async function upload(purpose: 'photo' | 'design') {
+  /** A photo goes through the device's queue, so one taken with no signal uploads when there is. */
+  async function attachPhoto() {
+    const file = pickFile ? await pickFile(ACCEPT) : null;
+    if (!file) return;
+    setBusy('photo');
+    setProblem(null);
+    try {
+      const onServer = await queuePhoto(file, file.name, { place, caption: text });
+      setQueued(!onServer);
+      setText('');
+    } catch (error) {
+      if (!(error instanceof ApiError)) throw error;
+      setProblem(error.message);
+    } finally {
+      setBusy(null);
+    }
+  }
+
+  async function upload(purpose: 'design') {
     const file = pickFile ? await pickFile(ACCEPT) : null;
     if (!file) return;
     await run(purpose, async () => {
@@ -95,6 +117,11 @@ export function RequestActionsCard({
       {problem ? (
         <Notice tone="error" title="Not done">
           {problem}
+        </Notice>
+      ) : null}
+      {queued ? (
+        <Notice tone="info" title="Photo kept on this device" testID="photo-queued">
+          No signal: it uploads by itself when there is. It is listed under Package and files until then.
         </Notice>
       ) : null}
       <TextField
@@ -151,7 +178,7 @@ export function RequestActionsCard({
           />
         ) : null}
         {firm && can('edit') && pickFile
-          ? button('photo', 'Add a photo or sketch', () => void upload('photo'))
+          ? button('photo', 'Add a photo or sketch', () => void attachPhoto())
           : null}
         {can('revise')
           ? button('revise', 'Send a revision', () =>

@@ -7,6 +7,7 @@ import { Button } from '../button';
 import { Card } from '../card';
 import { Text } from '../text';
 import { openDownload } from './browser-files';
+import { WaitingPhotos } from './waiting-photos';
 
 const PURPOSE_WORDS = {
   photo: 'Photo or sketch',
@@ -40,6 +41,7 @@ export function RequestFilesCard({ request }: { request: RequestDetail }) {
         </View>
       ) : null}
       {!sent ? <Text tone="muted">The package is made when the request is sent.</Text> : null}
+      <WaitingPhotos requestId={request.id} />
       {request.files.map((file) => (
         <View key={file.id} style={styles.file} testID="request-file">
           <Text variant="bodyStrong">

@@ -121,6 +121,43 @@ describe('device session', () => {
     expect(session.snapshot().lastSyncAt).not.toBeNull();
   });
 
+  it('a photo’s file is kept in the person’s database until the upload is on the server', async () => {
+    let online = false;
+    const sent: (string | undefined)[] = [];
+    const { session, databases } = setup(() => (online ? { status: 201, body: { id: 'p1' } } : 'offline'));
+    await session.open('u1');
+    const blob = { id: 'b1', blob: new Blob(['jpeg bytes']), name: 'attic.jpg', type: 'image/jpeg' };
+    const photo: NewOutboxItem = {
+      ...newMember(),
+      entity: 'photo',
+      recordId: 'p1',
+      blobId: 'b1',
+      cache: {},
+      localRecord: undefined,
+    };
+    expect((await session.submit(photo, blob)).state).toBe('queued');
+    const store = databases.get('tributary-device-u1') as DeviceStore;
+    expect((await store.getBlob('b1'))?.name).toBe('attic.jpg');
+    sent.push((await store.listOutbox())[0]?.blobId);
+    online = true;
+    await session.setOnline(true);
+    expect(sent).toEqual(['b1']);
+    expect(await store.getBlob('b1')).toBeUndefined();
+    expect(session.snapshot().items).toEqual([]);
+  });
+
+  it('a request that cannot reach the server marks the device offline, and an answer marks it online again', async () => {
+    let online = false;
+    const { session } = setup(() => (online ? { status: 201, body: undefined } : 'offline'));
+    await session.open('u1');
+    await session.submit(newMember());
+    expect(session.snapshot().online).toBe(false);
+    online = true;
+    await session.remember(membersKey, []);
+    expect(session.snapshot().online).toBe(true);
+    await expect.poll(() => session.snapshot().items.length).toBe(0);
+  });
+
   it('sign-out deletes the person’s database, the pointer and the runtime caches', async () => {
     const { session, databases, pointer, caches } = setup();
     await session.remember(JSON.stringify(['me', null]), me('u1'));

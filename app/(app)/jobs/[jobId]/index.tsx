@@ -15,6 +15,7 @@ import { JobMembersPanel } from '@/lib/ui/job-members-panel';
 import { JobSummary } from '@/lib/ui/job-summary';
 import { JobRequestsPanel } from '@/lib/ui/requests/job-requests-panel';
 import { LoadingView } from '@/lib/ui/loading-view';
+import { DeviceMark } from '@/lib/ui/offline/device-mark';
 import { Screen } from '@/lib/ui/screen';
 import { TextLink } from '@/lib/ui/text-link';
 
@@ -43,7 +44,7 @@ export default function JobPage() {
           initial={jobToDraft(job)}
           submitLabel="Save changes"
           onSubmit={async (fields) => {
-            setRecomputed(await update(job.id, fields));
+            setRecomputed(await update(job, fields));
             setEditing(false);
           }}
           onCancel={() => setEditing(false)}
@@ -67,6 +68,7 @@ export default function JobPage() {
       }
     >
       <TextLink href="/jobs" label="All jobs" />
+      <DeviceMark recordId={job.id} />
       <JobScreensPanel jobId={job.id} />
       <JobMembersPanel job={job} recomputed={recomputed} />
       <TextLink href={`/jobs/${job.id}/budget`} label="Job budget" />

@@ -10,6 +10,7 @@ import { useMemberSave } from '@/lib/hooks/use-member-save';
 import { ErrorView } from '@/lib/ui/error-view';
 import { LoadingView } from '@/lib/ui/loading-view';
 import { LazyMemberEditor, WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
+import { DeviceMark } from '@/lib/ui/offline/device-mark';
 
 export default function MemberPage() {
   const { jobId, memberId, saved } = useLocalSearchParams<{
@@ -21,7 +22,7 @@ export default function MemberPage() {
   const member = useMember(memberId);
   const designs = useJobDesigns(jobId);
   const { data: me } = useMe();
-  const save = useMemberSave(jobId, memberId);
+  const save = useMemberSave(jobId, member.data);
   const error = job.error ?? member.error;
   if (error)
     return (
@@ -38,6 +39,7 @@ export default function MemberPage() {
     <View style={styles.page}>
       <View style={styles.links}>
         <TextLink href={`/jobs/${jobId}/budget/${memberId}`} label="Budget for this member" />
+        <DeviceMark recordId={memberId} />
       </View>
       <WorkspaceSuspense>
         <LazyMemberEditor
@@ -47,7 +49,7 @@ export default function MemberPage() {
           kind={member.data.kind}
           storageKey={`${me.user.id}.${job.data.id}.${member.data.id}`}
           onSave={save}
-          justSaved={saved === '1'}
+          justSaved={saved === '1' ? 'server' : saved === 'device' ? 'device' : undefined}
           design={designs.data?.find((d) => d.memberId === memberId)}
         />
       </WorkspaceSuspense>
@@ -57,5 +59,12 @@ export default function MemberPage() {
 
 const styles = StyleSheet.create({
   page: { flex: 1 },
-  links: { paddingHorizontal: spacing.lg, paddingTop: spacing.sm },
+  links: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    alignItems: 'center',
+    columnGap: spacing.lg,
+    paddingHorizontal: spacing.lg,
+    paddingTop: spacing.sm,
+  },
 });

@@ -6,6 +6,7 @@ import { Button } from '@/lib/ui/button';
 import { ErrorView } from '@/lib/ui/error-view';
 import { LazyScreenOutcome, LazyScreenWizard, WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
 import { LoadingView } from '@/lib/ui/loading-view';
+import { DeviceMark } from '@/lib/ui/offline/device-mark';
 import { Screen } from '@/lib/ui/screen';
 import { TextLink } from '@/lib/ui/text-link';
 
@@ -16,7 +17,7 @@ export default function BearingScreenPage() {
     edit?: string;
   }>();
   const { data: screen, error, mutate } = useScreen(screenId);
-  const save = useScreenSave(jobId, screenId);
+  const save = useScreenSave(jobId, screen);
   const router = useRouter();
   const { data: me } = useMe();
   if (error) return <ErrorView error={error} onRetry={() => mutate()} />;
@@ -51,6 +52,7 @@ export default function BearingScreenPage() {
       }
     >
       {back}
+      <DeviceMark recordId={screen.id} />
       <WorkspaceSuspense>
         <LazyScreenOutcome screen={screen} />
       </WorkspaceSuspense>

@@ -23,7 +23,12 @@ export default function ShoringPage() {
         while the wall comes out.
       </Text>
       <WorkspaceSuspense>
-        <LazyShoringPlanner memberId={memberId} member={member.data.input} saved={shoring.data} />
+        <LazyShoringPlanner
+          jobId={jobId}
+          memberId={memberId}
+          member={member.data.input}
+          saved={shoring.data}
+        />
       </WorkspaceSuspense>
     </Screen>
   );
