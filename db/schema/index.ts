@@ -10,3 +10,4 @@ export * from './bearing-screens';
 export * from './job-checklist';
 export * from './shoring-plans';
 export * from './price-book';
+export * from './load-path';

@@ -27,6 +27,8 @@ describe('migrations', () => {
       'invitations',
       'job_checklist_items',
       'jobs',
+      'load_path_bearings',
+      'load_path_elements',
       'mail_outbox',
       'member_budgets',
       'members',
