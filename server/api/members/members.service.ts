@@ -4,6 +4,8 @@ import { recordAudit, type Actor } from '@/server/api/audit/audit.repository';
 import { findJob } from '@/server/api/jobs/jobs.repository';
 import type { Job } from '@/shared/schemas/jobs';
 import type { Member, MemberCreate, MemberListItem, MemberPatch } from '@/shared/schemas/members';
+import { deleteBearingsOf } from '@/server/api/load-path/load-path.repository';
+import { refreshLoadPath } from '@/server/api/load-path/load-path.service';
 import { evaluate } from './member-evaluation';
 import { deleteMember, findMember, insertMember, listMembers, updateMember } from './members.repository';
 
@@ -14,6 +16,15 @@ function openJob(db: DbOrTx, orgId: string, jobId: string): Job {
   if (job.archivedAt)
     throw new AppError('conflict', 'This job is archived: its members can be read, not changed');
   return job;
+}
+
+/** A member's input as the load path names it: a refusal there is about the member's input. */
+const inputField = () => 'input';
+
+/** The member with its state on the job's load path, checked again with this change. */
+function onLoadPath(tx: DbOrTx, orgId: string, job: Job, member: Member): Member {
+  const summary = refreshLoadPath(tx, orgId, job, inputField).summaries.get(member.id);
+  return summary ? { ...member, summary } : member;
 }
 
 /**
@@ -44,7 +55,7 @@ export function createMembersService(db: Db) {
           subject: member.id,
           detail: { jobId, kind: member.kind, label: member.label },
         });
-        return member;
+        return onLoadPath(tx, actor.orgId, job, member);
       });
     },
 
@@ -66,7 +77,7 @@ export function createMembersService(db: Db) {
           subject: memberId,
           detail: { jobId: saved.jobId, fields: Object.keys(patch) },
         });
-        return member;
+        return onLoadPath(tx, actor.orgId, job, member);
       });
     },
 
@@ -74,8 +85,10 @@ export function createMembersService(db: Db) {
       db.transaction((tx) => {
         const saved = findMember(tx, actor.orgId, memberId);
         if (!saved) throw notFound('Member');
-        openJob(tx, actor.orgId, saved.jobId);
+        const job = openJob(tx, actor.orgId, saved.jobId);
+        deleteBearingsOf(tx, actor.orgId, memberId);
         deleteMember(tx, actor.orgId, memberId);
+        refreshLoadPath(tx, actor.orgId, job, inputField);
         recordAudit(tx, actor, {
           action: 'member.delete',
           subject: memberId,
