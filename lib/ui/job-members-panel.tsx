@@ -15,6 +15,7 @@ import { memberStateLook } from './member-state';
 import { RecomputeNotice } from './recompute-notice';
 import { checkNames } from './result/check-names';
 import { Text } from './text';
+import { TextLink } from './text-link';
 
 function MemberRow({ member }: { member: MemberListItem }) {
   const look = memberStateLook[member.summary.state];
@@ -76,6 +77,7 @@ export function JobMembersPanel({
       {members?.map((m) => (
         <MemberRow key={m.id} member={m} />
       ))}
+      <TextLink href={`/jobs/${job.id}/framing`} label="Existing framing (girders, posts, footings…)" />
       <View style={styles.actions}>
         <LinkButton
           label="Add a header"

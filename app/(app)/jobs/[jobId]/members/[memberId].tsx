@@ -35,6 +35,10 @@ export default function MemberPage() {
   return (
     <View style={styles.page}>
       <View style={styles.links}>
+        <TextLink
+          href={`/jobs/${jobId}/load-path/${memberId}`}
+          label={`Load path to the ground: ${member.data.summary.loadPath?.closed ? 'closed' : 'open — say what each end bears on'}`}
+        />
         <TextLink href={`/jobs/${jobId}/budget/${memberId}`} label="Budget for this member" />
       </View>
       <WorkspaceSuspense>
@@ -54,5 +58,5 @@ export default function MemberPage() {
 
 const styles = StyleSheet.create({
   page: { flex: 1 },
-  links: { paddingHorizontal: spacing.lg, paddingTop: spacing.sm },
+  links: { paddingHorizontal: spacing.lg, paddingTop: spacing.sm, gap: spacing.xs },
 });
