@@ -167,7 +167,7 @@ function EndQuestion({
     setOption(next);
     const t = TARGETS[next];
     const first = nodes.find((n) => n.id !== owner.id && t.kinds.includes(n.kind));
-    setPick(first && !t.newKind ? first.id : t.newKind ? NEW : (first?.id ?? NEW));
+    setPick(first?.id ?? NEW);
     setDraft(
       t.newKind ? { ...newDraft(t.newKind), label: `${kindWords[t.newKind]} under ${owner.label}` } : null,
     );

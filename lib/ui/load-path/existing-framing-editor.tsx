@@ -110,7 +110,7 @@ function ElementRow({
         <DraftForm
           initial={draftFromElement(element.label, element.element)}
           submitLabel="Save changes"
-          testID={`edit-${element.id}`}
+          testID="edit-element"
           onCancel={() => setEditing(false)}
           onSubmit={async (draft) => {
             await updateElement(element.id, {

@@ -44,10 +44,11 @@ const bearingField: FieldOf = (field) => (field.endsWith('.atFt') ? 'atFt' : 'on
 const elementField: FieldOf = () => 'element';
 
 /**
- * The job's members and existing framing as the engine's nodes, and its evaluation. An engine refusal (a
+ * The job's members and existing framing as the engine's nodes, and its evaluation (also frozen into a
+ * design request's snapshot). An engine refusal (a
  * cycle, a load off the member it lands on, an end the element does not have) is a 400 on `field`.
  */
-function evaluateJob(db: DbOrTx, orgId: string, job: Job, fieldOf: FieldOf): JobLoadPath {
+export function evaluateJob(db: DbOrTx, orgId: string, job: Job, fieldOf: FieldOf): JobLoadPath {
   const members = listMembersOfJob(db, orgId, job.id);
   const elements = listElements(db, orgId, job.id);
   const bearings = listBearings(db, orgId, job.id);
