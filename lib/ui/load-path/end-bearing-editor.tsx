@@ -153,7 +153,12 @@ function EndQuestion({
   const [through, setThrough] = useState<keyof typeof throughWords>('direct');
   const [joistRelation, setJoistRelation] = useState<'parallel' | 'across'>('across');
   const target = option ? TARGETS[option] : null;
-  const candidates = target ? nodes.filter((n) => n.id !== owner.id && target.kinds.includes(n.kind)) : [];
+  // In the order of the choice's kinds: an existing girder before a new member for "an existing girder".
+  const candidatesOf = (t: (typeof TARGETS)[Option]) =>
+    nodes
+      .filter((n) => n.id !== owner.id && t.kinds.includes(n.kind))
+      .sort((a, b) => t.kinds.indexOf(a.kind) - t.kinds.indexOf(b.kind));
+  const candidates = target ? candidatesOf(target) : [];
   const pickChoices: Choice<string>[] = [
     ...candidates.map((n) => ({
       value: n.id,
@@ -166,7 +171,7 @@ function EndQuestion({
   const choose = (next: Option) => {
     setOption(next);
     const t = TARGETS[next];
-    const first = nodes.find((n) => n.id !== owner.id && t.kinds.includes(n.kind));
+    const first = candidatesOf(t)[0];
     setPick(first?.id ?? NEW);
     setDraft(
       t.newKind ? { ...newDraft(t.newKind), label: `${kindWords[t.newKind]} under ${owner.label}` } : null,
