@@ -172,7 +172,7 @@ function EndQuestion({
     setOption(next);
     const t = TARGETS[next];
     const first = candidatesOf(t)[0];
-    setPick(first?.id ?? NEW);
+    setPick(next === 'beam' || !t.newKind ? (first?.id ?? NEW) : NEW);
     setDraft(
       t.newKind ? { ...newDraft(t.newKind), label: `${kindWords[t.newKind]} under ${owner.label}` } : null,
     );
