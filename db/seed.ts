@@ -1,6 +1,7 @@
 import { count } from 'drizzle-orm';
 import type { Db } from './client';
 import { newId } from './new-id';
+import { insertDemoChain, type RefreshLoadPath } from './seed-load-path';
 import { insertDemoMembers, type EvaluateMember } from './seed-members';
 import { jobs, memberships, organizations, priceBookSettings, priceItems, users } from './schema';
 import { DEMO_PRICES, DEMO_STALE_AFTER_DAYS } from './demo-prices';
@@ -97,13 +98,15 @@ const DEMO_FIRMS: DemoFirm[] = [
  * Adds the demo firms, people and jobs when the database has no users yet; otherwise does nothing.
  * `hashPassword` comes from the server's password module (the database layer does not import the server),
  * and so does `evaluateMember`, the members service's own check: with it the demo jobs get their demo
- * headers and beams (db/seed-members.ts), computed by the engine as a save would.
+ * headers and beams (db/seed-members.ts), computed by the engine as a save would; `refreshLoadPath`, the
+ * load path service's own, adds the demo chain (db/seed-load-path.ts) and each member's load path state.
  * Returns true when it added the demo data.
  */
 export async function insertDemoData(
   db: Db,
   hashPassword: (password: string) => Promise<string>,
   evaluateMember?: EvaluateMember,
+  refreshLoadPath?: RefreshLoadPath,
 ): Promise<boolean> {
   const [{ users: existing }] = db.select({ users: count() }).from(users).all();
   if (existing > 0) return false;
@@ -166,6 +169,9 @@ export async function insertDemoData(
           .values({ ...row, createdBy: userIds[0] })
           .run();
         if (evaluateMember) insertDemoMembers(tx, row, userIds[1] ?? userIds[0], evaluateMember);
+        // The demo chain (db/seed-load-path.ts) and every member's state on its job's load path.
+        if (evaluateMember && refreshLoadPath)
+          insertDemoChain(tx, row, userIds[1] ?? userIds[0], refreshLoadPath);
       });
     });
   });

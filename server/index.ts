@@ -5,6 +5,7 @@ import { openDatabase } from '@/db/client';
 import { migrateDatabase } from '@/db/migrate';
 import { insertDemoData } from '@/db/seed';
 import { devMailPageUrl } from './api/dev-mail/dev-mail.router';
+import { refreshLoadPath } from './api/load-path/load-path.service';
 import { evaluate } from './api/members/member-evaluation';
 import { createApp } from './app';
 import { loadEnv } from './env';
@@ -21,7 +22,12 @@ async function main(): Promise<void> {
 
   const database = openDatabase(env.DATABASE_URL);
   migrateDatabase(database.db);
-  if (env.SEED_DEMO && (await insertDemoData(database.db, hashPassword, evaluate))) {
+  if (
+    env.SEED_DEMO &&
+    (await insertDemoData(database.db, hashPassword, evaluate, (tx, job) => {
+      refreshLoadPath(tx, job.orgId, job, () => 'seed');
+    }))
+  ) {
     log('Demo firms, people, jobs and members added (password tributary-demo)');
   }
 

@@ -12,3 +12,4 @@ export * from './shoring-plans';
 export * from './price-book';
 export * from './idempotency-keys';
 export * from './job-engineer-items';
+export * from './load-path';

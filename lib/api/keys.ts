@@ -17,6 +17,8 @@ export const keys = {
   checklist: (orgId: string, jobId: string) => ['checklist', orgId, jobId] as const,
   jobProgress: (orgId: string) => ['job-progress', orgId] as const,
   shoring: (orgId: string, memberId: string) => ['shoring', orgId, memberId] as const,
+  /** A job's existing framing, bearings and their check (load-path.ts). */
+  loadPath: (orgId: string, jobId: string) => ['load-path', orgId, jobId] as const,
   priceBook: (orgId: string) => ['price-book', orgId] as const,
   memberBudget: (orgId: string, memberId: string) => ['member-budget', orgId, memberId] as const,
   jobBudget: (orgId: string, jobId: string) => ['job-budget', orgId, jobId] as const,
@@ -48,6 +50,7 @@ export function isFirmScopedKey(key: unknown): boolean {
       'checklist',
       'job-progress',
       'shoring',
+      'load-path',
       'sessions',
       'requests',
       'job-requests',

@@ -18,6 +18,7 @@ import { DeviceMark } from './offline/device-mark';
 import { RecomputeNotice } from './recompute-notice';
 import { checkNames } from './result/check-names';
 import { Text } from './text';
+import { TextLink } from './text-link';
 
 function MemberRow({ member, design }: { member: MemberListItem; design?: MemberDesign }) {
   const look = memberStateLook[member.summary.state];
@@ -97,6 +98,7 @@ export function JobMembersPanel({
       {members?.map((m) => (
         <MemberRow key={m.id} member={m} design={designs?.find((d) => d.memberId === m.id)} />
       ))}
+      <TextLink href={`/jobs/${job.id}/framing`} label="Existing framing (girders, posts, footings…)" />
       <View style={styles.actions}>
         <LinkButton
           label="Add a header"

@@ -11,4 +11,9 @@ export const memberStateLook: Record<MemberState, { word: string; icon: IconName
       icon: 'warning',
       tone: 'ink',
     },
+    'load-path-open': {
+      word: 'Load path open — say what each end bears on, down to a footing',
+      icon: 'warning',
+      tone: 'danger',
+    },
   };

@@ -13,6 +13,7 @@ const STATE_WORDS: Record<MemberState, string> = {
   passes: 'passes',
   fails: 'fails',
   'engineer-needed': 'needs an engineer',
+  'load-path-open': 'has an open load path',
 };
 
 /** What a job save did to its members, in words: a heading, a line per member whose state changed, a tail. */

@@ -15,6 +15,13 @@ import { invitationsRouter } from './invitations/invitations.router';
 import { createInvitationsService } from './invitations/invitations.service';
 import { jobsRouter } from './jobs/jobs.router';
 import { createJobsService } from './jobs/jobs.service';
+import {
+  elementsRouter,
+  jobElementsRouter,
+  jobLoadPathRouter,
+  memberEndsRouter,
+} from './load-path/load-path.router';
+import { createLoadPathService } from './load-path/load-path.service';
 import { meRouter } from './me/me.router';
 import { jobMembersRouter, membersRouter } from './members/members.router';
 import { createMembersService } from './members/members.service';
@@ -92,6 +99,11 @@ export function apiRouter(options: ApiOptions): Router {
   router.use('/jobs/:jobId/checklist', jobChecklistRouter(checklist));
   router.use('/job-progress', jobProgressRouter(checklist));
   router.use('/members/:memberId/shoring', memberShoringRouter({ db, shoring: createShoringService(db) }));
+  const loadPath = { db, loadPath: createLoadPathService(db) };
+  router.use('/jobs/:jobId/load-path', jobLoadPathRouter(loadPath));
+  router.use('/jobs/:jobId/elements', jobElementsRouter(loadPath));
+  router.use('/members/:memberId/ends', memberEndsRouter(loadPath));
+  router.use('/elements', elementsRouter(loadPath));
   router.use('/members', membersRouter(members));
   const requests = { db, requests: createRequestsService(options) };
   router.use('/jobs/:jobId/requests', jobRequestsRouter(requests));

@@ -43,14 +43,31 @@ export const memberPatchSchema = z
 export type MemberPatch = z.infer<typeof memberPatchSchema>;
 export type MemberPatchBody = z.input<typeof memberPatchSchema>;
 
-/** The member's state in words: fails its check; passes it but sits outside what code tables cover; passes. */
-export const memberStates = ['passes', 'fails', 'engineer-needed'] as const;
+/** The member's own check: fails it; passes it but sits outside what code tables cover; passes. */
+export const memberCheckStates = ['passes', 'fails', 'engineer-needed'] as const;
+/**
+ * The member's state in words: its own check, or "load path open" for a member that does not fail while its
+ * ends do not yet reach the ground through checked framing (DESIGN.md §6 "Load path": never "passes" then).
+ */
+export const memberStates = [...memberCheckStates, 'load-path-open'] as const;
 export const memberStateSchema = z.enum(memberStates);
 export type MemberState = z.infer<typeof memberStateSchema>;
+export type MemberCheckState = (typeof memberCheckStates)[number];
+
+/** The member's place on the job's load path, as the last change to the job's framing left it. */
+export const memberLoadPathSchema = z.object({
+  /** Every end reaches a confirmed footing or foundation wall through framing that passes. */
+  closed: z.boolean(),
+  /** Why not, each in words, naming the step. */
+  openReasons: z.array(z.string()),
+});
 
 /** What the job page lists without loading every result. */
 export const memberSummarySchema = z.object({
   state: memberStateSchema,
+  /** The member's own check, whatever its load path (absent in summaries saved before the load path). */
+  checkState: z.enum(memberCheckStates).optional(),
+  loadPath: memberLoadPathSchema.optional(),
   pass: z.boolean(),
   governingCheck: checkIdSchema,
   governingRatio: z.number(),

@@ -29,6 +29,8 @@ describe('migrations', () => {
       'job_checklist_items',
       'job_engineer_items',
       'jobs',
+      'load_path_bearings',
+      'load_path_elements',
       'mail_outbox',
       'member_budgets',
       'members',

@@ -3,7 +3,10 @@ import request from 'supertest';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { DEMO_PRICES } from '@/db/demo-prices';
 import { DEMO_PASSWORD, insertDemoData } from '@/db/seed';
+import { DEMO_CHAINS } from '@/db/seed-load-path';
 import { DEMO_MEMBERS, demoMemberInput } from '@/db/seed-members';
+import { refreshLoadPath } from '@/server/api/load-path/load-path.service';
+import { jobLoadPathSchema } from '@/shared/schemas/load-path-elements';
 import { jobs, members, users } from '@/db/schema';
 import { ENGINE_VERSION, checkMember, prescriptiveVerdict } from '@/lib/calc';
 import { evaluate } from '@/server/api/members/member-evaluation';
@@ -73,7 +76,9 @@ describe('demo data', () => {
 
 describe('demo members (an invented scenario)', () => {
   beforeEach(async () => {
-    await insertDemoData(server.db, hashPassword, evaluate);
+    await insertDemoData(server.db, hashPassword, evaluate, (tx, job) => {
+      refreshLoadPath(tx, job.orgId, job, () => 'seed');
+    });
   });
 
   const signIn = async () => {
@@ -96,13 +101,30 @@ describe('demo members (an invented scenario)', () => {
       );
       for (const row of rows) states[row.label] = row.summary.state;
     }
+    // No demo member's load path is closed, so none says "passes" (the failing one still fails).
     expect(states).toEqual({
-      'Kitchen pass-through header': 'passes',
-      'Dining-room beam': 'engineer-needed',
-      'Hall doorway header': 'passes',
+      'Kitchen pass-through header': 'load-path-open',
+      'Dining-room beam': 'load-path-open',
+      'Hall doorway header': 'load-path-open',
       'Linen closet header': 'fails',
-      'Family room beam': 'engineer-needed',
+      'Family room beam': 'load-path-open',
     });
+  });
+
+  it('the family-room job shows its demo chain, open only for want of the new pad’s confirmation', async () => {
+    const agent = await signIn();
+    const list = (await agent.get('/api/jobs').expect(200)).body.jobs.map((j: unknown) => jobSchema.parse(j));
+    const job = list.find((j: { name: string }) => j.name === 'Split-level family room wall');
+    const lp = jobLoadPathSchema.parse((await agent.get(`/api/jobs/${job?.id}/load-path`).expect(200)).body);
+    expect(lp.elements.map((e) => e.label)).toEqual(
+      DEMO_CHAINS[job?.name ?? ''].elements.map((e) => e.label),
+    );
+    const beam = lp.result.elements.find((e) => e.label === 'Family room beam');
+    expect(beam?.checkState).toBe('passes');
+    expect(beam?.state).toBe('load-path-open');
+    expect(beam?.openReasons).toEqual(['Right end → Post by the stair: its own load path is open.']);
+    const pad = lp.result.elements.find((e) => e.label === 'New pad in the basement');
+    expect(pad?.openReasons).toEqual(['Confirm the new pad: it is to be poured as sized (and inspected).']);
   });
 
   it("stores the engine's own result of each stored input, as a save would, with the job's load context", async () => {

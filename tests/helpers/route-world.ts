@@ -143,6 +143,8 @@ export async function createRouteWorld(server: TestServer) {
     // Checklist items are fixed per job: any key names one.
     if (name === 'itemKey') return 'permit';
     if (name === 'engineerItemId') return makeEngineerItem(owner, made.jobId);
+    // An end of the member or element named before it: a member's left end, an element's (a post's) bottom.
+    if (name === 'end') return made.memberId ? 'left' : 'bottom';
     const stem = name.match(/^(\w+)Id$/)?.[1];
     const create = API_ROUTES.find((r) => r.method === 'post' && stem && r.path.endsWith(`/${stem}s`));
     if (!create)

@@ -12,6 +12,11 @@ import { shortlistInputSchema } from '@/shared/schemas/calc/shortlist';
 import { spanTableInputSchema } from '@/shared/schemas/calc/span-table';
 import { jobCreateSchema, jobPatchSchema } from '@/shared/schemas/jobs';
 import { memberCreateSchema, memberPatchSchema } from '@/shared/schemas/members';
+import {
+  bearingSetSchema,
+  elementCreateSchema,
+  elementPatchSchema,
+} from '@/shared/schemas/load-path-elements';
 import { acceptInvitationSchema, createInvitationSchema } from '@/shared/schemas/orgs';
 import { requestComposeSchema, requestPatchSchema } from '@/shared/schemas/requests/compose';
 import { engineerReplySchema } from '@/shared/schemas/requests/reply';
@@ -66,6 +71,23 @@ export const SAMPLE_BODIES = new Map<z.ZodType, () => unknown>([
   [jobPatchSchema, () => ({ notes: `Patched ${unique()}` })],
   [memberCreateSchema, () => ({ label: `Sample member ${unique()}`, input: SAMPLE_HEADER })],
   [memberPatchSchema, () => ({ wall: `Wall ${unique()}` })],
+  [
+    elementCreateSchema,
+    () => ({
+      label: `Sample post ${unique()}`,
+      element: { kind: 'post', materialId: 'sawn-douglas-fir-larch-no2', sizeId: '6x6', heightFt: 7 },
+    }),
+  ],
+  [elementPatchSchema, () => ({ label: `Renamed element ${unique()}` })],
+  [
+    bearingSetSchema,
+    () => ({
+      onto: {
+        label: `Sample pad ${unique()}`,
+        element: { kind: 'footing', data: { footing: 'new-pad', confirmed: true } },
+      },
+    }),
+  ],
   [memberCheckRequestSchema, () => ({ ...SAMPLE_HEADER, diagrams: false })],
   [
     shortlistInputSchema,

@@ -15,3 +15,4 @@ export {
   type GroundElementCheck,
 } from './check-ground-element';
 export { closeChains } from './close-chains';
+export { chainBelow, type ChainStep } from './chain-below';

@@ -9,6 +9,7 @@ import {
 import type { JobLoadContextField, MemberRecompute } from '@/shared/schemas/job-update';
 import type { Job } from '@/shared/schemas/jobs';
 import type { Member } from '@/shared/schemas/members';
+import { refreshLoadPath } from '@/server/api/load-path/load-path.service';
 import { evaluate } from './member-evaluation';
 import { listMembersOfJob, updateMember } from './members.repository';
 
@@ -99,5 +100,7 @@ export function recomputeJobMembers(tx: DbOrTx, actor: Actor, before: Job, after
       after: fields.summary.state,
     });
   }
-  return out;
+  // The load path combines its loads by the job's edition: check it again whatever the members took.
+  const { summaries } = refreshLoadPath(tx, actor.orgId, after, () => 'loadStandard');
+  return out.map((row) => ({ ...row, after: summaries.get(row.memberId)?.state ?? row.after }));
 }

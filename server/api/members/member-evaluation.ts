@@ -9,7 +9,7 @@ import { AppError } from '@/server/app-error';
 import { runInPool } from '@/server/services/calc-pool';
 import type { MemberCheckInput } from '@/shared/schemas/calc/member';
 import type { Job } from '@/shared/schemas/jobs';
-import type { MemberState, MemberSummary } from '@/shared/schemas/members';
+import type { MemberCheckState, MemberSummary } from '@/shared/schemas/members';
 import type { MemberFields } from './members.repository';
 
 /** Engine input errors name a field of the check input; in a member body that input sits under `input`. */
@@ -19,7 +19,7 @@ function asFieldError(error: unknown): unknown {
 }
 
 /** A failing check comes first: "needs an engineer" is only said of a member that passes. */
-function memberState(pass: boolean, engineerNeeded: boolean): MemberState {
+function memberState(pass: boolean, engineerNeeded: boolean): MemberCheckState {
   if (!pass) return 'fails';
   return engineerNeeded ? 'engineer-needed' : 'passes';
 }
@@ -61,8 +61,10 @@ export function evaluateMember(given: MemberToEvaluate): MemberFields {
   const prescriptive = input.kind === 'header' ? prescriptiveVerdict(facts) : null;
   const engineerNeeded = prescriptive ? prescriptive.verdict === 'engineer-needed' : true;
   const state = memberState(result.pass, engineerNeeded);
+  // The state is the member's own until the job's load path is checked with it (load-path.service).
   const summary: MemberSummary = {
     state,
+    checkState: state,
     pass: result.pass,
     governingCheck: result.governing.check,
     governingRatio: result.governing.ratio,

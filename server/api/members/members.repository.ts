@@ -3,7 +3,7 @@ import type { DbOrTx } from '@/db/client';
 import { newId } from '@/db/new-id';
 import { preparedPerDb } from '@/db/prepared';
 import { members } from '@/db/schema';
-import type { Member, MemberListItem } from '@/shared/schemas/members';
+import type { Member, MemberListItem, MemberSummary } from '@/shared/schemas/members';
 
 /** What a save writes besides the ids, the people and the dates: the member and what the engine made of it. */
 export type MemberFields = Pick<
@@ -118,4 +118,12 @@ export function listMembersOfJob(db: DbOrTx, orgId: string, jobId: string): Memb
     .where(and(eq(members.jobId, jobId), eq(members.orgId, orgId)))
     .orderBy(asc(members.createdAt), asc(sql`${members}.rowid`))
     .all();
+}
+
+/** Writes a member's summary alone (its state on the job's load path changed). */
+export function setMemberSummary(db: DbOrTx, orgId: string, memberId: string, summary: MemberSummary): void {
+  db.update(members)
+    .set({ summary })
+    .where(and(eq(members.id, memberId), eq(members.orgId, orgId)))
+    .run();
 }

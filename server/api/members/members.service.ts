@@ -16,6 +16,8 @@ import {
   listMembers,
   updateMember,
 } from './members.repository';
+import { deleteBearingsOf } from '@/server/api/load-path/load-path.repository';
+import { refreshLoadPath } from '@/server/api/load-path/load-path.service';
 
 /** The member's job, which must still be open for its members to change. */
 function openJob(db: DbOrTx, orgId: string, jobId: string): Job {
@@ -40,6 +42,15 @@ const sameCheck = (a: MemberToEvaluate, b: MemberToEvaluate) =>
  */
 const fieldsFor = (now: MemberToEvaluate, from: MemberToEvaluate, computed: MemberFields) =>
   sameCheck(now, from) ? computed : evaluateHere(now);
+
+/** A member's input as the load path names it: a refusal there is about the member's input. */
+const inputField = () => 'input';
+
+/** The member with its state on the job's load path, checked again with this change. */
+function onLoadPath(tx: DbOrTx, orgId: string, job: Job, member: Member): Member {
+  const summary = refreshLoadPath(tx, orgId, job, inputField).summaries.get(member.id);
+  return summary ? { ...member, summary } : member;
+}
 
 /**
  * Members of the actor's firm's jobs. Every save recomputes with lib/calc and stores the server's own result;
@@ -68,7 +79,8 @@ export function createMembersService(db: Db) {
       const from = toCheck(openJob(db, actor.orgId, jobId));
       const computed = await evaluateInPool(from);
       return db.transaction((tx) => {
-        const fields = fieldsFor(toCheck(openJob(tx, actor.orgId, jobId)), from, computed);
+        const job = openJob(tx, actor.orgId, jobId);
+        const fields = fieldsFor(toCheck(job), from, computed);
         if (body.id) {
           const found = findMemberInAnyFirm(tx, body.id);
           const asSent = { jobId, label: fields.label, wall: fields.wall, input: fields.input };
@@ -86,7 +98,7 @@ export function createMembersService(db: Db) {
           subject: member.id,
           detail: { jobId, kind: member.kind, label: member.label },
         });
-        return { record: member, replayed: false };
+        return { record: onLoadPath(tx, actor.orgId, job, member), replayed: false };
       });
     },
 
@@ -102,12 +114,12 @@ export function createMembersService(db: Db) {
         const job = openJob(tx, actor.orgId, saved.jobId);
         const label = patch.label ?? saved.label;
         const wall = patch.wall ?? saved.wall;
-        return { saved, toCheck: memberToEvaluate(job, label, wall, patch.input ?? saved.input) };
+        return { saved, job, toCheck: memberToEvaluate(job, label, wall, patch.input ?? saved.input) };
       };
       const from = read(db).toCheck;
       const computed = await evaluateInPool(from);
       return db.transaction((tx) => {
-        const { saved, toCheck } = read(tx);
+        const { saved, job, toCheck } = read(tx);
         const fields = fieldsFor(toCheck, from, computed);
         const member = updateMember(tx, actor.orgId, saved, actor.userId, fields);
         if (!member) throw notFound('Member');
@@ -116,7 +128,7 @@ export function createMembersService(db: Db) {
           subject: memberId,
           detail: { jobId: saved.jobId, fields: Object.keys(changes) },
         });
-        return member;
+        return onLoadPath(tx, actor.orgId, job, member);
       });
     },
 
@@ -124,8 +136,10 @@ export function createMembersService(db: Db) {
       db.transaction((tx) => {
         const saved = findMember(tx, actor.orgId, memberId);
         if (!saved) throw notFound('Member');
-        openJob(tx, actor.orgId, saved.jobId);
+        const job = openJob(tx, actor.orgId, saved.jobId);
+        deleteBearingsOf(tx, actor.orgId, memberId);
         deleteMember(tx, actor.orgId, memberId);
+        refreshLoadPath(tx, actor.orgId, job, inputField);
         recordAudit(tx, actor, {
           action: 'member.delete',
           subject: memberId,

@@ -1,12 +1,52 @@
 import type { DbOrTx } from '@/db/client';
-import { ENGINE_VERSION } from '@/lib/calc';
+import { ENGINE_VERSION, chainBelow } from '@/lib/calc';
+import { evaluateJob } from '@/server/api/load-path/load-path.service';
+import type { LoadPathResult } from '@/shared/schemas/calc/load-path';
 import { AppError, notFound } from '@/server/app-error';
 import { findJob } from '@/server/api/jobs/jobs.repository';
 import { findUser } from '@/server/api/me/me.repository';
 import { findMember } from '@/server/api/members/members.repository';
 import { findOrganization } from '@/server/api/orgs/orgs.repository';
-import type { RequestSnapshot, SnapshotMember } from '@/shared/schemas/requests/snapshot';
+import type {
+  RequestSnapshot,
+  SnapshotLoadPathStep,
+  SnapshotMember,
+} from '@/shared/schemas/requests/snapshot';
 import { listAttachments, type RequestRow } from './requests.repository';
+
+/** The chain under a member as the package carries it: every step's load, check, reasons and assumptions. */
+function loadPathSteps(result: LoadPathResult, memberId: string): SnapshotLoadPathStep[] {
+  const labelOf = new Map(result.elements.map((e) => [e.id, e.label]));
+  return chainBelow(result, memberId).map(({ element: e, depth }) => ({
+    id: e.id,
+    label: e.label,
+    kind: e.kind,
+    depth,
+    state: e.state,
+    closed: e.closed,
+    incoming: e.incoming.map((i) => ({ fromLabel: i.fromLabel, atFt: i.atFt, load: i.load })),
+    governing: e.memberResult
+      ? {
+          check: e.memberResult.governing.check,
+          ratio: e.memberResult.governing.ratio,
+          combination: e.memberResult.governing.combination ?? '',
+        }
+      : null,
+    checks: e.checks,
+    ends: e.ends.map((end) => ({
+      end: end.end,
+      ontoLabel: end.ontoId ? (labelOf.get(end.ontoId) ?? null) : null,
+      load: end.load,
+      governingLb: end.governingLb,
+      governingCombination: end.governingCombination,
+    })),
+    pad: e.pad,
+    openReasons: e.openReasons,
+    engineerReasons: e.engineerReasons,
+    assumptions: e.assumptions,
+    warnings: e.warnings,
+  }));
+}
 
 /**
  * Freezes what version `version` of the request sends: the job and its members as they are now (inputs
@@ -21,6 +61,7 @@ export function buildSnapshot(tx: DbOrTx, row: RequestRow, sentBy: string, versi
   if (!draft.jurisdiction.state) fields['jurisdiction.state'] = ['Pick the state the house is in'];
   const job = findJob(tx, row.orgId, row.jobId);
   if (!job) throw notFound('Job');
+  const loadPath = evaluateJob(tx, row.orgId, job, () => 'memberIds').result;
   const members: SnapshotMember[] = [];
   draft.memberIds.forEach((memberId, index) => {
     const member = findMember(tx, row.orgId, memberId);
@@ -38,6 +79,7 @@ export function buildSnapshot(tx: DbOrTx, row: RequestRow, sentBy: string, versi
       result: member.result,
       prescriptive: member.prescriptive,
       engineVersion: member.engineVersion,
+      loadPath: loadPathSteps(loadPath, member.id),
     });
   });
   if (Object.keys(fields).length > 0) {

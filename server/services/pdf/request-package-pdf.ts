@@ -158,6 +158,58 @@ function conditions(w: PdfWriter, pkg: RequestPackage): void {
   }
 }
 
+const lbText = (lb: number) => `${formatNumber(Math.round(lb), 0)} lb`;
+const totalLb = (load: Record<string, number | undefined>) =>
+  Object.values(load).reduce<number>((sum, v) => sum + (v ?? 0), 0);
+
+/** The member's chain to the ground: each step's load arriving, its check and state, ends, reasons, flags. */
+function loadPath(w: PdfWriter, m: SnapshotMember): void {
+  if (!m.loadPath) return;
+  w.heading('Load path to the ground', 11);
+  const top = m.loadPath[0];
+  w.text(
+    top?.closed
+      ? 'Closed: every end reaches a confirmed footing or foundation wall through framing that passes.'
+      : 'Open: the load does not yet reach the ground through checked framing (reasons below).',
+    { bold: true },
+  );
+  w.table(
+    ['Level', 'Step', 'Load arriving', 'Check', 'State', 'Ends'],
+    m.loadPath.map((step) => [
+      String(step.depth),
+      `${step.label} (${step.kind})`,
+      step.incoming.length === 0
+        ? 'its own loads'
+        : step.incoming
+            .map(
+              (i) =>
+                `${lbText(totalLb(i.load))} from ${i.fromLabel}${i.atFt ? ` at ${formatNumber(i.atFt, 2)} ft` : ''}`,
+            )
+            .join('; '),
+      step.governing
+        ? `${step.governing.check} ${formatNumber(step.governing.ratio, 2)} (${step.governing.combination})`
+        : step.checks.map((c) => `${c.label} ${formatNumber(c.ratio, 2)} (${c.combination})`).join('; ') ||
+          (step.pad ? `pad ${step.pad.sideIn} in square` : '—'),
+      step.state.replace(/-/g, ' '),
+      step.ends
+        .map(
+          (e) =>
+            `${e.end} → ${e.ontoLabel ?? 'nothing yet'}: ${lbText(e.governingLb)} (${e.governingCombination})`,
+        )
+        .join('; ') || 'ground',
+    ]),
+    [0.06, 0.18, 0.22, 0.2, 0.1, 0.24],
+    7,
+  );
+  const notes = m.loadPath.flatMap((step) => [
+    ...step.openReasons.map((r) => `${step.label} — open: ${r}`),
+    ...step.engineerReasons.map((r) => `${step.label} — engineer required: ${r}`),
+    ...step.assumptions.map((r) => `${step.label} — assumed: ${r}`),
+    ...step.warnings.map((r) => `${step.label} — warning: ${r}`),
+  ]);
+  for (const note of notes) w.text(`• ${note}`, { size: 8 });
+}
+
 function member(w: PdfWriter, m: SnapshotMember): void {
   w.newPage();
   w.heading(`${m.label} (${m.kind}${m.wall ? `, ${m.wall}` : ''})`, 15);
@@ -202,6 +254,7 @@ function member(w: PdfWriter, m: SnapshotMember): void {
     [0.22, 0.16, 0.16, 0.1, 0.1, 0.26],
     7.5,
   );
+  loadPath(w, m);
   w.heading('Diagrams', 11);
   drawMemberDiagrams(w, m.result);
   w.heading('Sketch from the inputs', 11);

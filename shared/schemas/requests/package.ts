@@ -9,7 +9,8 @@ import { requestStateSchema } from './workflow';
  * docs/design-request-package.md describes it. A change that breaks a reader raises `formatVersion`.
  */
 export const REQUEST_PACKAGE_FORMAT = 'tributary.design-request';
-export const REQUEST_PACKAGE_VERSION = 1;
+/** 2: each member carries its load path to the ground (`request.members[].loadPath`). */
+export const REQUEST_PACKAGE_VERSION = 2;
 
 export const requestPackageSchema = z
   .object({
@@ -26,7 +27,7 @@ export const requestPackageSchema = z
     /** The engineer's latest structured reply and the version it answers, when there is one. */
     reply: z.object({ version: z.number().int(), reply: engineerReplySchema }).nullable(),
   })
-  .meta({ title: 'Tributary design request package', id: 'tributary.design-request.v1' });
+  .meta({ title: 'Tributary design request package', id: 'tributary.design-request.v2' });
 export type RequestPackage = z.infer<typeof requestPackageSchema>;
 
 /** The JSON Schema of the package, generated from the zod schema (draft 2020-12). */

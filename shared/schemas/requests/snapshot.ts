@@ -1,5 +1,12 @@
 import { z } from 'zod';
 import {
+  elementCheckSchema,
+  loadPathElementKindSchema,
+  loadPathEndSchema,
+  loadPathStateSchema,
+  typedLoadSchema,
+} from '@/shared/schemas/calc/load-path';
+import {
   memberCheckInputSchema,
   memberCheckResultSchema,
   prescriptiveResultSchema,
@@ -44,6 +51,39 @@ export const snapshotFileSchema = z.object({
 });
 export type SnapshotFile = z.infer<typeof snapshotFileSchema>;
 
+/**
+ * One step of a member's load path to the ground as it was at send (DESIGN.md §6 "Load path"): the element,
+ * what lands on it, its check, where each end goes, and every reason and assumption. Loads in lb by type.
+ */
+export const snapshotLoadPathStepSchema = z.object({
+  id: z.string(),
+  label: z.string(),
+  kind: loadPathElementKindSchema,
+  /** 0 for the member, one more per step down. */
+  depth: z.number().int(),
+  state: loadPathStateSchema,
+  closed: z.boolean(),
+  incoming: z.array(z.object({ fromLabel: z.string(), atFt: z.number().optional(), load: typedLoadSchema })),
+  /** A beam's governing check (the member engine's); posts, walls and footings list theirs in `checks`. */
+  governing: z.object({ check: z.string(), ratio: z.number(), combination: z.string() }).nullable(),
+  checks: z.array(elementCheckSchema),
+  ends: z.array(
+    z.object({
+      end: loadPathEndSchema,
+      ontoLabel: z.string().nullable(),
+      load: typedLoadSchema,
+      governingLb: z.number(),
+      governingCombination: z.string(),
+    }),
+  ),
+  pad: z.object({ sideIn: z.number(), soilBearingPsf: z.number(), loadLb: z.number() }).optional(),
+  openReasons: z.array(z.string()),
+  engineerReasons: z.array(z.string()),
+  assumptions: z.array(z.string()),
+  warnings: z.array(z.string()),
+});
+export type SnapshotLoadPathStep = z.infer<typeof snapshotLoadPathStepSchema>;
+
 /** A member as it was when the version was sent: its inputs with their flags and the server's result. */
 export const snapshotMemberSchema = z.object({
   id: z.string(),
@@ -55,6 +95,8 @@ export const snapshotMemberSchema = z.object({
   result: memberCheckResultSchema,
   prescriptive: prescriptiveResultSchema.nullable(),
   engineVersion: z.string(),
+  /** The chain from the member down to the ground, from the top (absent in versions sent before format 2). */
+  loadPath: z.array(snapshotLoadPathStepSchema).optional(),
 });
 export type SnapshotMember = z.infer<typeof snapshotMemberSchema>;
 

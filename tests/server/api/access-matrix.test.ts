@@ -78,6 +78,7 @@ const AREAS: [area: string, rule: Rule][] = [
   ['/api/orgs/current', { kind: 'firm', roles: ['owner'] }],
   ['/api/jobs', { kind: 'firm', roles: CONTRACTING }],
   ['/api/members', { kind: 'firm', roles: CONTRACTING }],
+  ['/api/elements', { kind: 'firm', roles: CONTRACTING }],
   ['/api/screens', { kind: 'firm', roles: CONTRACTING }],
   ['/api/job-progress', { kind: 'firm', roles: CONTRACTING }],
   ['/api/dev/mail', { kind: 'dev-mail-key' }],

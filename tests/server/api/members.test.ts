@@ -177,8 +177,14 @@ describe('members: the server recomputes on every save', () => {
     expect(created.prescriptive).toEqual(
       asJson(prescriptiveVerdict({ member: created.input, buildingWidthFt: 28, groundSnowPsf: 25 })),
     );
+    // Passes its own check; nothing yet says what its ends bear on, so its state is "load path open".
     expect(created.summary).toEqual({
-      state: 'passes',
+      state: 'load-path-open',
+      checkState: 'passes',
+      loadPath: {
+        closed: false,
+        openReasons: ['Left end: say what it bears on.', 'Right end: say what it bears on.'],
+      },
       pass: true,
       governingCheck: created.result.governing.check,
       governingRatio: created.result.governing.ratio,
@@ -228,7 +234,8 @@ describe('members: the server recomputes on every save', () => {
     const created = await create(beam);
     expect(created.prescriptive).toBeNull();
     expect(created.summary.pass).toBe(true);
-    expect(created.summary.state).toBe('engineer-needed');
+    expect(created.summary.checkState).toBe('engineer-needed');
+    expect(created.summary.state).toBe('load-path-open');
     expect(created.summary.engineerReasons).toEqual([
       'it is a beam replacing a wall, not a header over an opening',
       'LVL 2.0E (generic) is not sawn lumber (the tables cover sawn 2x headers)',
@@ -239,7 +246,7 @@ describe('members: the server recomputes on every save', () => {
   it('a passing header outside the header tables (a point load) needs an engineer', async () => {
     const post = { kind: 'point', pointKind: 'post-above', atFt: 3, deadLb: 200, liveLb: 300 } as const;
     const created = await create(withInput(header, { sources: [...header.input.sources, post] }));
-    expect(created.summary).toMatchObject({ state: 'engineer-needed', pass: true });
+    expect(created.summary).toMatchObject({ checkState: 'engineer-needed', pass: true });
     expect(created.prescriptive?.verdict).toBe('engineer-needed');
     expect(created.summary.engineerReasons).toEqual(created.prescriptive?.reasons);
     expect(created.summary.engineerReasons).toContain(
@@ -251,7 +258,7 @@ describe('members: the server recomputes on every save', () => {
     const unknownWidth = (await owner.post('/api/jobs').send({ name: 'Width not known' }).expect(201)).body
       .id;
     const created = await create(header, unknownWidth);
-    expect(created.summary.state).toBe('engineer-needed');
+    expect(created.summary.checkState).toBe('engineer-needed');
     expect(created.summary.engineerReasons).toEqual(['the building width is not known']);
   });
 

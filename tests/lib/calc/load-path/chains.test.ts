@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { CalcInputError } from '@/lib/calc/types';
-import { evaluateLoadPath } from '@/lib/calc/load-path';
+import { chainBelow, evaluateLoadPath } from '@/lib/calc/load-path';
 import { getSize } from '@/lib/calc/materials';
 import type { LoadPathNode } from '@/shared/schemas/calc/load-path';
 import { expectApprox } from '@/tests/helpers/approx';
@@ -243,5 +243,20 @@ describe('refused chains', () => {
     expect(bad([{ end: 'bottom', ontoId: 'g' }])).toThrow(
       expect.objectContaining({ field: 'p.bearings.bottom.atFt' }),
     );
+  });
+});
+
+describe('chainBelow: the chain under one member, from the top down', () => {
+  it('follows every end to the ground and gives each step its depth below the member', () => {
+    const result = evaluateLoadPath({ edition: 'ASCE 7-16', nodes: chain() });
+    expect(chainBelow(result, 'post').map((s) => [s.element.id, s.depth])).toEqual([
+      ['post', 0],
+      ['girder', 1],
+      ['fw', 2],
+      ['post2', 2],
+      ['pad', 3],
+    ]);
+    expect(chainBelow(result, 'beam')).toHaveLength(7);
+    expect(chainBelow(result, 'nobody')).toEqual([]);
   });
 });

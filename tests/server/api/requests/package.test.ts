@@ -145,7 +145,11 @@ describe('the JSON package', () => {
     const id = await sentWithPhotos();
     const res = await world.engineer.agent.get(`/api/requests/${id}/package.json`).expect(200);
     const parsed = requestPackageSchema.parse(res.body);
-    expect(parsed).toMatchObject({ format: 'tributary.design-request', formatVersion: 1, state: 'sent' });
+    expect(parsed).toMatchObject({ format: 'tributary.design-request', formatVersion: 2, state: 'sent' });
+    // Format 2: each member carries its chain to the ground; nothing says what its ends bear on yet.
+    const chain = parsed.request.members[0].loadPath;
+    expect(chain?.[0]).toMatchObject({ depth: 0, state: 'load-path-open', closed: false });
+    expect(chain?.[0].openReasons).toContain('Left end: say what it bears on.');
     expect(parsed.request.files.map((f) => f.place)).toEqual([
       'attic-over-wall',
       'grade-stamp',
@@ -156,7 +160,7 @@ describe('the JSON package', () => {
   });
 
   it('reading back refuses what is not a package, naming the problems', () => {
-    expect(readRequestPackage({ format: 'tributary.design-request', formatVersion: 2 })).toMatchObject({
+    expect(readRequestPackage({ format: 'tributary.design-request', formatVersion: 99 })).toMatchObject({
       ok: false,
       problems: expect.arrayContaining([
         expect.stringMatching(/^formatVersion: /),

@@ -38,6 +38,10 @@ export default function MemberPage() {
   return (
     <View style={styles.page}>
       <View style={styles.links}>
+        <TextLink
+          href={`/jobs/${jobId}/load-path/${memberId}`}
+          label={`Load path to the ground: ${member.data.summary.loadPath?.closed ? 'closed' : 'open — say what each end bears on'}`}
+        />
         <TextLink href={`/jobs/${jobId}/budget/${memberId}`} label="Budget for this member" />
         <DeviceMark recordId={memberId} />
       </View>

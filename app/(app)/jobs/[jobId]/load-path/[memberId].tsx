@@ -1,0 +1,23 @@
+import { useLocalSearchParams } from 'expo-router';
+import { useJob } from '@/lib/hooks/use-job';
+import { useMember } from '@/lib/hooks/use-member';
+import { ErrorView } from '@/lib/ui/error-view';
+import { MemberLoadPath } from '@/lib/ui/load-path/member-load-path';
+import { LoadingView } from '@/lib/ui/loading-view';
+import { Screen } from '@/lib/ui/screen';
+import { TextLink } from '@/lib/ui/text-link';
+
+export default function MemberLoadPathPage() {
+  const { jobId, memberId } = useLocalSearchParams<{ jobId: string; memberId: string }>();
+  const job = useJob(jobId);
+  const member = useMember(memberId);
+  const error = job.error ?? member.error;
+  if (error) return <ErrorView error={error} onRetry={() => void member.mutate()} />;
+  if (!job.data || !member.data) return <LoadingView />;
+  return (
+    <Screen title={`Load path: ${member.data.label}`}>
+      <TextLink href={`/jobs/${jobId}/members/${memberId}`} label={`Back to ${member.data.label}`} />
+      <MemberLoadPath job={job.data} memberId={memberId} />
+    </Screen>
+  );
+}
