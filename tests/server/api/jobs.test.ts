@@ -96,6 +96,7 @@ describe('jobs', () => {
       yearBuilt: null,
       updatedAt: res.body.updatedAt,
       recomputed: [],
+      version: created.version + 1,
     });
     expect(res.body.updatedAt >= created.updatedAt).toBe(true);
     const empty = await owner.patch(`/api/jobs/${created.id}`).send({}).expect(400);
