@@ -10,6 +10,7 @@ const job = jobSchema.parse({
   createdAt: '2026-01-01T00:00:00.000Z',
   updatedAt: '2026-01-01T00:00:00.000Z',
   archivedAt: null,
+  version: 1,
 });
 const seen = <V extends string>(value: V) => ({ value, basis: 'seen' as const });
 
