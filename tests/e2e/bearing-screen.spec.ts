@@ -224,7 +224,16 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
           .getByTestId('caution-note')
           .getByText(/shoring itself may need/)
           .waitFor();
-        await page.getByTestId('shoring-wall-A').scrollIntoViewIfNeeded();
+        // The sketch settles once the saved plan replaces the device's; scroll to it once it holds still.
+        const wall = page.getByTestId('shoring-wall-A');
+        await expect
+          .poll(() =>
+            wall.scrollIntoViewIfNeeded({ timeout: 2000 }).then(
+              () => true,
+              () => false,
+            ),
+          )
+          .toBe(true);
         await shot(page, `${name}-shoring`);
       } finally {
         await close();
@@ -272,6 +281,11 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         const checklist = page.getByTestId('job-checklist');
         await checklist.getByText(/Raised: Built in 1957/).waitFor();
         await page.getByTestId('checklist-permit-state-done').click();
+        // One tap settled before the next: two taps in the same instant can lose the first (named in the notes).
+        await page
+          .getByTestId('checklist-permit')
+          .getByText(/Set by/)
+          .waitFor();
         await page.getByTestId('checklist-utilities-gas-state-not-needed').click();
         await page
           .getByTestId('checklist-progress')

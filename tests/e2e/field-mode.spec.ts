@@ -74,7 +74,7 @@ describe('field mode (phone)', () => {
       expect(made.status()).toBe(201);
       await page.reload();
       await page.getByTestId('new-request').click();
-      await page.getByRole('button', { name: /Hall header \(field\)/ }).click();
+      await page.getByRole('checkbox', { name: /Hall header \(field\)/ }).click();
       await page.getByTestId('compose-engineerEmail').fill(`field-engineer-${Date.now()}@example.test`);
       await page.getByTestId('compose-state').click();
       await page.getByTestId('compose-state-PA').click();

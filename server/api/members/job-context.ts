@@ -96,11 +96,12 @@ export function recomputeJobMembers(tx: DbOrTx, actor: Actor, before: Job, after
       label: member.label,
       kind: member.kind,
       fields: taken.fields,
-      before: member.summary.state,
-      after: fields.summary.state,
+      // The member's own check, before and after: the load path's state is on the job page beside it.
+      before: member.summary.checkState ?? member.summary.state,
+      after: fields.summary.checkState ?? fields.summary.state,
     });
   }
   // The load path combines its loads by the job's edition: check it again whatever the members took.
-  const { summaries } = refreshLoadPath(tx, actor.orgId, after, () => 'loadStandard');
-  return out.map((row) => ({ ...row, after: summaries.get(row.memberId)?.state ?? row.after }));
+  refreshLoadPath(tx, actor.orgId, after, () => 'loadStandard');
+  return out;
 }
