@@ -90,13 +90,14 @@ describe('a job PATCH that changes what members take from the job', () => {
 
     const res = await patchJob({ groundSnowPsf: 80, groundSnowSource: 'Town building department letter' });
     expect(res.groundSnowPsf).toBe(80);
+    // The notice names each member's own check before and after; its load-path state shows on the job page.
     expect(res.recomputed).toEqual([
       {
         memberId: weak.id,
         label: 'Kitchen doorway',
         kind: 'header',
         fields: ['groundSnowPsf'],
-        before: 'load-path-open',
+        before: 'passes',
         after: 'fails',
       },
       {
@@ -104,8 +105,8 @@ describe('a job PATCH that changes what members take from the job', () => {
         label: 'Hall opening',
         kind: 'header',
         fields: ['groundSnowPsf'],
-        before: 'load-path-open',
-        after: 'load-path-open',
+        before: 'passes',
+        after: 'engineer-needed',
       },
     ]);
 
