@@ -6,6 +6,8 @@ export const capturedMailSchema = z.object({
   to: z.string(),
   subject: z.string(),
   text: z.string(),
+  /** The HTML part as it arrived, when the mail had one. */
+  html: z.string().nullable(),
   createdAt: z.string(),
 });
 export type CapturedMail = z.infer<typeof capturedMailSchema>;

@@ -2,16 +2,29 @@ import request from 'supertest';
 import { SAMPLE_HEADER, SAMPLE_PNG } from './sample-bodies';
 import { signedUpAgent, type Agent, type TestServer } from './server';
 
-/** A contracting firm with a job and one member, and an engineer with a confirmed account of their own. */
-export async function requestWorld(server: TestServer) {
-  const firm = await signedUpAgent(server.app, { firmName: 'Sample Remodeling' });
+/**
+ * A contracting firm with a job and one member, and an engineer with a confirmed account of their own;
+ * `names` gives the contractor and the job other names.
+ */
+export async function requestWorld(
+  server: TestServer,
+  names: { contractorName?: string; jobName?: string } = {},
+) {
+  const firm = await signedUpAgent(server.app, {
+    firmName: 'Sample Remodeling',
+    ...(names.contractorName ? { name: names.contractorName } : {}),
+  });
   const engineer = await signedUpAgent(server.app, {
     firmKind: 'engineering',
     firmName: 'Sample Structural',
   });
   const job = await firm.agent
     .post('/api/jobs')
-    .send({ name: 'Kitchen opening (demo)', groundSnowPsf: 30, groundSnowSource: 'County table (demo)' })
+    .send({
+      name: names.jobName ?? 'Kitchen opening (demo)',
+      groundSnowPsf: 30,
+      groundSnowSource: 'County table (demo)',
+    })
     .expect(201);
   const member = await firm.agent
     .post(`/api/jobs/${job.body.id}/members`)

@@ -11,6 +11,7 @@ export function listCapturedMail(db: DbOrTx, limit: number): CapturedMail[] {
       to: mailOutbox.to,
       subject: mailOutbox.subject,
       text: mailOutbox.text,
+      html: mailOutbox.html,
       createdAt: mailOutbox.createdAt,
     })
     .from(mailOutbox)

@@ -6,7 +6,8 @@ export interface OutgoingMail {
   to: string;
   subject: string;
   text: string;
-  html?: string;
+  /** Every mail has an HTML part beside the text, made by `htmlBody` (html-body.ts). */
+  html: string;
 }
 
 /**

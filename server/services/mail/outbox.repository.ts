@@ -12,12 +12,14 @@ export function enqueueMail(db: DbOrTx, mail: OutgoingMail): string {
   const id = newId();
   const now = new Date().toISOString();
   db.insert(mailOutbox)
-    .values({ id, ...mail, html: mail.html ?? null, createdAt: now, status: 'pending', nextAttemptAt: now })
+    .values({ id, ...mail, html: mail.html, createdAt: now, status: 'pending', nextAttemptAt: now })
     .run();
   return id;
 }
 
-export interface DueMail extends OutgoingMail {
+/** A queued mail; one queued before every mail had an HTML part goes out as text only. */
+export interface DueMail extends Omit<OutgoingMail, 'html'> {
+  html?: string;
   id: string;
   attempts: number;
 }

@@ -1,16 +1,16 @@
+import { htmlBody } from './html-body';
 import type { OutgoingMail } from './mailer';
 
-/** Plain-text e-mail confirmation; the link carries the only copy of the token. */
+/** The e-mail confirmation, as text and the same words as HTML; the link carries the only copy of the token. */
 export function verificationMail(input: { to: string; name: string; link: string }): OutgoingMail {
+  const subject = 'Confirm your e-mail address for Tributary';
+  const hello = `Hello ${input.name},`;
+  const why = 'Confirm this address to invite people and send design requests:';
+  const once = 'The link works once. If you did not make a Tributary account, ignore this e-mail.';
   return {
     to: input.to,
-    subject: 'Confirm your e-mail address for Tributary',
-    text: [
-      `Hello ${input.name},`,
-      '',
-      `Confirm this address to invite people and send design requests: ${input.link}`,
-      '',
-      'The link works once. If you did not make a Tributary account, ignore this e-mail.',
-    ].join('\n'),
+    subject,
+    text: [hello, '', `${why} ${input.link}`, '', once].join('\n'),
+    html: htmlBody(subject, [hello, why, { href: input.link, label: 'Confirm the address' }, once]),
   };
 }

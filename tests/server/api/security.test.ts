@@ -150,7 +150,12 @@ describe('routing', () => {
 
   it('lists captured mail in development, including mail that did not come through the app', async () => {
     server = await createTestServer();
-    enqueueMail(server.db, { to: 'someone@example.test', subject: 'Hello', text: 'Body text' });
+    enqueueMail(server.db, {
+      to: 'someone@example.test',
+      subject: 'Hello',
+      text: 'Body text',
+      html: '<p>Body text</p>',
+    });
     server.mailer.wake();
     await server.mailer.idle();
     const outside = nodemailer.createTransport({ host: server.smtp.host, port: server.smtp.port });

@@ -95,7 +95,12 @@ describe('mail goes through the outbox', () => {
   });
 
   it('mail queued without a wake (left over from before a restart) is found by the timer', async () => {
-    const id = enqueueMail(server.db, { to: 'left.over@example.test', subject: 'Left over', text: 'Body' });
+    const id = enqueueMail(server.db, {
+      to: 'left.over@example.test',
+      subject: 'Left over',
+      text: 'Body',
+      html: '<p>Body</p>',
+    });
     await vi.waitFor(
       () =>
         expect(server.db.select().from(mailOutbox).where(eq(mailOutbox.id, id)).get()?.status).toBe('sent'),
