@@ -1,6 +1,7 @@
 import { describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { openBrowser, snap, viewports, type ViewportName } from './browser';
+import { postDemoHeader } from './demo-header';
 
 const baseUrl = inject('baseUrl');
 const devMailUrl = inject('devMailUrl');
@@ -46,21 +47,7 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         await c.getByTestId('job-row').first().click();
         await c.getByTestId('job-members').waitFor();
         const jobId = c.url().split('/jobs/')[1];
-        // A header on the job through the API (the member editor has its own browser test).
-        const made = await c.request.post(`${baseUrl}/api/jobs/${jobId}/members`, {
-          headers: { Origin: baseUrl },
-          data: {
-            label: `Hall header ${name}`,
-            input: {
-              kind: 'header',
-              edition: 'ASCE 7-22',
-              clearSpanFt: 6,
-              sources: [{ kind: 'roof', tributaryFt: 13, deadPsf: 15, roofLivePsf: 20 }],
-              materialId: 'sawn-douglas-fir-larch-no2',
-              sizeId: '2-ply-2x10',
-            },
-          },
-        });
+        const made = await postDemoHeader(contractor.context, baseUrl, jobId, `Hall header ${name}`);
         expect(made.status()).toBe(201);
         await c.reload();
         await c.getByTestId('new-request').click();
@@ -181,27 +168,13 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
     }, 180_000);
 
     it('composes with the phone-back fields, then edits the draft: a field, the members, a photo removed', async () => {
-      const { page: c, close } = await openBrowser(name);
+      const { page: c, context, close } = await openBrowser(name);
       try {
         await signIn(c, 'contractor@demo.tributary.test');
         await c.getByTestId('job-row').first().click();
         await c.getByTestId('job-members').waitFor();
         const jobId = c.url().split('/jobs/')[1];
-        const header = (label: string) =>
-          c.request.post(`${baseUrl}/api/jobs/${jobId}/members`, {
-            headers: { Origin: baseUrl },
-            data: {
-              label,
-              input: {
-                kind: 'header',
-                edition: 'ASCE 7-22',
-                clearSpanFt: 6,
-                sources: [{ kind: 'roof', tributaryFt: 13, deadPsf: 15, roofLivePsf: 20 }],
-                materialId: 'sawn-douglas-fir-larch-no2',
-                sizeId: '2-ply-2x10',
-              },
-            },
-          });
+        const header = (label: string) => postDemoHeader(context, baseUrl, jobId, label);
         expect((await header(`Den header ${name}`)).status()).toBe(201);
         expect((await header(`Porch header ${name}`)).status()).toBe(201);
         await c.reload();

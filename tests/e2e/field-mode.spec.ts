@@ -2,6 +2,7 @@ import { mkdirSync } from 'node:fs';
 import { describe, expect, inject, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import { openBrowser, snap } from './browser';
+import { postDemoHeader } from './demo-header';
 
 const baseUrl = inject('baseUrl');
 const EMAIL = 'contractor@demo.tributary.test';
@@ -57,20 +58,7 @@ describe('field mode (phone)', () => {
 
       // A draft design request to attach photos to, made online (the hand-off has its own browser test).
       const label = `Offline beam ${Date.now()}`;
-      const made = await first.context.request.post(`${baseUrl}/api/jobs/${jobId}/members`, {
-        headers: { Origin: baseUrl },
-        data: {
-          label: 'Hall header (field)',
-          input: {
-            kind: 'header',
-            edition: 'ASCE 7-22',
-            clearSpanFt: 6,
-            sources: [{ kind: 'roof', tributaryFt: 13, deadPsf: 15, roofLivePsf: 20 }],
-            materialId: 'sawn-douglas-fir-larch-no2',
-            sizeId: '2-ply-2x10',
-          },
-        },
-      });
+      const made = await postDemoHeader(first.context, baseUrl, jobId, 'Hall header (field)');
       expect(made.status()).toBe(201);
       await page.reload();
       await page.getByTestId('new-request').click();
