@@ -22,6 +22,7 @@ import {
   findAttachmentAnywhere,
   insertAttachment,
   listAttachments,
+  listVersions,
   type RequestRow,
 } from './requests.repository';
 
@@ -154,8 +155,8 @@ export function createAttachmentsService(deps: { db: Db; storage: FileStorage })
     },
 
     /**
-     * Removes a photo or sketch from a Draft: the sending firm's only, and only before the first send (a
-     * sent version's snapshot lists its photos and never changes). The row and the audit event are one
+     * Removes a photo or sketch from the working copy: the sending firm's only, and only one no sent version
+     * holds yet (a sent version's snapshot lists its photos and never changes). The row and the audit event are one
      * transaction; the stored bytes go after it commits.
      */
     async remove(viewer: RequestViewer, requestId: string, attachmentId: string): Promise<void> {
@@ -165,10 +166,15 @@ export function createAttachmentsService(deps: { db: Db; storage: FileStorage })
         assertMay('edit', side, row.status);
         const file = findAttachment(tx, requestId, attachmentId);
         if (!file) throw notFound('File');
-        if (row.status !== 'draft' || file.purpose !== 'photo') {
+        const sentWith = listVersions(tx, requestId).find((v) =>
+          v.snapshot.files.some((f) => f.id === attachmentId),
+        );
+        if (file.purpose !== 'photo' || sentWith) {
           throw new AppError(
             'conflict',
-            'Only a photo of a Draft can be removed: a sent version keeps its photos',
+            sentWith
+              ? `This photo went with version ${sentWith.version}: a sent version keeps its photos`
+              : 'Only a photo or sketch of the working copy can be removed',
           );
         }
         deleteAttachment(tx, requestId, attachmentId);

@@ -143,6 +143,33 @@ export function createRequestsService(deps: { db: Db; mailer: Mailer; appOrigin:
     });
   }
 
+  /** Writes `patch` over the working copy (the next send or revision freezes it); the engineer stays once sent. */
+  function editWorkingCopy(
+    tx: DbOrTx,
+    viewer: RequestViewer,
+    row: RequestRow,
+    side: RequestSide,
+    patch: RequestPatch,
+  ): RequestRow {
+    assertMay('edit', side, row.status);
+    if (
+      patch.engineerEmail !== undefined &&
+      row.status !== 'draft' &&
+      patch.engineerEmail !== row.engineerEmail
+    ) {
+      throw new AppError('conflict', 'The engineer of a sent request cannot change: start a new request', {
+        engineerEmail: ['The engineer of a sent request cannot change'],
+      });
+    }
+    const draft = {
+      ...row.draft,
+      ...Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined)),
+    };
+    checkJobAndMembers(tx, row.orgId, row.jobId, draft.memberIds);
+    auditRequest(tx, viewer, row, 'request.update', { fields: Object.keys(patch) });
+    return updateRequest(tx, row.id, { draft, engineerEmail: draft.engineerEmail });
+  }
+
   /** Freezes the next version from the working copy, with what changed since the one before. */
   function freeze(tx: DbOrTx, row: RequestRow, viewer: RequestViewer, note: string): RequestRow {
     const version = row.version + 1;
@@ -209,29 +236,7 @@ export function createRequestsService(deps: { db: Db; mailer: Mailer; appOrigin:
     },
 
     update(viewer: RequestViewer, requestId: string, patch: RequestPatch): RequestDetail {
-      return act(viewer, requestId, (tx, row, side) => {
-        assertMay('edit', side, row.status);
-        if (
-          patch.engineerEmail !== undefined &&
-          row.status !== 'draft' &&
-          patch.engineerEmail !== row.engineerEmail
-        ) {
-          throw new AppError(
-            'conflict',
-            'The engineer of a sent request cannot change: start a new request',
-            {
-              engineerEmail: ['The engineer of a sent request cannot change'],
-            },
-          );
-        }
-        const draft = {
-          ...row.draft,
-          ...Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined)),
-        };
-        checkJobAndMembers(tx, row.orgId, row.jobId, draft.memberIds);
-        auditRequest(tx, viewer, row, 'request.update', { fields: Object.keys(patch) });
-        return updateRequest(tx, row.id, { draft, engineerEmail: draft.engineerEmail });
-      });
+      return act(viewer, requestId, (tx, row, side) => editWorkingCopy(tx, viewer, row, side, patch));
     },
 
     send(viewer: RequestViewer, requestId: string): RequestDetail {
@@ -256,8 +261,10 @@ export function createRequestsService(deps: { db: Db; mailer: Mailer; appOrigin:
       });
     },
 
+    /** A new version from the working copy, after `body.draft`'s edits when there are any. */
     revise(viewer: RequestViewer, requestId: string, body: Revision): RequestDetail {
-      return act(viewer, requestId, (tx, row, side) => {
+      return act(viewer, requestId, (tx, opened, side) => {
+        const row = body.draft ? editWorkingCopy(tx, viewer, opened, side, body.draft) : opened;
         const reopening = row.status === 'designed';
         assertMay(reopening ? 'reopen' : 'revise', side, row.status);
         if (reopening && !body.question) {

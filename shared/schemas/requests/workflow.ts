@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { clientIdSchema } from '../sync';
+import { requestPatchSchema } from './compose';
 import { photoPlaceSchema } from './snapshot';
 
 /**
@@ -64,10 +65,15 @@ export const feeQuoteSchema = z.object({
 });
 export type FeeQuote = z.output<typeof feeQuoteSchema>;
 
-/** `POST /api/requests/:requestId/revisions`: what changed, in words; a Designed request needs a question. */
+/**
+ * `POST /api/requests/:requestId/revisions`: what changed, in words; a Designed request needs a question.
+ * `draft` edits the working copy first, in the same transaction as the new version: a refused edit sends
+ * nothing and keeps the working copy as it was.
+ */
 export const revisionSchema = z.object({
   note: reason.default(''),
   question: reason.default(''),
+  draft: requestPatchSchema.optional(),
 });
 export type Revision = z.output<typeof revisionSchema>;
 

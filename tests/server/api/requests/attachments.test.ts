@@ -245,7 +245,7 @@ describe('uploads', () => {
   });
 });
 
-describe('removing a photo from a Draft', () => {
+describe('removing a photo from the working copy', () => {
   const remove = (agent: Agent, requestId: string, fileId: string) =>
     agent.delete(`/api/requests/${requestId}/attachments/${encodeURIComponent(fileId)}`);
   const audits = () =>
@@ -285,13 +285,35 @@ describe('removing a photo from a Draft', () => {
     const file = await upload(world.firm.agent, id, ONE_PIXEL_PNG, 'a.png').expect(201);
     await world.firm.agent.post(`/api/requests/${id}/send`).expect(200);
     const refused = await remove(world.firm.agent, id, file.body.id).expect(409);
-    expect(refused.body.error.message).toMatch(/Only a photo of a Draft/);
+    expect(refused.body.error.message).toMatch(/went with version 1/);
     await remove(world.engineer.agent, id, file.body.id).expect(403);
     const detail = await world.firm.agent.get(`/api/requests/${id}`).expect(200);
     expect(detail.body.snapshot.files.map((f: { id: string }) => f.id)).toEqual([file.body.id]);
     expect(rows()).toHaveLength(1);
     expect(storedFiles()).toHaveLength(1);
     expect(audits()).toEqual([]);
+  });
+
+  it('a photo added after sending can go again before the revision; the revision then keeps it', async () => {
+    const id = await world.sent();
+    const sentWith = (await world.firm.agent.get(`/api/requests/${id}`).expect(200)).body.snapshot.files;
+    const wrong = await upload(world.firm.agent, id, ONE_PIXEL_PNG, 'wrong-wall.png').expect(201);
+    const right = await upload(world.firm.agent, id, ONE_PIXEL_PNG, 'ridge.png').expect(201);
+    await remove(world.firm.agent, id, wrong.body.id).expect(204);
+    const revised = await world.firm.agent
+      .post(`/api/requests/${id}/revisions`)
+      .send({ note: 'Ridge photo added' })
+      .expect(201);
+    expect(revised.body.snapshot.files.map((f: { id: string }) => f.id)).toEqual([
+      ...sentWith.map((f: { id: string }) => f.id),
+      right.body.id,
+    ]);
+    expect(revised.body.versions[1].changes).toContainEqual(
+      expect.objectContaining({ path: 'files.ridge.png', before: null }),
+    );
+    const refused = await remove(world.firm.agent, id, right.body.id).expect(409);
+    expect(refused.body.error.message).toMatch(/went with version 2/);
+    expect(audits()).toHaveLength(1);
   });
 
   it('another firm, the engineer of a Draft, hostile and foreign ids: refused, nothing removed', async () => {

@@ -221,6 +221,76 @@ describe('revise', () => {
     ]);
   });
 
+  it('edits the working copy and sends it as one step: fields and members changed, listed for the engineer', async () => {
+    const id = await world.sent();
+    const second = await world.firm.agent
+      .post(`/api/jobs/${world.jobId}/members`)
+      .send({ label: 'Porch header', wall: 'Porch', input: SAMPLE_HEADER })
+      .expect(201);
+    const res = await world.firm.agent
+      .post(`/api/requests/${id}/revisions`)
+      .send({
+        note: 'The porch header too',
+        draft: {
+          memberIds: [world.memberId, second.body.id],
+          questions: 'Can both be flush?',
+          conditions: { framingDirection: 'Joists run front to back' },
+        },
+      })
+      .expect(201);
+    const detail = requestDetailSchema.parse(res.body);
+    expect(detail.version).toBe(2);
+    expect(detail.draft?.questions).toBe('Can both be flush?');
+    expect(detail.snapshot?.members.map((m) => m.label)).toEqual(['Kitchen header', 'Porch header']);
+    expect(detail.snapshot?.questions).toBe('Can both be flush?');
+    const paths = detail.versions[1].changes.map((c) => c.path);
+    expect(paths).toContain('questions');
+    expect(paths).toContain('conditions.framingDirection');
+    expect(paths.some((p) => p.startsWith('members.Porch header'))).toBe(true);
+    const engineerView = await world.engineer.agent.get(`/api/requests/${id}`).expect(200);
+    expect(engineerView.body.versions[1].changes).toEqual(detail.versions[1].changes);
+    expect(engineerView.body.draft).toBeNull();
+  });
+
+  it('a refused edit sends nothing: a member of another job, or a new engineer, leaves version 1 as it was', async () => {
+    const id = await world.sent();
+    const before = requestDetailSchema.parse(
+      (await world.firm.agent.get(`/api/requests/${id}`).expect(200)).body,
+    );
+    const bad = await world.firm.agent
+      .post(`/api/requests/${id}/revisions`)
+      .send({ note: 'x', draft: { memberIds: ['not-a-member'], questions: 'Changed?' } })
+      .expect(400);
+    expect(bad.body.error.fields['memberIds.0']).toBeDefined();
+    await world.firm.agent
+      .post(`/api/requests/${id}/revisions`)
+      .send({ note: 'x', draft: { engineerEmail: 'someone.else@example.test' } })
+      .expect(409);
+    await world.firm.agent.post(`/api/requests/${id}/revisions`).send({ note: 'x', draft: {} }).expect(400);
+    const after = requestDetailSchema.parse(
+      (await world.firm.agent.get(`/api/requests/${id}`).expect(200)).body,
+    );
+    expect(after.version).toBe(1);
+    expect(after.draft).toEqual(before.draft);
+    expect(after.versions).toEqual(before.versions);
+    expect((await mailTo(server, world.engineer.body.email)).map((m) => m.subject)).toEqual([
+      expect.stringContaining('v1'),
+    ]);
+  });
+
+  it('the engineer cannot revise, and the revision screen’s edits are the firm’s', async () => {
+    const id = await world.sent();
+    await world.engineer.agent
+      .post(`/api/requests/${id}/revisions`)
+      .send({ note: 'mine', draft: { questions: 'Hijack' } })
+      .expect(403);
+    const detail = requestDetailSchema.parse(
+      (await world.firm.agent.get(`/api/requests/${id}`).expect(200)).body,
+    );
+    expect(detail.version).toBe(1);
+    expect(detail.draft?.questions).toBe('Can the beam be flush with the joists?');
+  });
+
   it('the engineer of a sent request cannot change', async () => {
     const id = await world.sent();
     await world.firm.agent
