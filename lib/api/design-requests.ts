@@ -37,8 +37,11 @@ export const updateRequest = (requestId: string, body: Partial<RequestComposeBod
 export const sendRequest = (requestId: string) =>
   apiRequest('POST', path(requestId, '/send'), requestDetailSchema);
 
-export const reviseRequest = (requestId: string, body: { note?: string; question?: string }) =>
-  apiRequest('POST', path(requestId, '/revisions'), requestDetailSchema, body);
+/** A new version; `draft` edits the working copy first, in the same step (nothing is kept when refused). */
+export const reviseRequest = (
+  requestId: string,
+  body: { note?: string; question?: string; draft?: Partial<RequestComposeBody> },
+) => apiRequest('POST', path(requestId, '/revisions'), requestDetailSchema, body);
 
 export const changeStatus = (requestId: string, body: { to: StatusChange['to']; reason?: string }) =>
   apiRequest('POST', path(requestId, '/status'), requestDetailSchema, body);

@@ -33,6 +33,8 @@ type ComposeFormProps = {
   saveLabel: string;
   /** Shown above the form (where it started from). */
   intro?: ReactNode;
+  /** Shown just above the save button (what goes with the save). */
+  beforeSave?: ReactNode;
 };
 
 /**
@@ -40,7 +42,7 @@ type ComposeFormProps = {
  * and constraints and the items engineers phone back for. Bad fields are named at the field and nothing is
  * saved; photos are added on the request's own pages.
  */
-export function ComposeForm({ job, initial, onSave, saveLabel, intro }: ComposeFormProps) {
+export function ComposeForm({ job, initial, onSave, saveLabel, intro, beforeSave }: ComposeFormProps) {
   const { data: members } = useJobMembers(job.id);
   const [draft, setDraft] = useState<ComposeDraft>(initial);
   const [busy, setBusy] = useState(false);
@@ -202,6 +204,7 @@ export function ComposeForm({ job, initial, onSave, saveLabel, intro }: ComposeF
         />
       </Card>
       <Card title="Questions">{field('questions', 'Questions for the engineer', { multiline: true })}</Card>
+      {beforeSave}
       {problem ? (
         <Notice tone="error" title="Not saved" testID="compose-problem">
           {problem}

@@ -16,8 +16,9 @@ import { pickFile } from './browser-files';
 const ACCEPT = 'image/jpeg,image/png,image/heic,image/heif,application/pdf,.heic';
 
 /**
- * The photos and sketches of a Draft: each with its place and caption and a Remove that asks once more,
- * and a new one added with its place and caption. A sent request keeps its photos (its page lists them).
+ * The photos and sketches of the working copy: each with its place and caption and a Remove that asks once
+ * more, and a new one added with its place and caption. A photo a sent version went with stays (marked so);
+ * one added since can still go.
  */
 export function DraftPhotosCard({
   request,
@@ -32,6 +33,8 @@ export function DraftPhotosCard({
   const [busy, setBusy] = useState<string | null>(null);
   const [problem, setProblem] = useState<ApiError | null>(null);
   const photos = request.files.filter((f) => f.purpose === 'photo');
+  const sent = new Set(request.snapshot?.files.map((f) => f.id));
+  const copy = request.status === 'draft' ? 'the draft' : 'the next version';
 
   async function run(name: string, act: () => Promise<unknown>) {
     setBusy(name);
@@ -72,9 +75,13 @@ export function DraftPhotosCard({
               resizeMode="contain"
             />
           ) : null}
-          {asking === file.id ? (
+          {sent.has(file.id) ? (
+            <Text variant="caption" tone="muted" testID="draft-photo-sent">
+              Sent with version {request.snapshot?.version}: it stays with the request.
+            </Text>
+          ) : asking === file.id ? (
             <View style={styles.row}>
-              <Text style={styles.ask}>Remove this photo from the draft?</Text>
+              <Text style={styles.ask}>Remove this photo from {copy}?</Text>
               <Button
                 label="Remove it"
                 variant="danger"

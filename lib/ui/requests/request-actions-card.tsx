@@ -180,11 +180,15 @@ export function RequestActionsCard({
         {firm && can('edit') && pickFile
           ? button('photo', 'Add a photo or sketch', () => void attachPhoto())
           : null}
-        {can('revise')
-          ? button('revise', 'Send a revision', () =>
-              run('revise', () => reviseRequest(request.id, { note: text })),
-            )
-          : null}
+        {firm && (can('revise') || can('reopen')) ? (
+          <LinkButton
+            label={can('revise') ? 'Revise and send' : 'Reopen with changes'}
+            icon="edit"
+            variant="secondary"
+            href={{ pathname: '/requests/[requestId]/revise', params: { requestId: request.id } }}
+            testID="action-revise"
+          />
+        ) : null}
         {can('reopen')
           ? button('reopen', 'Reopen with a question', () =>
               run('reopen', () => reviseRequest(request.id, { question: text, note: '' })),

@@ -29,7 +29,7 @@ export default function EditRequestPage() {
       <Screen title={`Request ${request.number}`} narrow>
         {back}
         <Notice tone="info" title="Sent already" testID="draft-edit-closed">
-          A sent request keeps what it was sent with. Send a revision from the request’s page to change it.
+          A sent request keeps what it was sent with. Change it with “Revise and send” on the request’s page.
         </Notice>
       </Screen>
     );
