@@ -240,5 +240,61 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         await close();
       }
     }, 120_000);
+
+    it('revises a sent request from its page: fields, members and a photo changed, sent as version 2 with its change list', async () => {
+      const { page: c, context, close } = await openBrowser(name);
+      try {
+        await signIn(c, 'contractor@demo.tributary.test');
+        await c.getByTestId('job-row').first().click();
+        await c.getByTestId('job-members').waitFor();
+        const jobId = c.url().split('/jobs/')[1];
+        const stamp = Date.now();
+        expect((await postDemoHeader(context, baseUrl, jobId, `Stair header ${name}`)).status()).toBe(201);
+        expect((await postDemoHeader(context, baseUrl, jobId, `Attic header ${name}`)).status()).toBe(201);
+        await c.reload();
+        await c.getByTestId('new-request').click();
+        await c.getByRole('checkbox', { name: new RegExp(`Stair header ${name}`) }).click();
+        await c.getByTestId('compose-engineerEmail').fill(`revise-${name}-${stamp}@example.test`);
+        await c.getByTestId('compose-state').click();
+        await c.getByTestId('compose-state-PA').click();
+        await c.getByTestId('compose-questions').fill('Can it be flush?');
+        await c.getByTestId('compose-save').click();
+        await state(c, 'Draft');
+        await upload(c, 'photo', 'stair.png');
+        await act(c, 'send');
+        await state(c, 'Sent');
+        const requestId = c.url().split('/requests/')[1].split(/[/?]/)[0];
+
+        await c.getByRole('link', { name: 'Revise and send' }).click();
+        await c.getByTestId('revision-intro').waitFor();
+        // The photo version 1 went with stays; a new one is added.
+        await c.getByTestId('draft-photo-sent').first().waitFor();
+        const chooser = c.waitForEvent('filechooser');
+        await c.getByTestId('draft-photo-caption').fill('Attic over the wall');
+        await c.getByTestId('draft-photo-add').click();
+        await (await chooser).setFiles({ name: 'attic-over.png', mimeType: 'image/png', buffer: PNG });
+        await c.getByTestId('draft-photo').getByText('Attic over the wall').waitFor();
+        await c.getByRole('checkbox', { name: new RegExp(`Attic header ${name}`) }).click();
+        await c.getByTestId('compose-questions').fill('Can both be flush?');
+        await c.getByTestId('revision-note').fill('The attic header goes too');
+        await snap(c, `handoff/${name}-revision-edit`);
+        await c.getByTestId('compose-save').click();
+        await c.getByTestId('request-changes').waitFor();
+        await state(c, 'Sent');
+        const changes = await c.getByTestId('request-changes').innerText();
+        expect(changes).toContain('Version 2: The attic header goes too');
+        expect(changes).toContain('questions: Can it be flush? → Can both be flush?');
+        expect(changes).toContain(`Attic header ${name}`);
+        expect(changes).toContain('attic-over.png');
+        await c.getByTestId('request-changes').scrollIntoViewIfNeeded();
+        await snap(c, `handoff/${name}-revision-sent`);
+        const detail = await (await c.request.get(`${baseUrl}/api/requests/${requestId}`)).json();
+        expect(detail.version).toBe(2);
+        expect(detail.snapshot.members).toHaveLength(2);
+        expect(detail.snapshot.files).toHaveLength(2);
+      } finally {
+        await close();
+      }
+    }, 120_000);
   });
 }
