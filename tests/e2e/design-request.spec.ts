@@ -270,10 +270,10 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         // The photo version 1 went with stays; a new one is added.
         await c.getByTestId('draft-photo-sent').first().waitFor();
         const chooser = c.waitForEvent('filechooser');
-        await c.getByTestId('draft-photo-caption').fill('Attic over the wall');
+        await c.getByTestId('draft-photo-caption').fill('Joists over the stair, tape at 16 in');
         await c.getByTestId('draft-photo-add').click();
         await (await chooser).setFiles({ name: 'attic-over.png', mimeType: 'image/png', buffer: PNG });
-        await c.getByTestId('draft-photo').getByText('Attic over the wall').waitFor();
+        await c.getByText('Joists over the stair, tape at 16 in').waitFor();
         await c.getByRole('checkbox', { name: new RegExp(`Attic header ${name}`) }).click();
         await c.getByTestId('compose-questions').fill('Can both be flush?');
         await c.getByTestId('revision-note').fill('The attic header goes too');
@@ -285,13 +285,15 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         expect(changes).toContain('Version 2: The attic header goes too');
         expect(changes).toContain('questions: Can it be flush? → Can both be flush?');
         expect(changes).toContain(`Attic header ${name}`);
-        expect(changes).toContain('attic-over.png');
         await c.getByTestId('request-changes').scrollIntoViewIfNeeded();
         await snap(c, `handoff/${name}-revision-sent`);
         const detail = await (await c.request.get(`${baseUrl}/api/requests/${requestId}`)).json();
         expect(detail.version).toBe(2);
         expect(detail.snapshot.members).toHaveLength(2);
         expect(detail.snapshot.files).toHaveLength(2);
+        expect(detail.versions[1].changes).toContainEqual(
+          expect.objectContaining({ path: 'files.attic-over.png', before: null }),
+        );
       } finally {
         await close();
       }
