@@ -1,4 +1,5 @@
 import { CalcInputError, buildShortlist, buildSpanTable } from '@/lib/calc';
+import type { SentMemberBudget } from '@/lib/budget';
 import type { SavedBudget } from '@/server/api/budgets/budgets.repository';
 import { memberBudgetView, type PriceBookState } from '@/server/api/budgets/member-budget-view';
 import type { MemberDesign } from '@/shared/schemas/requests/member-design';
@@ -52,11 +53,13 @@ export interface MemberBudgetFacts {
   book: PriceBookState;
   /** The engineer's member when a request for it is Designed: the budget is priced from it. */
   design?: MemberDesign;
+  /** The member's part of the budget last sent to the client, which a change order compares with. */
+  sent?: SentMemberBudget;
 }
 
 /** Runs in a worker thread (calc-worker.cjs): each member's budget, priced from its stored check. */
 export function budgetViews(input: MemberBudgetFacts[]): CalcTaskAnswer<MemberBudgetView[]> {
-  return answer(() => input.map((f) => memberBudgetView(f.member, f.job, f.saved, f.book, f.design)));
+  return answer(() => input.map((f) => memberBudgetView(f.member, f.job, f.saved, f.book, f.design, f.sent)));
 }
 
 /** Runs in a worker thread (calc-worker.cjs): the design request's PDF (pages, diagrams, photos). */

@@ -121,11 +121,23 @@ const rangeSchema = z.object({
   basis: z.string(),
 });
 
+/** A member as a budget priced it, for comparing with the engineer's member (in). */
+export const memberShapeSchema = z.object({
+  label: z.string(),
+  family: z.string(),
+  plies: z.number().int().nullable(),
+  bIn: z.number().nullable(),
+  dIn: z.number().nullable(),
+});
+
 /**
  * The change order raised when the engineer's designed member differs from the budgeted one: both members,
  * how they differ, and the designed member's total less each end of the budgeted range (cents).
  */
 export const changeOrderSchema = z.object({
+  /** Which budget it compares with, in words: the one sent to the client when there is one. */
+  against: z.string(),
+  sentBudgetId: z.string().nullable(),
   budgetedLabel: z.string(),
   designedLabel: z.string(),
   differences: z.array(z.string()),
@@ -187,6 +199,8 @@ export const memberBudgetViewSchema = z.object({
   subtotalCents: z.number().int(),
   totalCents: z.number().int(),
   range: rangeSchema,
+  /** The member the lines are priced at: the engineer's once designed, else the preliminary size. */
+  pricedShape: memberShapeSchema,
   /** Once the engineer has designed the member: the lines, total and range are the engineer's member's. */
   design: budgetDesignSchema.nullable(),
   /** The range at the preliminary size, kept beside the engineer's member once it is designed. */
@@ -257,6 +271,9 @@ export const sentBudgetSnapshotSchema = z.object({
   highCents: z.number().int(),
   members: z.array(
     z.object({
+      /** Kept since change orders compare with the sent budget; a budget sent before has neither. */
+      memberId: z.string().optional(),
+      shape: memberShapeSchema.optional(),
       label: z.string(),
       lowLabel: z.string(),
       highLabel: z.string(),

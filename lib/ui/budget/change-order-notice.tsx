@@ -8,7 +8,8 @@ export const changeText = (cents: number) => `${cents > 0 ? '+' : ''}${formatDol
 
 /**
  * The change order raised when the engineer's member differs from the budgeted one: what changed, and the
- * designed member's cost against the budgeted range (to the client: the difference to agree before work).
+ * designed member's cost against the budget it compares with: the one sent to the client when there is one
+ * (to the client: the difference to agree before work), else the preliminary range.
  */
 export function ChangeOrderNotice({ change, testID }: { change: ChangeOrder; testID?: string }) {
   const [from, to] = [change.fromHighCents, change.fromLowCents].sort((a, b) => a - b);
@@ -20,8 +21,7 @@ export function ChangeOrderNotice({ change, testID }: { change: ChangeOrder; tes
       <Text>{change.differences.join('; ')}.</Text>
       <Text testID="change-order-cost">
         {formatDollars(change.designedCents)} at the engineer’s member:{' '}
-        {from === to ? changeText(from) : `${changeText(from)} to ${changeText(to)}`} against the budgeted
-        range
+        {from === to ? changeText(from) : `${changeText(from)} to ${changeText(to)}`} against {change.against}
         {change.outsideRange ? ', outside it' : ', inside it'}.
       </Text>
     </Notice>

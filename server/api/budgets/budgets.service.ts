@@ -1,5 +1,6 @@
 import type { Db, DbOrTx } from '@/db/client';
 import { CAUTION_TEXT } from '@/lib/calc';
+import type { SentMemberBudget } from '@/lib/budget';
 import { notFound, AppError } from '@/server/app-error';
 import { recordAudit, type Actor } from '@/server/api/audit/audit.repository';
 import { findJob } from '@/server/api/jobs/jobs.repository';
@@ -71,6 +72,24 @@ export function createBudgetsService(db: Db) {
     if (!job) throw notFound('Job');
     return job;
   };
+  /** Each member's part of the latest budget sent to the client that holds it (sent budgets newest first). */
+  const sentParts = (orgId: string, jobId: string): Map<string, SentMemberBudget> => {
+    const parts = new Map<string, SentMemberBudget>();
+    for (const sent of listSentBudgets(db, orgId, jobId)) {
+      for (const m of sent.snapshot.members) {
+        if (!m.memberId || !m.shape || parts.has(m.memberId)) continue;
+        parts.set(m.memberId, {
+          id: sent.id,
+          clientName: sent.clientName,
+          sentAt: sent.sentAt,
+          shape: m.shape,
+          lowCents: m.lowCents,
+          highCents: m.highCents,
+        });
+      }
+    }
+    return parts;
+  };
   // What a budget is priced from is read here; the pricing (a shortlist, a check per scenario) runs in the
   // calculation pool.
   const view = async (orgId: string, memberId: string): Promise<MemberBudgetView> => {
@@ -79,8 +98,9 @@ export function createBudgetsService(db: Db) {
     const job = jobOf(orgId, member.jobId);
     const design = designsOfJob(db, orgId, member.jobId).find((d) => d.memberId === memberId);
     const saved = findMemberBudget(db, orgId, memberId);
+    const sent = sentParts(orgId, member.jobId).get(memberId);
     const [only] = await runInPool('budgetViews', [
-      { member, job, saved, book: priceBook(db, orgId), design },
+      { member, job, saved, book: priceBook(db, orgId), design, sent },
     ]);
     return only;
   };
@@ -88,11 +108,19 @@ export function createBudgetsService(db: Db) {
     const job = jobOf(orgId, jobId);
     const book = priceBook(db, orgId);
     const designs = designsOfJob(db, orgId, jobId);
+    const sent = sentParts(orgId, jobId);
     const facts = listMembers(db, orgId, jobId).map((item) => {
       const member = findMember(db, orgId, item.id);
       if (!member) throw notFound('Member');
       const design = designs.find((d) => d.memberId === item.id);
-      return { member, job, saved: findMemberBudget(db, orgId, item.id), book, design };
+      return {
+        member,
+        job,
+        saved: findMemberBudget(db, orgId, item.id),
+        book,
+        design,
+        sent: sent.get(item.id),
+      };
     });
     return { job, views: await runInPool('budgetViews', facts) };
   };
@@ -176,6 +204,8 @@ export function createBudgetsService(db: Db) {
         lowCents: views.reduce((sum, v) => sum + v.range.lowCents, 0),
         highCents: views.reduce((sum, v) => sum + v.range.highCents, 0),
         members: views.map((v) => ({
+          memberId: v.memberId,
+          shape: v.pricedShape,
           label: v.memberLabel,
           lowLabel: v.range.lowLabel,
           highLabel: v.range.highLabel,

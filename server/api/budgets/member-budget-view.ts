@@ -1,13 +1,16 @@
 import {
   budgetRange,
   buildMemberBudget,
+  changeBaseline,
   cheapestPassing,
   designChange,
   nextSizeUp,
   type BudgetChoices,
   type BudgetFacts,
   type MemberBudget,
+  type MemberShape,
   type PriceAmounts,
+  type SentMemberBudget,
 } from '@/lib/budget';
 import { CAUTION_TEXT, checkMember, getMaterial, getSize } from '@/lib/calc';
 import type { BudgetOverrides, MemberBudgetView } from '@/shared/schemas/budgets';
@@ -48,7 +51,8 @@ function budgetedFamily(member: Member, material: BudgetChoices['material']): st
  * A member's whole budget: the lines at the preliminary size, the range to the next size up, every shortlist
  * size priced side by side with the cheapest passing one marked, and the scenarios that change the cost most.
  * Once the engineer has designed the member (`design`), the lines and total are rebuilt from the engineer's
- * member, the range closes on it, and a change order rises when it differs from the budgeted size.
+ * member, the range closes on it, and a change order rises when it differs from the budgeted size: the
+ * member of the budget last sent to the client (`sent`) when there is one, else the preliminary range.
  */
 export function memberBudgetView(
   member: Member,
@@ -56,6 +60,7 @@ export function memberBudgetView(
   saved: SavedBudget | undefined,
   book: PriceBookState,
   design?: MemberDesign,
+  sent?: SentMemberBudget,
 ): MemberBudgetView {
   const given = saved?.choices ?? { allowances: [], oldHouse: [], engineerSiteVisit: false };
   const overrides: BudgetOverrides = saved?.overrides ?? {};
@@ -192,6 +197,14 @@ export function memberBudgetView(
   let shown = budget;
   let shownRange = range;
   let changeOrder: MemberBudgetView['changeOrder'] = null;
+  const preliminaryShape: MemberShape = {
+    label: `${size.label} ${member.summary.materialLabel}`,
+    family: budgetedFamily(member, choices.material),
+    plies: size.plies,
+    bIn: size.bIn,
+    dIn: size.dIn,
+  };
+  let pricedShape = preliminaryShape;
   if (design) {
     const designed = designedFacts(member, job, choices, design, shoring);
     shown = buildMemberBudget(
@@ -202,24 +215,19 @@ export function memberBudgetView(
     );
     shownRange = budgetRange({ label: design.designation, totalCents: shown.totalCents }, null);
     shownRange.basis = `The engineer's member (request ${design.requestNumber}, version ${design.version}): the range closes on it`;
+    pricedShape = {
+      label: design.designation,
+      family: DESIGNED_MATERIAL_LABELS[design.material],
+      plies: design.material === 'steel-w' ? 1 : design.plies,
+      bIn: design.widthIn,
+      dIn: design.depthIn,
+    };
     changeOrder = designChange(
-      {
-        label: `${size.label} ${member.summary.materialLabel}`,
-        family: budgetedFamily(member, choices.material),
-        plies: size.plies,
-        bIn: size.bIn,
-        dIn: size.dIn,
-        lowCents: range.lowCents,
-        highCents: range.highCents,
-      },
-      {
-        label: design.designation,
-        family: DESIGNED_MATERIAL_LABELS[design.material],
-        plies: design.material === 'steel-w' ? 1 : design.plies,
-        bIn: design.widthIn,
-        dIn: design.depthIn,
-        totalCents: shown.totalCents,
-      },
+      changeBaseline(
+        { ...preliminaryShape, lowCents: range.lowCents, highCents: range.highCents },
+        sent ?? null,
+      ),
+      { ...pricedShape, totalCents: shown.totalCents },
     );
   }
 
@@ -239,6 +247,7 @@ export function memberBudgetView(
     subtotalCents: shown.subtotalCents,
     totalCents: shown.totalCents,
     range: shownRange,
+    pricedShape,
     design: design
       ? {
           requestId: design.requestId,

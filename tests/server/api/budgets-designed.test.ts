@@ -105,6 +105,8 @@ describe('the budget rebuilds from the engineer’s member, with a change order 
     expect(after.range).toMatchObject({ lowCents: after.totalCents, highCents: after.totalCents });
     expect(after.preliminaryRange).toEqual(before.range);
     expect(after.changeOrder).toEqual({
+      against: 'the preliminary range',
+      sentBudgetId: null,
       budgetedLabel: '2-ply 2x10 Douglas Fir-Larch No.2',
       designedLabel: '2-ply 1-3/4 x 9-1/4 LVL 2.0E',
       differences: ['material Sawn lumber → LVL', 'width 3" → 3-1/2"'],
@@ -176,5 +178,51 @@ describe('the budget rebuilds from the engineer’s member, with a change order 
     expect(memberLine(after)).toMatchObject({ priceKey: 'alternate/steel', missingPrice: false });
     expect(memberLine(after).label).toContain('W8x18');
     expect(after.changeOrder?.differences[0]).toBe('material Sawn lumber → Steel W shape');
+  });
+});
+
+describe('the change order compares with the budget sent to the client, when there is one', () => {
+  const sendBudget = async (clientName: string) =>
+    (await world.firm.agent.post(`/api/jobs/${world.jobId}/budgets`).send({ clientName }).expect(201)).body;
+  const lvl = {
+    material: 'lvl',
+    designation: '2-ply 1-3/4 x 9-1/4 LVL 2.0E',
+    plies: 2,
+    widthIn: 3.5,
+    depthIn: 9.25,
+  };
+
+  it('sent before the design: the difference is against the sent, dated range and says so', async () => {
+    const sent = await sendBudget('Sample Homeowner');
+    const [part] = sent.snapshot.members;
+    expect(part).toMatchObject({ memberId: world.memberId, shape: { family: 'Sawn lumber', plies: 2 } });
+    // The price book moves after sending: the preliminary range moves, the sent one does not.
+    await world.firm.agent
+      .put(`/api/members/${world.memberId}/budget`)
+      .send({ choices: { engineerSiteVisit: true }, overrides: {} })
+      .expect(200);
+    await designedAs(lvl);
+    const after = await budget();
+    expect(after.preliminaryRange?.highCents).not.toBe(part.highCents);
+    expect(after.changeOrder).toMatchObject({
+      against: `the budget sent to Sample Homeowner on ${sent.sentAt.slice(0, 10)}`,
+      sentBudgetId: sent.id,
+      budgetedLabel: '2-ply 2x10 Douglas Fir-Larch No.2',
+      differences: ['material Sawn lumber → LVL', 'width 3" → 3-1/2"'],
+      fromHighCents: after.totalCents - part.highCents,
+      fromLowCents: after.totalCents - part.lowCents,
+    });
+  });
+
+  it('sent after the design with the engineer’s member: no change order against it', async () => {
+    await designedAs(lvl);
+    expect((await budget()).changeOrder?.against).toBe('the preliminary range');
+    const sent = await sendBudget('Sample Homeowner');
+    expect(sent.snapshot.members[0].shape).toMatchObject({ family: 'LVL', bIn: 3.5, dIn: 9.25 });
+    expect((await budget()).changeOrder).toBeNull();
+    const job = jobBudgetSchema.parse(
+      (await world.firm.agent.get(`/api/jobs/${world.jobId}/budget`).expect(200)).body,
+    );
+    expect(job.changeOrders).toBe(0);
   });
 });
