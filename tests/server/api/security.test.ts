@@ -173,6 +173,7 @@ describe('routing', () => {
         to: 'other@example.test',
         subject: 'Outside',
         text: 'Raw\n',
+        html: null,
         createdAt: expect.any(String),
       },
       {
@@ -180,6 +181,7 @@ describe('routing', () => {
         to: 'someone@example.test',
         subject: 'Hello',
         text: 'Body text',
+        html: '<p>Body text</p>',
         createdAt: expect.any(String),
       },
     ]);
