@@ -265,8 +265,11 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         await state(c, 'Sent');
         const requestId = c.url().split('/requests/')[1].split(/[/?]/)[0];
 
+        await c.getByTestId('request-actions').scrollIntoViewIfNeeded();
+        await snap(c, `handoff/${name}-revise-link`);
         await c.getByRole('link', { name: 'Revise and send' }).click();
         await c.getByTestId('revision-intro').waitFor();
+        await snap(c, `handoff/${name}-revision-top`);
         // The photo version 1 went with stays; a new one is added.
         await c.getByTestId('draft-photo-sent').first().waitFor();
         const chooser = c.waitForEvent('filechooser');
