@@ -260,10 +260,13 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         await c.getByTestId('compose-questions').fill('Can it be flush?');
         await c.getByTestId('compose-save').click();
         await state(c, 'Draft');
+        const requestId = c.url().split('/requests/')[1].split(/[/?]/)[0];
+        const read = async () => await (await c.request.get(`${baseUrl}/api/requests/${requestId}`)).json();
         await upload(c, 'photo', 'stair.png');
+        // The photo goes through the device's queue: send once the server holds it, so version 1 has it.
+        await expect.poll(async () => (await read()).files.length, { timeout: 20_000 }).toBe(1);
         await act(c, 'send');
         await state(c, 'Sent');
-        const requestId = c.url().split('/requests/')[1].split(/[/?]/)[0];
 
         await c.getByTestId('request-actions').scrollIntoViewIfNeeded();
         await snap(c, `handoff/${name}-revise-link`);
@@ -290,7 +293,7 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         expect(changes).toContain(`Attic header ${name}`);
         await c.getByTestId('request-changes').scrollIntoViewIfNeeded();
         await snap(c, `handoff/${name}-revision-sent`);
-        const detail = await (await c.request.get(`${baseUrl}/api/requests/${requestId}`)).json();
+        const detail = await read();
         expect(detail.version).toBe(2);
         expect(detail.snapshot.members).toHaveLength(2);
         expect(detail.snapshot.files).toHaveLength(2);
