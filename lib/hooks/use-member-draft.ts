@@ -16,6 +16,16 @@ import {
 
 const isFlagged = (key: string): key is FlaggedField => key in flaggedFields;
 
+/**
+ * The flags after `key` was edited: the same object when its flag stays as it was, so the memoised cards
+ * that read `flags` do not render again on every keystroke.
+ */
+function flagsAfterEdit(flags: MemberDraft['flags'], key: string): MemberDraft['flags'] {
+  if (!isFlagged(key)) return flags;
+  const next = flagAfterEdit(key, flags[key]);
+  return flags[key] === next ? flags : { ...flags, [key]: next };
+}
+
 function isDraft(value: unknown): value is MemberDraft {
   return typeof value === 'object' && value !== null && 'sources' in value && 'clearSpan' in value;
 }
@@ -44,11 +54,7 @@ export function useMemberDraft(initial: MemberDraft, storageKey: string) {
   const set = useCallback(
     <K extends keyof MemberDraft>(key: K) =>
       (value: MemberDraft[K]) =>
-        update((d) => ({
-          ...d,
-          [key]: value,
-          flags: isFlagged(key) ? { ...d.flags, [key]: flagAfterEdit(key, d.flags[key]) } : d.flags,
-        })),
+        update((d) => ({ ...d, [key]: value, flags: flagsAfterEdit(d.flags, key) })),
     [update],
   );
 
