@@ -51,10 +51,17 @@ export function useMemberDraft(initial: MemberDraft, storageKey: string) {
     setState((s) => ({ ...s, draft: change(s.draft) }));
   }, []);
 
+  // One setter per field for the life of the form, so a memoised field compares its handler by identity.
+  const setters = useRef(new Map<keyof MemberDraft, (value: never) => void>());
   const set = useCallback(
-    <K extends keyof MemberDraft>(key: K) =>
-      (value: MemberDraft[K]) =>
-        update((d) => ({ ...d, [key]: value, flags: flagsAfterEdit(d.flags, key) })),
+    <K extends keyof MemberDraft>(key: K): ((value: MemberDraft[K]) => void) => {
+      const known = setters.current.get(key) as ((value: MemberDraft[K]) => void) | undefined;
+      if (known) return known;
+      const setter = (value: MemberDraft[K]) =>
+        update((d) => ({ ...d, [key]: value, flags: flagsAfterEdit(d.flags, key) }));
+      setters.current.set(key, setter as (value: never) => void);
+      return setter;
+    },
     [update],
   );
 
