@@ -26,11 +26,18 @@ export function CurveDiagram({ result, width, kind, testID }: CurveDiagramProps 
   return (
     <View role="img" aria-label={text} accessibilityLabel={text} testID={testID}>
       <Svg width={layout.width} height={layout.height} aria-hidden>
-        <Path
-          d={layout.supportXs.map((x) => `M${x} 0V${layout.height}`).join('')}
-          stroke={diagramLook.guide}
-          strokeDasharray="3 3"
-        />
+        {layout.supportXs.map((x, i) => (
+          // Keyed by support, not by position: a new span moves the guide instead of remounting it.
+          <Line
+            key={`support-${i}`}
+            x1={x}
+            x2={x}
+            y1={0}
+            y2={layout.height}
+            stroke={diagramLook.guide}
+            strokeDasharray="3 3"
+          />
+        ))}
         <Path d={layout.areaPath} fill={look.fill} />
         <Line
           x1={left}
