@@ -2,6 +2,7 @@
 // Metro for the web client. In development (`expo start --web`) same-origin /api calls are passed on to
 // the Express API so the session cookie works exactly as in production; `expo export` ignores this file.
 const http = require('node:http');
+const path = require('node:path');
 const { getDefaultConfig } = require('expo/metro-config');
 
 const config = getDefaultConfig(__dirname);
@@ -23,6 +24,23 @@ function proxyToApi(req, res) {
   });
   req.pipe(upstream);
 }
+
+// zod's classic and mini builds import every language's messages as `z.locales`; the web build takes the
+// English ones only (see metro/zod-english-only.js).
+const zodEnglishOnly = path.join(__dirname, 'metro', 'zod-english-only.js');
+const zodBuild = /[\\/]zod[\\/]v4[\\/](classic|mini|core)[\\/]/;
+const upstreamResolve = config.resolver.resolveRequest;
+config.resolver.resolveRequest = (context, moduleName, platform) => {
+  if (
+    platform === 'web' &&
+    /^\.\.\/locales\/index\.c?js$/.test(moduleName) &&
+    zodBuild.test(context.originModulePath)
+  )
+    return { type: 'sourceFile', filePath: zodEnglishOnly };
+  return upstreamResolve
+    ? upstreamResolve(context, moduleName, platform)
+    : context.resolveRequest(context, moduleName, platform);
+};
 
 const expoEnhance = config.server?.enhanceMiddleware;
 

@@ -46,7 +46,8 @@ export async function editorColdMs(baseUrl: string): Promise<number> {
 /**
  * Keystroke to result in the editor with the CPU slowed `cpuRate`×: a beam with roof, ceiling, floor and a
  * point load; each key types over the span's last digit (12, 13, 14 … ft), and the time runs from the key's keydown to the frame after
- * the bending row shows the new numbers (check and diagrams re-rendered). Returns each key's time, ms.
+ * both the bending row and the moment diagram show the new numbers (check and diagrams re-rendered). Returns
+ * each key's time, ms.
  */
 export async function keystrokeToResultMs(baseUrl: string, keys: number, cpuRate: number): Promise<number[]> {
   const { page, context, close } = await openBrowser('phone');
@@ -75,16 +76,31 @@ export async function keystrokeToResultMs(baseUrl: string, keys: number, cpuRate
       await page.keyboard.press('Shift+ArrowLeft');
       const key = String(3 + (i % 6));
       await page.evaluate(() => {
-        const row = document.querySelector('[data-testid="check-bending"]');
+        // Both the check table's bending row and the moment diagram must show the new span's numbers.
+        const pending = new Set(
+          ['check-bending', 'member-diagrams-moment'].map((id) =>
+            document.querySelector(`[data-testid="${id}"]`),
+          ),
+        );
         const w = window as unknown as { __done?: Promise<number> };
         w.__done = new Promise<number>((resolve) => {
           let t0 = 0;
           window.addEventListener('keydown', () => (t0 = performance.now()), { once: true, capture: true });
-          const observer = new MutationObserver(() => {
+          const observer = new MutationObserver((records) => {
+            for (const record of records)
+              for (const target of pending) if (target?.contains(record.target)) pending.delete(target);
+            if (pending.size > 0) return;
             observer.disconnect();
             requestAnimationFrame(() => resolve(performance.now() - t0));
           });
-          if (row) observer.observe(row, { subtree: true, characterData: true, childList: true });
+          for (const target of pending)
+            if (target)
+              observer.observe(target, {
+                subtree: true,
+                characterData: true,
+                childList: true,
+                attributes: true,
+              });
         });
       });
       await page.keyboard.press(key);

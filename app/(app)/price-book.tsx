@@ -1,5 +1,9 @@
-import { PriceBookScreen } from '@/lib/ui/budget/price-book-screen';
+import { LazyPriceBookScreen, WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
 
 export default function PriceBookPage() {
-  return <PriceBookScreen />;
+  return (
+    <WorkspaceSuspense>
+      <LazyPriceBookScreen />
+    </WorkspaceSuspense>
+  );
 }

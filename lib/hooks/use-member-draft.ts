@@ -16,6 +16,16 @@ import {
 
 const isFlagged = (key: string): key is FlaggedField => key in flaggedFields;
 
+/**
+ * The flags after `key` was edited: the same object when its flag stays as it was, so the memoised cards
+ * that read `flags` do not render again on every keystroke.
+ */
+function flagsAfterEdit(flags: MemberDraft['flags'], key: string): MemberDraft['flags'] {
+  if (!isFlagged(key)) return flags;
+  const next = flagAfterEdit(key, flags[key]);
+  return flags[key] === next ? flags : { ...flags, [key]: next };
+}
+
 function isDraft(value: unknown): value is MemberDraft {
   return typeof value === 'object' && value !== null && 'sources' in value && 'clearSpan' in value;
 }
@@ -41,14 +51,17 @@ export function useMemberDraft(initial: MemberDraft, storageKey: string) {
     setState((s) => ({ ...s, draft: change(s.draft) }));
   }, []);
 
+  // One setter per field for the life of the form, so a memoised field compares its handler by identity.
+  const setters = useRef(new Map<keyof MemberDraft, (value: never) => void>());
   const set = useCallback(
-    <K extends keyof MemberDraft>(key: K) =>
-      (value: MemberDraft[K]) =>
-        update((d) => ({
-          ...d,
-          [key]: value,
-          flags: isFlagged(key) ? { ...d.flags, [key]: flagAfterEdit(key, d.flags[key]) } : d.flags,
-        })),
+    <K extends keyof MemberDraft>(key: K): ((value: MemberDraft[K]) => void) => {
+      const known = setters.current.get(key) as ((value: MemberDraft[K]) => void) | undefined;
+      if (known) return known;
+      const setter = (value: MemberDraft[K]) =>
+        update((d) => ({ ...d, [key]: value, flags: flagsAfterEdit(d.flags, key) }));
+      setters.current.set(key, setter as (value: never) => void);
+      return setter;
+    },
     [update],
   );
 

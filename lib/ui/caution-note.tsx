@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { Notice } from './notice';
 
 /** The product's caution (DESIGN.md §8), shown wherever a result is. */
@@ -7,11 +8,13 @@ export const cautionText =
 /** Extra sentence for shoring screens. */
 export const shoringCautionText = 'The shoring itself may need an engineer’s design.';
 
-/** The caution every result screen carries; `shoring` adds the shoring sentence. */
-export function CautionNote({ shoring = false }: { shoring?: boolean }) {
+function CautionNoteView({ shoring = false }: { shoring?: boolean }) {
   return (
     <Notice tone="warning" testID="caution-note">
       {shoring ? `${cautionText} ${shoringCautionText}` : cautionText}
     </Notice>
   );
 }
+
+/** The caution every result screen carries; `shoring` adds the shoring sentence. Never drawn again for a new result. */
+export const CautionNote = memo(CautionNoteView);

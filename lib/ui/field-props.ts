@@ -42,5 +42,20 @@ export function fieldProps<D, K extends TextKeys<D>>(
   const { setFlag } = form;
   if (!setFlag) return props;
   const flags = (form.draft as { flags?: Partial<Record<K, InputFlag>> }).flags;
-  return { ...props, flag: flags?.[field] ?? 'default', onFlag: (flag) => setFlag(field, flag) };
+  return { ...props, flag: flags?.[field] ?? 'default', onFlag: flagSetter(setFlag, field) };
+}
+
+type FlagSetter = (field: never, flag: InputFlag) => void;
+const flagSetters = new WeakMap<FlagSetter, Map<string, (flag: InputFlag) => void>>();
+
+/** The same handler for the same form and field on every render, so a memoised field can skip a render. */
+function flagSetter<K extends string>(
+  setFlag: (field: K, flag: InputFlag) => void,
+  field: K,
+): (flag: InputFlag) => void {
+  let byField = flagSetters.get(setFlag);
+  if (!byField) flagSetters.set(setFlag, (byField = new Map()));
+  let handler = byField.get(field);
+  if (!handler) byField.set(field, (handler = (flag) => setFlag(field, flag)));
+  return handler;
 }

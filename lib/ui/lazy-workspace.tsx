@@ -24,3 +24,14 @@ export const LazyScreenOutcome = lazy(() => loadWorkspace().then((m) => ({ defau
 
 /** The shoring planner, loaded with the engine: it computes the plan on the device as it is typed. */
 export const LazyShoringPlanner = lazy(() => loadWorkspace().then((m) => ({ default: m.ShoringPlanner })));
+
+/** A member's load path, loaded with the engine: it checks every element down to the ground on the device. */
+export const LazyMemberLoadPath = lazy(() => loadWorkspace().then((m) => ({ default: m.MemberLoadPath })));
+
+/** A member's budget, loaded with the pricing (lib/budget), which the price book shares. */
+export const LazyMemberBudgetScreen = lazy(() =>
+  loadWorkspace().then((m) => ({ default: m.MemberBudgetScreen })),
+);
+
+/** The price book, loaded with the pricing (lib/budget), which a member's budget shares. */
+export const LazyPriceBookScreen = lazy(() => loadWorkspace().then((m) => ({ default: m.PriceBookScreen })));

@@ -26,9 +26,10 @@ export function CurveDiagram({ result, width, kind, testID }: CurveDiagramProps 
   return (
     <View role="img" aria-label={text} accessibilityLabel={text} testID={testID}>
       <Svg width={layout.width} height={layout.height} aria-hidden>
-        {layout.supportXs.map((x) => (
+        {layout.supportXs.map((x, i) => (
+          // Keyed by support, not by position: a new span moves the guide instead of remounting it.
           <Line
-            key={x}
+            key={`support-${i}`}
             x1={x}
             x2={x}
             y1={0}

@@ -18,6 +18,7 @@ export type LoadDiagramProps = {
 
 const HEAD = 4;
 
+/** A uniform load's band with its down-ticks, all ticks in one path (a span change moves them, not remounts). */
 function Band({ band }: { band: LoadBand }) {
   const bottom = band.y + band.height;
   return (
@@ -31,15 +32,19 @@ function Band({ band }: { band: LoadBand }) {
         stroke={diagramLook.loadStroke}
         strokeWidth={2}
       />
-      {band.ticks.map((x) => (
+      {band.ticks.length ? (
         <Path
-          key={x}
-          d={`M${x} ${band.y}V${bottom}M${x - 2.5} ${bottom - 3}L${x} ${bottom}L${x + 2.5} ${bottom - 3}`}
+          d={band.ticks
+            .map(
+              (x) =>
+                `M${x} ${band.y}V${bottom}M${x - 2.5} ${bottom - 3}L${x} ${bottom}L${x + 2.5} ${bottom - 3}`,
+            )
+            .join('')}
           stroke={diagramLook.loadStroke}
           strokeWidth={1.25}
           fill={diagramLook.none}
         />
-      ))}
+      ) : null}
     </G>
   );
 }

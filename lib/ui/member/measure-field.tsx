@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { memo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '@/lib/theme';
 import { Button } from '@/lib/ui/button';
@@ -22,7 +22,7 @@ type MeasureFieldProps = {
 };
 
 /** A text field with its measured / assumed / default flag and, for lengths, a tape keypad below. */
-export function MeasureField({
+function MeasureFieldView({
   label,
   hint,
   value,
@@ -79,6 +79,9 @@ export function MeasureField({
     </View>
   );
 }
+
+/** Renders again only when its own props change: a keystroke in one field leaves the card's others alone. */
+export const MeasureField = memo(MeasureFieldView);
 
 const styles = StyleSheet.create({
   wrap: { gap: spacing.xs, alignSelf: 'stretch' },

@@ -79,10 +79,11 @@ export function ShortlistPanel({ input, joistDepthIn, onChoose, chosen }: Shortl
     maxDepth: joistDepthIn ? String(joistDepthIn) : '',
   }));
   const [open, setOpen] = useState(false);
-  // The shortlist checks every size: it follows the typing a beat behind, never holding up the check.
-  const deferredInput = useDeferredValue(input);
+  // The shortlist checks every size: once open it follows the typing a beat behind, never holding up the
+  // check; closed, it takes no part in a keystroke (no second, deferred render).
+  const deferredInput = useDeferredValue(open ? input : null);
   const run = useMemo(
-    () => (open ? runShortlist(deferredInput, filters) : null),
+    () => (open ? runShortlist(deferredInput ?? input, filters) : null),
     [open, deferredInput, filters],
   );
   const set =

@@ -31,4 +31,18 @@ describe('fieldProps', () => {
     bearing.onFlag?.('assumed');
     expect(calls.pop()).toBe('flag bearingLeft assumed');
   });
+
+  it('hands the same flag handler to a field on every render, one per field (memoised fields skip renders)', () => {
+    const first = fieldProps({ draft, set, setFlag }, errors, 'clearSpan').onFlag;
+    const again = fieldProps(
+      { draft: { ...draft, clearSpan: '14' }, set, setFlag },
+      errors,
+      'clearSpan',
+    ).onFlag;
+    const other = fieldProps({ draft, set, setFlag }, errors, 'bearingLeft').onFlag;
+    expect(again).toBe(first);
+    expect(other).not.toBe(first);
+    again?.('default');
+    expect(calls.pop()).toBe('flag clearSpan default');
+  });
 });

@@ -1,7 +1,11 @@
 import { useLocalSearchParams } from 'expo-router';
-import { MemberBudgetScreen } from '@/lib/ui/budget/member-budget-screen';
+import { LazyMemberBudgetScreen, WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
 
 export default function MemberBudgetPage() {
   const { jobId, memberId } = useLocalSearchParams<{ jobId: string; memberId: string }>();
-  return <MemberBudgetScreen jobId={jobId} memberId={memberId} />;
+  return (
+    <WorkspaceSuspense>
+      <LazyMemberBudgetScreen jobId={jobId} memberId={memberId} />
+    </WorkspaceSuspense>
+  );
 }

@@ -2,7 +2,7 @@ import { useLocalSearchParams } from 'expo-router';
 import { useJob } from '@/lib/hooks/use-job';
 import { useMember } from '@/lib/hooks/use-member';
 import { ErrorView } from '@/lib/ui/error-view';
-import { MemberLoadPath } from '@/lib/ui/load-path/member-load-path';
+import { LazyMemberLoadPath, WorkspaceSuspense } from '@/lib/ui/lazy-workspace';
 import { LoadingView } from '@/lib/ui/loading-view';
 import { Screen } from '@/lib/ui/screen';
 import { TextLink } from '@/lib/ui/text-link';
@@ -17,7 +17,9 @@ export default function MemberLoadPathPage() {
   return (
     <Screen title={`Load path: ${member.data.label}`}>
       <TextLink href={`/jobs/${jobId}/members/${memberId}`} label={`Back to ${member.data.label}`} />
-      <MemberLoadPath job={job.data} memberId={memberId} />
+      <WorkspaceSuspense>
+        <LazyMemberLoadPath job={job.data} memberId={memberId} />
+      </WorkspaceSuspense>
     </Screen>
   );
 }
