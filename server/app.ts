@@ -59,6 +59,19 @@ const noStore: RequestHandler = (_req, res, next) => {
   next();
 };
 
+/**
+ * compression, only for requests that accept an encoding: one without Accept-Encoding would get the body as
+ * it is anyway, so it skips compression's wrapping of the response and gets only its `Vary` header.
+ */
+function compressWhenAccepted(): RequestHandler {
+  const compress = compression();
+  return (req, res, next) => {
+    if (req.headers['accept-encoding']) return compress(req, res, next);
+    res.setHeader('Vary', 'Accept-Encoding');
+    next();
+  };
+}
+
 function cacheHeaders(res: Response, path: string): void {
   res.setHeader('Cache-Control', HASHED_PATH.test(path) ? 'public, max-age=31536000, immutable' : 'no-cache');
 }
@@ -79,7 +92,7 @@ export function createApp(options: AppOptions): Express {
   app.use(requestId);
   if (options.log) app.use(requestLog(options.log));
   app.use(securityHeaders(production));
-  app.use(compression());
+  app.use(compressWhenAccepted());
   app.use(
     '/api',
     noStore,

@@ -77,7 +77,7 @@ function describe(error: unknown): { status: number; body: ApiErrorBody } {
 
 /**
  * Last handler: answers every error with the shared error body, which names the request id. A 5xx error is
- * handed to the request log as `res.err` (pino-http's place for it), so its stack goes into that request's
+ * handed to the request log as `res.err`, so its stack goes into that request's
  * line and never to the client.
  */
 export function errorHandler(): ErrorRequestHandler {

@@ -2,7 +2,12 @@ import type { Db, DbOrTx } from '@/db/client';
 import { CalcInputError, evaluateLoadPath } from '@/lib/calc';
 import { recordAudit, type Actor } from '@/server/api/audit/audit.repository';
 import { findJob } from '@/server/api/jobs/jobs.repository';
-import { findMember, listMembersOfJob, setMemberSummary } from '@/server/api/members/members.repository';
+import {
+  findMember,
+  listMembersOnPath,
+  setMemberSummary,
+  type MemberOnPath,
+} from '@/server/api/members/members.repository';
 import { AppError, notFound } from '@/server/app-error';
 import type { LoadPathEnd, LoadPathNode } from '@/shared/schemas/calc/load-path';
 import type { Job } from '@/shared/schemas/jobs';
@@ -48,8 +53,13 @@ const elementField: FieldOf = () => 'element';
  * design request's snapshot). An engine refusal (a
  * cycle, a load off the member it lands on, an end the element does not have) is a 400 on `field`.
  */
-export function evaluateJob(db: DbOrTx, orgId: string, job: Job, fieldOf: FieldOf): JobLoadPath {
-  const members = listMembersOfJob(db, orgId, job.id);
+export function evaluateJob(
+  db: DbOrTx,
+  orgId: string,
+  job: Job,
+  fieldOf: FieldOf,
+  members: MemberOnPath[] = listMembersOnPath(db, orgId, job.id),
+): JobLoadPath {
   const elements = listElements(db, orgId, job.id);
   const bearings = listBearings(db, orgId, job.id);
   const bearingsOf = (id: string) =>
@@ -91,9 +101,10 @@ export function refreshLoadPath(
   job: Job,
   fieldOf: FieldOf,
 ): { loadPath: JobLoadPath; summaries: Map<string, MemberSummary> } {
-  const loadPath = evaluateJob(tx, orgId, job, fieldOf);
+  const members = listMembersOnPath(tx, orgId, job.id);
+  const loadPath = evaluateJob(tx, orgId, job, fieldOf, members);
   const summaries = new Map<string, MemberSummary>();
-  for (const member of listMembersOfJob(tx, orgId, job.id)) {
+  for (const member of members) {
     const onPath = loadPath.result.elements.find((e) => e.id === member.id);
     if (!onPath) continue;
     const summary: MemberSummary = {

@@ -120,6 +120,29 @@ export function listMembersOfJob(db: DbOrTx, orgId: string, jobId: string): Memb
     .all();
 }
 
+/** What the load path reads of a member, and the summary it writes back: no result or verdict to parse. */
+export type MemberOnPath = Pick<Member, 'id' | 'label' | 'kind' | 'input' | 'summary'>;
+
+const membersOnPath = preparedPerDb((db) =>
+  db
+    .select({
+      id: members.id,
+      label: members.label,
+      kind: members.kind,
+      input: members.input,
+      summary: members.summary,
+    })
+    .from(members)
+    .where(and(eq(members.jobId, sql.placeholder('jobId')), eq(members.orgId, sql.placeholder('orgId'))))
+    .orderBy(asc(members.createdAt), asc(sql`${members}.rowid`))
+    .prepare(),
+);
+
+/** The job's members as the load path reads them, in the order they were made. */
+export function listMembersOnPath(db: DbOrTx, orgId: string, jobId: string): MemberOnPath[] {
+  return membersOnPath(db).all({ jobId, orgId });
+}
+
 /** Writes a member's summary alone (its state on the job's load path changed). */
 export function setMemberSummary(db: DbOrTx, orgId: string, memberId: string, summary: MemberSummary): void {
   db.update(members)

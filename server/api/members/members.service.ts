@@ -72,25 +72,37 @@ export function createMembersService(db: Db) {
 
     /**
      * The check runs in the calculation pool; the write then happens in one transaction. A create sent again
-     * with the same device-chosen id answers the member it made (see alreadyCreated).
+     * with the same device-chosen id answers the member it made (see alreadyCreated): that is looked up
+     * before the pool, so a replay costs no check, and again in the transaction, where a create that made
+     * the id meanwhile is found.
      */
     async create(actor: Actor, jobId: string, body: MemberCreate): Promise<Created<Member>> {
       const toCheck = (job: Job) => memberToEvaluate(job, body.label, body.wall, body.input);
+      // What a save stores of the body (evaluateMember puts the label into the input).
+      const asSent = {
+        jobId,
+        label: body.label,
+        wall: body.wall,
+        input: { ...body.input, label: body.label },
+      };
+      const same = (m: Member) =>
+        sameContent({ jobId: m.jobId, label: m.label, wall: m.wall, input: m.input }, asSent);
+      const replay = (tx: DbOrTx): Created<Member> | undefined => {
+        if (!body.id) return undefined;
+        const found = findMemberInAnyFirm(tx, body.id);
+        if (!found || !alreadyCreated(found, actor, () => same(found))) return undefined;
+        const { orgId: _orgId, ...member } = found;
+        return { record: member, replayed: true };
+      };
       const from = toCheck(openJob(db, actor.orgId, jobId));
+      const early = replay(db);
+      if (early) return early;
       const computed = await evaluateInPool(from);
       return db.transaction((tx) => {
         const job = openJob(tx, actor.orgId, jobId);
+        const replayed = replay(tx);
+        if (replayed) return replayed;
         const fields = fieldsFor(toCheck(job), from, computed);
-        if (body.id) {
-          const found = findMemberInAnyFirm(tx, body.id);
-          const asSent = { jobId, label: fields.label, wall: fields.wall, input: fields.input };
-          const same = (m: Member) =>
-            sameContent({ jobId: m.jobId, label: m.label, wall: m.wall, input: m.input }, asSent);
-          if (found && alreadyCreated(found, actor, () => same(found))) {
-            const { orgId: _orgId, ...member } = found;
-            return { record: member, replayed: true };
-          }
-        }
         const owner = { orgId: actor.orgId, jobId, userId: actor.userId };
         const member = insertMember(tx, owner, fields, body.id);
         recordAudit(tx, actor, {
