@@ -61,21 +61,28 @@ export function useChecklist(jobId: string) {
   const setItem = useCallback(
     async (key: ChecklistItemKey, patch: Patch) => {
       if (!me || !current) throw new Error('The checklist is not loaded yet');
-      const item = current.items.find((i) => i.key === key);
-      const local = patched(current, key, patch, me.user);
-      const saved = await queueWrite(checklistSchema, {
-        key: crypto.randomUUID(),
-        orgId,
-        entity: 'checklist',
-        create: false,
-        recordId: `${jobId}:${key}`,
-        group: jobId,
-        label: `Checklist: ${item?.title ?? key}`,
-        method: 'PATCH',
-        path: `/api/jobs/${encodeURIComponent(jobId)}/checklist/${encodeURIComponent(key)}`,
-        body: withBaseVersion(patch, item),
-        localRecord: local,
-        cache: { recordKey: cacheKey(keys.checklist(orgId, jobId)) },
+      const recordKey = cacheKey(keys.checklist(orgId, jobId));
+      let local: Checklist = current;
+      // Built inside the queue's lock from the device's newest copy, so a quick second tap bases on the first.
+      const saved = await queueWrite(checklistSchema, async (latest) => {
+        const parsed = checklistSchema.safeParse(await latest(recordKey));
+        const newest = parsed.success ? parsed.data : current;
+        const item = newest.items.find((i) => i.key === key);
+        local = patched(newest, key, patch, me.user);
+        return {
+          key: crypto.randomUUID(),
+          orgId,
+          entity: 'checklist',
+          create: false,
+          recordId: `${jobId}:${key}`,
+          group: jobId,
+          label: `Checklist: ${item?.title ?? key}`,
+          method: 'PATCH',
+          path: `/api/jobs/${encodeURIComponent(jobId)}/checklist/${encodeURIComponent(key)}`,
+          body: withBaseVersion(patch, item),
+          localRecord: local,
+          cache: { recordKey },
+        };
       });
       if (saved.state === 'sent') await mutate(keys.jobProgress(orgId));
       return saved.data ?? local;

@@ -1,5 +1,12 @@
 import { overlayPending } from './overlay';
-import { createOutbox, NetworkFailure, type Outbox, type Sender, type SubmitResult } from './outbox';
+import {
+  createOutbox,
+  NetworkFailure,
+  type Outbox,
+  type Sender,
+  type SubmitResult,
+  type WriteBuilder,
+} from './outbox';
 import type { DeviceStore, NewOutboxItem, OutboxItem, StoredBlob } from './outbox-types';
 
 /** SWR's `mutate`, as the session needs it: set data (or an updater) and/or revalidate one key. */
@@ -28,6 +35,14 @@ export type DeviceSessionDeps = {
   isOnline: () => boolean;
   now?: () => number;
 };
+
+/**
+ * Makes a write from the device's newest copy of a key (its stored record with every waiting change laid
+ * over it); runs inside the queue's lock.
+ */
+export type DeviceWriteBuilder = (
+  latest: (key: string) => Promise<unknown>,
+) => NewOutboxItem | Promise<NewOutboxItem>;
 
 const ME_META = 'me';
 const isMeKey = (key: string) => key.startsWith('["me",');
@@ -78,10 +93,17 @@ export function createDeviceSession(deps: DeviceSessionDeps) {
   async function sent(store: DeviceStore, item: OutboxItem, body: unknown) {
     const { recordKey, listKey } = item.cache;
     if (recordKey) {
-      const sameShape = typeof body === 'object' && body !== null && 'id' in body && item.entity !== 'screen';
+      // The answer is the record itself (a checklist answers with the whole list, which has no id).
+      const sameShape =
+        typeof body === 'object' &&
+        body !== null &&
+        ('id' in body || item.entity === 'checklist') &&
+        item.entity !== 'screen';
       if (sameShape) {
         await store.putRecord(recordKey, body);
-        await deps.mutate(parseKey(recordKey), body, { revalidate: false });
+        // Changes made after this one still wait: they stay in view over the server's answer.
+        const shown = overlayPending(recordKey, body, await store.listOutbox());
+        await deps.mutate(parseKey(recordKey), shown, { revalidate: false });
       } else {
         await store.deleteRecord(recordKey);
         await deps.mutate(parseKey(recordKey));
@@ -165,26 +187,31 @@ export function createDeviceSession(deps: DeviceSessionDeps) {
      * Stores and sends one write (a photo's blob is kept on the device first, so the upload resumes after a
      * reload); when it has to wait, the device's copy shows in its record and list.
      */
-    async submit(input: NewOutboxItem, blob?: StoredBlob): Promise<SubmitResult> {
+    async submit(input: NewOutboxItem | DeviceWriteBuilder, blob?: StoredBlob): Promise<SubmitResult> {
       const opened = await session();
       if (!opened) throw new Error('No device session: sign in first');
       if (blob) await opened.store.putBlob(blob);
-      const result = await opened.outbox.submit(input);
+      const { store } = opened;
+      const write: NewOutboxItem | WriteBuilder =
+        typeof input === 'function'
+          ? (waiting) =>
+              input(async (key) => overlayPending(key, (await store.getRecord(key))?.data, waiting))
+          : input;
+      const result = await opened.outbox.submit(write);
       if (result.state === 'queued' || result.state === 'conflict') {
         await refresh(opened);
-        const { recordKey, listKey } = input.cache;
-        if (recordKey && input.localRecord !== undefined) {
-          if (input.create) await opened.store.putRecord(recordKey, input.localRecord);
-          await deps.mutate(parseKey(recordKey), input.localRecord, { revalidate: false });
+        const { recordKey, listKey } = result.item.cache;
+        // The newest waiting copy shows, never this write's over a later one made meanwhile.
+        const waiting = await store.listOutbox();
+        if (recordKey && result.item.localRecord !== undefined) {
+          const shown = overlayPending(recordKey, result.item.localRecord, waiting);
+          if (result.item.create) await store.putRecord(recordKey, shown);
+          await deps.mutate(parseKey(recordKey), shown, { revalidate: false });
         }
         if (listKey)
-          await deps.mutate(
-            parseKey(listKey),
-            (shown: unknown) => overlayPending(listKey, shown, snapshot.items),
-            {
-              revalidate: false,
-            },
-          );
+          await deps.mutate(parseKey(listKey), (shown: unknown) => overlayPending(listKey, shown, waiting), {
+            revalidate: false,
+          });
       }
       return result;
     },

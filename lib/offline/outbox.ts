@@ -6,6 +6,9 @@ export type SendAnswer = { status: number; body: unknown };
 /** Sends one queued write; throws {@link NetworkFailure} when the server cannot be reached. */
 export type Sender = (item: OutboxItem, blob?: StoredBlob) => Promise<SendAnswer>;
 
+/** Makes a write from the items waiting now (called inside the queue's lock). */
+export type WriteBuilder = (waiting: OutboxItem[]) => NewOutboxItem | Promise<NewOutboxItem>;
+
 export class NetworkFailure extends Error {
   constructor(message = 'No connection') {
     super(message);
@@ -69,6 +72,16 @@ const versionOf = (record: unknown): number | undefined =>
     ? (record as { version: number }).version
     : undefined;
 
+const baseOf = (body: unknown): number | undefined =>
+  typeof body === 'object' &&
+  body !== null &&
+  typeof (body as { baseVersion?: unknown }).baseVersion === 'number'
+    ? (body as { baseVersion: number }).baseVersion
+    : undefined;
+
+const withBase = (body: unknown, baseVersion: number | undefined): unknown =>
+  typeof body === 'object' && body !== null && baseVersion !== undefined ? { ...body, baseVersion } : body;
+
 /**
  * The device's queue of writes. Every write is stored first, then sent; a write that cannot be sent
  * (no network, a 5xx or 429) waits and is retried with exponential backoff, always with the same
@@ -84,6 +97,14 @@ export function createOutbox(options: OutboxOptions) {
   const max = options.maxDelayMs ?? 5 * 60_000;
   const changed = () => options.onChange?.();
   let running: Promise<number> | null = null;
+  let lock: Promise<unknown> = Promise.resolve();
+
+  /** Runs `task` after every earlier send or flush pass has ended: one item of the queue is in flight at a time. */
+  function exclusive<T>(task: () => Promise<T>): Promise<T> {
+    const result = lock.then(task);
+    lock = result.catch(() => undefined);
+    return result;
+  }
 
   async function sendOne(item: OutboxItem): Promise<{ outcome: Outcome | 'network'; answer?: SendAnswer }> {
     const blob = item.blobId ? await store.getBlob(item.blobId) : undefined;
@@ -128,7 +149,7 @@ export function createOutbox(options: OutboxOptions) {
 
   /** Sends what is due, oldest first; answers how many were sent. One pass runs at a time. */
   function flush(): Promise<number> {
-    running ??= (async () => {
+    running ??= exclusive(async () => {
       let sent = 0;
       try {
         const held = new Set<string>();
@@ -175,12 +196,22 @@ export function createOutbox(options: OutboxOptions) {
         changed();
       }
       return sent;
-    })();
+    });
     return running;
   }
 
-  /** Stores the write, then sends it at once unless earlier writes of its group still wait. */
-  async function submit(input: NewOutboxItem): Promise<SubmitResult> {
+  /**
+   * Stores the write, then sends it at once unless earlier writes of its group still wait. Given a builder,
+   * the write is made inside the queue's lock from what waits at that moment, so a quick second edit bases
+   * on the first one rather than on what was last drawn.
+   */
+  function submit(input: NewOutboxItem | WriteBuilder): Promise<SubmitResult> {
+    return exclusive(async () =>
+      submitNow(typeof input === 'function' ? await input(await store.listOutbox()) : input),
+    );
+  }
+
+  async function submitNow(input: NewOutboxItem): Promise<SubmitResult> {
     const item = await store.addOutbox({
       ...input,
       createdAt: now(),
@@ -189,7 +220,6 @@ export function createOutbox(options: OutboxOptions) {
       status: 'waiting',
     });
     changed();
-    if (running) await running;
     const earlier = (await store.listOutbox()).some((i) => i.group === item.group && i.seq < item.seq);
     if (earlier) {
       void flush();
@@ -243,10 +273,14 @@ export function createOutbox(options: OutboxOptions) {
     async keepMine(seq: number) {
       const item = await find(seq);
       const baseVersion = versionOf(item.current);
-      const body =
-        typeof item.body === 'object' && item.body !== null && baseVersion !== undefined
-          ? { ...item.body, baseVersion }
-          : item.body;
+      const body = withBase(item.body, baseVersion);
+      const shift = baseVersion === undefined ? undefined : baseVersion - (baseOf(item.body) ?? baseVersion);
+      if (shift)
+        for (const later of await store.listOutbox()) {
+          const laterBase = baseOf(later.body);
+          if (later.seq > item.seq && later.recordId === item.recordId && laterBase !== undefined)
+            await store.putOutbox({ ...later, body: withBase(later.body, laterBase + shift) });
+        }
       await store.putOutbox({
         ...item,
         body,

@@ -2,6 +2,7 @@ import type { z } from 'zod';
 import { ApiError } from '@/lib/api/client';
 import { apiErrorBodySchema } from '@/shared/errors';
 import { device } from './device';
+import type { DeviceWriteBuilder } from './device-session';
 import type { NewOutboxItem, StoredBlob } from './outbox-types';
 
 /** What became of a write: the server's answer, or the device's copy while the change waits. */
@@ -37,11 +38,12 @@ function refused(status: number, body: unknown): ApiError {
  * Sends one write through the device's queue. Online, the server's answer (parsed with `schema`) comes back;
  * with no network (or a server that cannot answer now) the change waits on the device and its
  * `localRecord` shows in the record's page and list. A refusal (4xx other than 409) throws the server's
- * {@link ApiError}, so field messages show at the form and nothing is kept.
+ * {@link ApiError}, so field messages show at the form and nothing is kept. Given a builder, the write is
+ * made inside the queue's lock from the device's newest copy (see {@link DeviceWriteBuilder}).
  */
 export async function queueWrite<S extends z.ZodType>(
   schema: S,
-  item: NewOutboxItem,
+  item: NewOutboxItem | DeviceWriteBuilder,
   blob?: StoredBlob,
 ): Promise<QueuedWrite<z.infer<S>>> {
   const result = await device.submit(item, blob);
@@ -54,7 +56,7 @@ export async function queueWrite<S extends z.ZodType>(
   if (result.state === 'rejected') throw refused(result.status, result.body);
   return {
     state: 'waiting',
-    data: item.localRecord as z.infer<S> | undefined,
+    data: result.item.localRecord as z.infer<S> | undefined,
     conflict: result.state === 'conflict',
   };
 }

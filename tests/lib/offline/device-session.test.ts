@@ -172,3 +172,56 @@ describe('device session', () => {
     expect(databases.size).toBe(0);
   });
 });
+
+describe('device session: the newest copy wins', () => {
+  const recordKey = JSON.stringify(['checklist', 'org-1', 'job-1']);
+  const edit = (label: string, version: number, baseVersion: number): NewOutboxItem => ({
+    key: `key-${label}`,
+    orgId: 'org-1',
+    method: 'PATCH',
+    path: '/api/jobs/job-1/checklist/a',
+    body: { label, baseVersion },
+    entity: 'checklist',
+    recordId: 'job-1:a',
+    create: false,
+    group: 'job-1',
+    label: `Checklist ${label}`,
+    cache: { recordKey },
+    localRecord: { jobId: 'job-1', label, version },
+  });
+
+  it('a server answer for one edit does not hide a later edit still waiting', async () => {
+    let online = false;
+    const { session, mutations } = setup(() =>
+      online ? { status: 200, body: { jobId: 'job-1', label: 'server', version: 9 } } : 'offline',
+    );
+    await session.remember(JSON.stringify(['me', null]), me('u1'));
+    expect((await session.submit(edit('first', 2, 1))).state).toBe('queued');
+    expect((await session.submit(edit('second', 3, 2))).state).toBe('queued');
+    online = true;
+    mutations.length = 0;
+    const outbox = await session.outbox();
+    // Send only the first: the second is made not due yet.
+    const [first, second] = (await outbox?.list()) ?? [];
+    const opened = await session.open('u1');
+    await opened.store.putOutbox({ ...first, nextAttemptAt: 0 });
+    await opened.store.putOutbox({ ...second, nextAttemptAt: Number.MAX_SAFE_INTEGER });
+    await outbox?.flush();
+    const shown = mutations.filter((m) => JSON.stringify(m.key) === recordKey).map((m) => m.data);
+    expect(shown).toEqual([{ jobId: 'job-1', label: 'second', version: 3 }]);
+  });
+
+  it('a write built from the device’s newest copy bases on a quick earlier edit', async () => {
+    const { session } = setup();
+    await session.remember(JSON.stringify(['me', null]), me('u1'));
+    await session.remember(recordKey, { jobId: 'job-1', label: 'server', version: 1 });
+    const tap = (label: string) =>
+      session.submit(async (latest) => {
+        const { version } = (await latest(recordKey)) as { version: number };
+        return edit(label, version + 1, version);
+      });
+    const [first, second] = await Promise.all([tap('first'), tap('second')]);
+    expect(first.state === 'queued' && first.item.body).toEqual({ label: 'first', baseVersion: 1 });
+    expect(second.state === 'queued' && second.item.body).toEqual({ label: 'second', baseVersion: 2 });
+  });
+});

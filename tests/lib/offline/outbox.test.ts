@@ -260,3 +260,78 @@ describe('outbox', () => {
     expect(server.calls.map((c) => c.key)).toEqual(['key-m1', 'key-m1']);
   });
 });
+
+describe('outbox serialisation', () => {
+  it('two quick submits and a flush never have two sends in flight, and go in the order made', async () => {
+    const store = createMemoryStore('test');
+    let inFlight = 0;
+    let most = 0;
+    const order: string[] = [];
+    const outbox = createOutbox({
+      store,
+      send: async (item) => {
+        inFlight += 1;
+        most = Math.max(most, inFlight);
+        await new Promise((resolve) => setTimeout(resolve, 5));
+        order.push(item.recordId);
+        inFlight -= 1;
+        return { status: 200, body: { id: item.recordId } };
+      },
+    });
+    const results = await Promise.all([
+      outbox.submit(write('m1')),
+      outbox.flush(),
+      outbox.submit(write('m2')),
+      outbox.submit(write('m3', 'job-2')),
+    ]);
+    expect(most).toBe(1);
+    expect(order).toEqual(['m1', 'm2', 'm3']);
+    expect(results.map((r) => (typeof r === 'number' ? r : r.state))).toEqual(['sent', 0, 'sent', 'sent']);
+    expect(await store.listOutbox()).toEqual([]);
+  });
+
+  it('a builder makes its write inside the lock, from the writes waiting at that moment', async () => {
+    const { outbox, server } = setup();
+    server.setOnline(false);
+    const seen: number[][] = [];
+    const build = (recordId: string) => (waiting: OutboxItem[]) => {
+      seen.push(waiting.map((i) => i.seq));
+      return write(recordId, 'job-1', { body: { id: recordId, after: waiting.length } });
+    };
+    const [first, second] = await Promise.all([outbox.submit(build('m1')), outbox.submit(build('m2'))]);
+    expect(first.state).toBe('queued');
+    expect(second.state).toBe('queued');
+    // The second builder ran after the first write was stored, so it saw it.
+    expect(seen).toEqual([[], [first.state === 'queued' ? first.item.seq : -1]]);
+    expect(second.state === 'queued' && second.item.body).toEqual({ id: 'm2', after: 1 });
+  });
+
+  it('keep mine shifts the base version of later waiting edits of the same record', async () => {
+    const theirs = { id: 'm1', label: 'Theirs', version: 6 };
+    const { outbox, server, store } = setup([
+      () => ({ status: 409, body: { error: { code: 'conflict', message: 'Changed', current: theirs } } }),
+      () => ({ status: 200, body: { id: 'm1', version: 7 } }),
+      () => ({ status: 200, body: { id: 'm1', version: 8 } }),
+      () => ({ status: 200, body: { id: 'm2', version: 2 } }),
+    ]);
+    const edit = (recordId: string, label: string, baseVersion: number) =>
+      write(recordId, 'job-1', {
+        key: `key-${label}`,
+        method: 'PATCH',
+        create: false,
+        body: { label, baseVersion },
+      });
+    expect((await outbox.submit(edit('m1', 'first', 3))).state).toBe('conflict');
+    // Made on the device copy after the first edit (version 4), it waits behind the conflict.
+    expect((await outbox.submit(edit('m1', 'second', 4))).state).toBe('queued');
+    expect((await outbox.submit(edit('m2', 'other', 1))).state).toBe('queued');
+    const [conflict] = await store.listOutbox();
+    await outbox.keepMine(conflict.seq);
+    expect(server.calls.slice(1).map((c) => c.body)).toEqual([
+      { label: 'first', baseVersion: 6 },
+      { label: 'second', baseVersion: 7 },
+      { label: 'other', baseVersion: 1 },
+    ]);
+    expect(await store.listOutbox()).toEqual([]);
+  });
+});
