@@ -1,7 +1,7 @@
 import { useRouter } from 'expo-router';
 import { useCallback } from 'react';
 import { useSWRConfig } from 'swr';
-import { archiveJob } from '@/lib/api/jobs';
+import { noContentSchema } from '@/lib/api/client';
 import { keys } from '@/lib/api/keys';
 import { cacheKey, nextVersion, queueWrite, withBaseVersion } from '@/lib/offline/queue-write';
 import { jobUpdateResultSchema, type MemberRecompute } from '@/shared/schemas/job-update';
@@ -9,7 +9,7 @@ import { jobInputSchema, jobSchema, type Job, type JobInput } from '@/shared/sch
 import { useMe } from './use-me';
 
 /**
- * Create, update and archive jobs of the active firm. Creates and edits go through the device's queue (a
+ * Create, update and archive jobs of the active firm. Creates, edits and archiving go through the device's queue (a
  * new job gets its id here), so they work with no signal; the cached list and job follow.
  */
 export function useJobMutations() {
@@ -85,11 +85,23 @@ export function useJobMutations() {
     ),
     archive: useCallback(
       async (jobId: string) => {
-        await archiveJob(jobId);
-        await mutate(keys.jobs(orgId));
+        // Through the device's queue like every other write: one key, works offline, shows as waiting.
+        await queueWrite(noContentSchema, {
+          key: crypto.randomUUID(),
+          orgId,
+          entity: 'job',
+          create: false,
+          recordId: jobId,
+          group: jobId,
+          label: 'Job archived',
+          method: 'DELETE',
+          path: `/api/jobs/${encodeURIComponent(jobId)}`,
+          body: undefined,
+          cache: { recordKey: cacheKey(keys.job(orgId, jobId)), listKey: cacheKey(keys.jobs(orgId)) },
+        });
         router.replace('/jobs');
       },
-      [mutate, orgId, router],
+      [orgId, router],
     ),
   };
 }
