@@ -1,5 +1,10 @@
 import type { ChainStep } from '@/lib/calc/load-path';
-import { groundElementKinds, type LoadPathElementKind } from '@/shared/schemas/calc/load-path';
+import {
+  groundElementKinds,
+  type LoadPathEnd,
+  type LoadPathElementKind,
+  type LoadPathState,
+} from '@/shared/schemas/calc/load-path';
 import { kindWords, lbText, pathStateLook } from './words';
 
 /** Sizes of the section drawing, px (screen) or pt (PDF): one unit either way. */
@@ -15,6 +20,32 @@ export const drawingSizes = {
   lineStep: 16,
   chipH: 18,
 } as const;
+
+/** What the drawing needs of a step: the engine's chain and the request snapshot both give it. */
+export interface DrawingStep {
+  id: string;
+  label: string;
+  kind: LoadPathElementKind;
+  state: LoadPathState;
+  depth: number;
+  ends: { end: LoadPathEnd; ontoId?: string; governingLb: number }[];
+}
+
+/** The engine's chain (chainBelow) as drawing steps. */
+export function fromChain(steps: readonly ChainStep[]): DrawingStep[] {
+  return steps.map(({ element: e, depth }) => ({
+    id: e.id,
+    label: e.label,
+    kind: e.kind as LoadPathElementKind,
+    state: e.state,
+    depth,
+    ends: e.ends.map((end) => ({
+      end: end.end,
+      ontoId: end.ontoId ?? undefined,
+      governingLb: end.governingLb,
+    })),
+  }));
+}
 
 /** Width of a text at a size, in the drawing's units. */
 export type Measure = (text: string, size: number) => number;
@@ -101,8 +132,7 @@ interface BoxText {
   tone: DrawingText['tone'];
 }
 
-function boxTexts(step: ChainStep): BoxText[] {
-  const e = step.element;
+function boxTexts(e: DrawingStep): BoxText[] {
   const look = pathStateLook[e.state];
   const danger = look.tone === 'danger';
   return [
@@ -127,26 +157,26 @@ function boxTexts(step: ChainStep): BoxText[] {
  * down to the ground), each box's words wrapped to whole words inside it, and a line from each end down
  * to what it bears on with the load on a chip. A line that passes a level without stopping runs down a
  * lane on the right, so it never crosses a box. Screen (react-native-svg) and PDF (pdf-lib) draw only this.
- * @param steps the chain from chainBelow
+ * @param steps the chain (fromChain(chainBelow(…)) on screen, the snapshot's steps in the PDF)
  * @param width the drawing's width
  * @param measure the width of a text (the PDF passes its embedded font's; the screen the estimate)
- * @example drawingLayout(chainBelow(result, 'beam'), 390).boxes.length // one per step
+ * @example drawingLayout(fromChain(chainBelow(result, 'beam')), 390).boxes.length // one per step
  */
 export function drawingLayout(
-  steps: readonly ChainStep[],
+  steps: readonly DrawingStep[],
   width: number,
   measure: Measure = estimateWidth,
 ): DrawingLayout {
   const s = drawingSizes;
-  const depthOf = new Map(steps.map((st) => [st.element.id, st.depth]));
+  const depthOf = new Map(steps.map((st) => [st.id, st.depth]));
   const skipping = steps.flatMap((st) =>
-    st.element.ends
+    st.ends
       .filter((end) => end.ontoId && (depthOf.get(end.ontoId) ?? st.depth + 1) > st.depth + 1)
-      .map((end) => `${st.element.id}-${end.end}`),
+      .map((end) => `${st.id}-${end.end}`),
   );
   const laneOf = new Map(skipping.map((key, i) => [key, i]));
   const inner = Math.max(40, width - 2 * s.pad - skipping.length * s.lane);
-  const rows = new Map<number, ChainStep[]>();
+  const rows = new Map<number, DrawingStep[]>();
   for (const st of steps) rows.set(st.depth, [...(rows.get(st.depth) ?? []), st]);
 
   const boxes: DrawingBox[] = [];
@@ -154,7 +184,7 @@ export function drawingLayout(
   const byId = new Map<string, DrawingBox>();
   let y = s.pad;
   for (const depth of [...rows.keys()].sort((a, b) => a - b)) {
-    const row = rows.get(depth) as ChainStep[];
+    const row = rows.get(depth) as DrawingStep[];
     const w = (inner - s.gapX * (row.length - 1)) / row.length;
     const wrapped = row.map((st) =>
       boxTexts(st).map((t) => ({ ...t, lines: wrapWords(t.text, w - 2 * s.inset, t.size, measure) })),
@@ -162,7 +192,7 @@ export function drawingLayout(
     const lineCount = Math.max(...wrapped.map((parts) => parts.reduce((n, p) => n + p.lines.length, 0)));
     const h = lineCount * s.lineStep + 2 * s.inset + 4;
     row.forEach((st, i) => {
-      const e = st.element;
+      const e = st;
       const box: DrawingBox = {
         id: e.id,
         depth,
@@ -195,13 +225,13 @@ export function drawingLayout(
   }
 
   const links: DrawingLink[] = steps.flatMap((st) =>
-    st.element.ends.map((end): DrawingLink => {
-      const from = byId.get(st.element.id) as DrawingBox;
+    st.ends.map((end): DrawingLink => {
+      const from = byId.get(st.id) as DrawingBox;
       const to = end.ontoId ? byId.get(end.ontoId) : undefined;
       const x1 =
         from.x + from.w / 2 + (end.end === 'left' ? -from.w / 4 : end.end === 'right' ? from.w / 4 : 0);
       const y1 = from.y + from.h;
-      const lane = laneOf.get(`${st.element.id}-${end.end}`);
+      const lane = laneOf.get(`${st.id}-${end.end}`);
       let points: { x: number; y: number }[];
       if (!to)
         points = [
@@ -232,7 +262,7 @@ export function drawingLayout(
       const cy = y1 + s.gapY / 2 - (lane === undefined ? 0 : s.chipH / 2 + 2);
       const chipY = lane === undefined ? cy - s.chipH / 2 : y1 + 2;
       return {
-        fromId: st.element.id,
+        fromId: st.id,
         toId: to?.id,
         fromDepth: st.depth,
         toDepth: to?.depth ?? st.depth + 1,

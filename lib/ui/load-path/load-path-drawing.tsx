@@ -6,7 +6,7 @@ import { colors, spacing } from '@/lib/theme';
 import { diagramLook } from '@/lib/ui/diagrams/diagram-style';
 import { Text } from '@/lib/ui/text';
 import { chainLines } from './chain-text';
-import { drawingLayout, type DrawingText } from './drawing-layout';
+import { drawingLayout, fromChain, type DrawingText } from './drawing-layout';
 
 const toneFill = { ink: diagramLook.text, muted: diagramLook.muted, danger: colors.danger } as const;
 
@@ -32,7 +32,7 @@ function DrawnText({ t }: { t: DrawingText }) {
  */
 export function LoadPathDrawing({ steps, testID }: { steps: readonly ChainStep[]; testID?: string }) {
   const [width, setWidth] = useState(0);
-  const layout = useMemo(() => drawingLayout(steps, width), [steps, width]);
+  const layout = useMemo(() => drawingLayout(fromChain(steps), width), [steps, width]);
   const lines = useMemo(() => chainLines(steps), [steps]);
   const summary = lines.map((l) => `${l.title}: ${l.state}`).join('. ');
   return (

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { chainBelow, evaluateLoadPath } from '@/lib/calc/load-path';
-import { drawingLayout, estimateWidth, wrapWords } from '@/lib/ui/load-path/drawing-layout';
+import { drawingLayout, estimateWidth, fromChain, wrapWords } from '@/lib/ui/load-path/drawing-layout';
 import { beamInput, foundationWall, node, pad, post } from '../../calc/load-path/fixtures';
 
 // Demo-style chain (invented): a beam whose left end bears straight on the basement girder while its right
@@ -49,7 +49,8 @@ const nodes = [
   node('fw', foundationWall(), [], 'Foundation wall'),
   node('pad', pad(), [], 'New pad'),
 ];
-const steps = chainBelow(evaluateLoadPath({ edition: 'ASCE 7-16', nodes }), 'beam');
+const chain = chainBelow(evaluateLoadPath({ edition: 'ASCE 7-16', nodes }), 'beam');
+const steps = fromChain(chain);
 
 describe('wrapWords', () => {
   it('keeps whole words and stays inside the width', () => {
@@ -71,7 +72,7 @@ describe('wrapWords', () => {
 
 describe('drawingLayout', () => {
   it('has the chain the test is about (a level-skipping end)', () => {
-    expect(steps.map((s) => [s.element.id, s.depth])).toEqual([
+    expect(steps.map((s) => [s.id, s.depth])).toEqual([
       ['beam', 0],
       ['post', 1],
       ['girder', 2],
@@ -86,8 +87,8 @@ describe('drawingLayout', () => {
       const layout = drawingLayout(steps, width);
 
       it('draws every element of the chain once, and every end once', () => {
-        expect(layout.boxes.map((b) => b.id).sort()).toEqual(steps.map((s) => s.element.id).sort());
-        const ends = steps.reduce((n, s) => n + s.element.ends.length, 0);
+        expect(layout.boxes.map((b) => b.id).sort()).toEqual(steps.map((s) => s.id).sort());
+        const ends = steps.reduce((n, s) => n + s.ends.length, 0);
         expect(layout.links).toHaveLength(ends);
       });
 
@@ -142,8 +143,8 @@ describe('drawingLayout', () => {
 
       it('shows each long label whole, in whole words', () => {
         const all = layout.texts.map((t) => t.text).join(' ');
-        for (const s of steps) expect(all).toContain(s.element.label.split(' ').slice(0, 2).join(' '));
-        const words = new Set(steps.flatMap((s) => s.element.label.split(' ')));
+        for (const s of steps) expect(all).toContain(s.label.split(' ').slice(0, 2).join(' '));
+        const words = new Set(steps.flatMap((s) => s.label.split(' ')));
         const title = layout.texts.filter((t) => t.size === 13).flatMap((t) => t.text.split(' '));
         for (const w of title) expect(words.has(w), w).toBe(true);
       });
