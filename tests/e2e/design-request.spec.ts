@@ -287,6 +287,8 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         await c.getByTestId('compose-save').click();
         await c.getByTestId('request-changes').waitFor();
         await state(c, 'Sent');
+        // The card loads the two versions it compares before it lists their changes.
+        await c.getByTestId('change-count').waitFor();
         const changes = await c.getByTestId('request-changes').innerText();
         expect(changes).toContain('Version 2: The attic header goes too');
         // The change card names each field in words, the old value beside the new.
