@@ -8,6 +8,7 @@ import {
   requestFileSchema,
   requestInvitationPreviewSchema,
   requestListSchema,
+  requestVersionSnapshotSchema,
   type RequestDetail,
 } from '@/shared/schemas/requests/views';
 import type { RequestState, StatusChange } from '@/shared/schemas/requests/workflow';
@@ -27,6 +28,10 @@ export const fetchJobRequests = (jobId: string) =>
   );
 
 export const fetchRequest = (requestId: string) => apiRequest('GET', path(requestId), requestDetailSchema);
+
+/** One sent version as it was frozen, for comparing two versions. */
+export const fetchRequestVersion = (requestId: string, version: number) =>
+  apiRequest('GET', path(requestId, `/versions/${version}`), requestVersionSnapshotSchema);
 
 export const createRequest = (jobId: string, body: RequestComposeBody) =>
   apiRequest('POST', `/api/jobs/${encodeURIComponent(jobId)}/requests`, requestDetailSchema, body);

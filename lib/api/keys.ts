@@ -32,6 +32,9 @@ export const keys = {
   /** The engineer's members that supersede a job's preliminary sizes (member-designs.ts). */
   jobDesigns: (orgId: string, jobId: string) => ['job-designs', orgId, jobId] as const,
   request: (orgId: string, requestId: string) => ['request', orgId, requestId] as const,
+  /** One sent version of a request: frozen, so it never needs revalidating. */
+  requestVersion: (orgId: string, requestId: string, version: number) =>
+    ['request-version', orgId, requestId, version] as const,
 };
 
 /** True for keys that belong to a firm or a session, so a firm switch or sign-out can drop them. */
@@ -56,6 +59,7 @@ export function isFirmScopedKey(key: unknown): boolean {
       'job-requests',
       'job-designs',
       'request',
+      'request-version',
       'price-book',
       'member-budget',
       'job-budget',

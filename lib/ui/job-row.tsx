@@ -1,16 +1,23 @@
 import { Link } from 'expo-router';
 import { Pressable, StyleSheet, View } from 'react-native';
 import type { JobProgressList } from '@/shared/schemas/job-checklist';
-import type { Job } from '@/shared/schemas/jobs';
+import type { Job, MemberStateCounts } from '@/shared/schemas/jobs';
 import { colors, layout, radii, spacing } from '@/lib/theme';
 import { Icon } from './icon';
 import { progressText } from './bearing/progress-text';
 import { yearBuiltLabel } from './job-labels';
+import { JobMemberStates } from './job-member-states';
 import { DeviceMark } from './offline/device-mark';
 import { Text } from './text';
 
-/** One job in the list: name, address, year built, load standard and checklist progress; opens the job. */
-export function JobRow({ job, progress }: { job: Job; progress?: JobProgressList['jobs'][number] }) {
+/** One job in the list: name, address, year built, load standard, members by state and checklist progress. */
+export function JobRow({
+  job,
+  progress,
+}: {
+  job: Job & { memberStates?: MemberStateCounts };
+  progress?: JobProgressList['jobs'][number];
+}) {
   return (
     <Link href={{ pathname: '/jobs/[jobId]', params: { jobId: job.id } }} asChild>
       <Pressable
@@ -30,6 +37,7 @@ export function JobRow({ job, progress }: { job: Job; progress?: JobProgressList
               <Text variant="caption" tone="muted">
                 {yearBuiltLabel(job)} · {job.loadStandard}
               </Text>
+              {job.memberStates ? <JobMemberStates counts={job.memberStates} /> : null}
               <DeviceMark recordId={job.id} />
               {progress ? (
                 <Text variant="caption" testID="job-progress">

@@ -94,7 +94,20 @@ export const jobSchema = jobInputSchema.extend({
 });
 export type Job = z.infer<typeof jobSchema>;
 
-export const jobListSchema = z.object({ jobs: z.array(jobSchema) });
+/** How many of a job's members are in each state (shared/schemas/members.ts `memberStates`). */
+export const memberStateCountsSchema = z.object({
+  passes: z.number().int(),
+  fails: z.number().int(),
+  'engineer-needed': z.number().int(),
+  'load-path-open': z.number().int(),
+});
+export type MemberStateCounts = z.infer<typeof memberStateCountsSchema>;
+
+/** A row of `GET /api/jobs`: the job and its members counted by state. */
+export const jobListItemSchema = jobSchema.extend({ memberStates: memberStateCountsSchema });
+export type JobListItem = z.infer<typeof jobListItemSchema>;
+
+export const jobListSchema = z.object({ jobs: z.array(jobListItemSchema) });
 
 const jobField = jobInputSchema.shape;
 

@@ -287,9 +287,16 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         await c.getByTestId('compose-save').click();
         await c.getByTestId('request-changes').waitFor();
         await state(c, 'Sent');
+        // The card loads the two versions it compares before it lists their changes.
+        await c.getByTestId('change-count').waitFor();
         const changes = await c.getByTestId('request-changes').innerText();
         expect(changes).toContain('Version 2: The attic header goes too');
-        expect(changes).toContain('questions: Can it be flush? → Can both be flush?');
+        // The change card names each field in words, the old value beside the new.
+        expect(changes).toContain('Questions for the engineer');
+        expect(changes).toMatch(/Was \(version 1\)\s+Can it be flush\?/);
+        expect(changes).toMatch(/Now \(version 2\)\s+Can both be flush\?/);
+        expect(changes).toContain('Photo attic-over.png');
+        expect(changes).not.toContain('members.');
         expect(changes).toContain(`Attic header ${name}`);
         await c.getByTestId('request-changes').scrollIntoViewIfNeeded();
         await snap(c, `handoff/${name}-revision-sent`);

@@ -89,12 +89,18 @@ export async function createRouteWorld(server: TestServer) {
 
   /**
    * A fresh value for the route parameter `name`, owned by `owner`'s firm: `token` is an invitation link's
-   * token; `resetToken` and `verifyToken` a password reset or confirmation link's (of a throwaway account);
+   * token; `version` is 1 of the request made for `requestId` (sent); `resetToken` and `verifyToken` a password reset or confirmation link's (of a throwaway account);
    * `<thing>Id` is the id the route `POST …/<thing>s` answers, made with its sample body (its own
    * parameters made the same way). A parameter that fits neither needs a line here.
    */
   async function makeParam(name: string, owner: Person, made: Record<string, string> = {}): Promise<string> {
     if (name === 'requestId') return makeDesignRequest(owner);
+    if (name === 'version') {
+      // The request made for `requestId` is a Draft: send it, so its version 1 exists.
+      if (made.requestId)
+        await request(server.app).post(`/api/requests/${made.requestId}/send`).set('Cookie', owner.cookie);
+      return '1';
+    }
     if (name === 'attachmentId') {
       const requestId = made.requestId ?? (await makeDesignRequest(owner));
       const res = await request(server.app)

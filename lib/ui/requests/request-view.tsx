@@ -12,6 +12,7 @@ import { RequestActionsCard } from './request-actions-card';
 import { RequestFilesCard } from './request-files-card';
 import { RequestSnapshotCard } from './request-snapshot-card';
 import { RequestThreadCard } from './request-thread-card';
+import { VersionCompareCard } from './version-compare-card';
 
 /** One design request for either side: its state, the snapshot read-only, files, thread and what to do next. */
 export function RequestView({
@@ -53,23 +54,7 @@ export function RequestView({
       <RequestSnapshotCard request={request} />
       <RequestFilesCard request={request} />
       <RequestThreadCard request={request} onChange={onChange} />
-      {request.versions.length > 1 ? (
-        <Card title="What changed between versions" testID="request-changes">
-          {request.versions.slice(1).map((version) => (
-            <View key={version.version} style={styles.version}>
-              <Text variant="bodyStrong">
-                Version {version.version}
-                {version.note ? `: ${version.note}` : ''}
-              </Text>
-              {version.changes.slice(0, 40).map((change) => (
-                <Text key={change.path} variant="caption">
-                  {change.path}: {String(change.before ?? '—')} → {String(change.after ?? '—')}
-                </Text>
-              ))}
-            </View>
-          ))}
-        </Card>
-      ) : null}
+      {request.versions.length > 1 ? <VersionCompareCard request={request} /> : null}
       <CautionNote />
     </View>
   );
@@ -77,5 +62,4 @@ export function RequestView({
 
 const styles = StyleSheet.create({
   wrap: { gap: spacing.lg },
-  version: { gap: spacing.xxs, paddingTop: spacing.sm },
 });

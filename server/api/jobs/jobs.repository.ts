@@ -2,8 +2,8 @@ import { and, desc, eq, isNotNull, isNull, sql } from 'drizzle-orm';
 import type { DbOrTx } from '@/db/client';
 import { newId } from '@/db/new-id';
 import { preparedPerDb } from '@/db/prepared';
-import { jobs } from '@/db/schema';
-import type { Job, JobPatch, jobInputSchema } from '@/shared/schemas/jobs';
+import { jobs, members } from '@/db/schema';
+import type { Job, JobPatch, MemberStateCounts, jobInputSchema } from '@/shared/schemas/jobs';
 import type { z } from 'zod';
 
 export type JobFields = z.output<typeof jobInputSchema>;
@@ -41,6 +41,36 @@ const jobById = preparedPerDb((db) =>
 
 export function listJobs(db: DbOrTx, orgId: string, archived: boolean): Job[] {
   return (archived ? archivedJobsOf : openJobsOf)(db).all({ orgId }).map(toJob);
+}
+
+const memberState = sql<string>`json_extract(${members.summary}, '$.state')`;
+
+/** One grouped query for every job of the firm: its members counted by the state their summary holds. */
+const memberStatesOf = preparedPerDb((db) =>
+  db
+    .select({ jobId: members.jobId, state: memberState, count: sql<number>`count(*)` })
+    .from(members)
+    .where(eq(members.orgId, sql.placeholder('orgId')))
+    .groupBy(members.jobId, memberState)
+    .prepare(),
+);
+
+export const noMembers = (): MemberStateCounts => ({
+  passes: 0,
+  fails: 0,
+  'engineer-needed': 0,
+  'load-path-open': 0,
+});
+
+/** The firm's members counted by state, per job (a job with no members has no entry). */
+export function memberStatesByJob(db: DbOrTx, orgId: string): Map<string, MemberStateCounts> {
+  const out = new Map<string, MemberStateCounts>();
+  for (const row of memberStatesOf(db).all({ orgId })) {
+    const counts = out.get(row.jobId) ?? noMembers();
+    if (row.state in counts) counts[row.state as keyof MemberStateCounts] += row.count;
+    out.set(row.jobId, counts);
+  }
+  return out;
 }
 
 /** Only a job of `orgId`: another firm's id reads as missing. */

@@ -5,13 +5,15 @@ import { sameContent } from '@/server/services/idempotency/idempotency-store';
 import { recordAudit, type Actor } from '@/server/api/audit/audit.repository';
 import { recomputeJobMembers } from '@/server/api/members/job-context';
 import type { JobUpdateResult } from '@/shared/schemas/job-update';
-import type { Job, JobCreate, JobPatch } from '@/shared/schemas/jobs';
+import type { Job, JobCreate, JobListItem, JobPatch } from '@/shared/schemas/jobs';
 import {
   archiveJob,
   findJob,
   findJobInAnyFirm,
   insertJob,
   listJobs,
+  memberStatesByJob,
+  noMembers,
   updateJob,
   type JobFields,
 } from './jobs.repository';
@@ -33,8 +35,13 @@ function fieldsOf(job: Job): JobFields {
 /** Jobs of the actor's firm. A job id of another firm is "not found", never "forbidden". */
 export function createJobsService(db: Db) {
   return {
-    list(orgId: string, archived: boolean): Job[] {
-      return listJobs(db, orgId, archived);
+    /** The firm's jobs, each with its members counted by state (one grouped query for all of them). */
+    list(orgId: string, archived: boolean): JobListItem[] {
+      const states = memberStatesByJob(db, orgId);
+      return listJobs(db, orgId, archived).map((job) => ({
+        ...job,
+        memberStates: states.get(job.id) ?? noMembers(),
+      }));
     },
 
     get(orgId: string, jobId: string): Job {

@@ -162,6 +162,14 @@ export function listVersions(db: DbOrTx, requestId: string) {
     .all();
 }
 
+export function findVersion(db: DbOrTx, requestId: string, version: number) {
+  return db
+    .select()
+    .from(designRequestVersions)
+    .where(and(eq(designRequestVersions.requestId, requestId), eq(designRequestVersions.version, version)))
+    .get();
+}
+
 export function insertThreadEntry(
   db: DbOrTx,
   entry: {

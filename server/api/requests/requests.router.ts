@@ -21,6 +21,7 @@ import type { RequestsService } from './requests.service';
 
 const jobParams = z.object({ jobId: z.string().min(1).max(100) });
 const requestParams = z.object({ requestId: z.string().min(1).max(100) });
+const versionParams = requestParams.extend({ version: z.coerce.number().int().min(1).max(10_000) });
 
 export const viewerOf = (res: Response): RequestViewer => ({
   userId: signedInUser(res).id,
@@ -120,6 +121,10 @@ export function requestsRouter(deps: RequestsDeps): Router {
       res.status(201).json(requests.reply(viewerOf(res), req.params.requestId, req.body));
     },
   );
+
+  router.get('/:requestId/versions/:version', validate({ params: versionParams }), (req, res) => {
+    res.json(requests.version(viewerOf(res), req.params.requestId, req.params.version));
+  });
 
   router.get('/:requestId/messages', validate({ params: requestParams }), (req, res) => {
     res.json({ thread: requests.thread(viewerOf(res), req.params.requestId) });

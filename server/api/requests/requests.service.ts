@@ -13,7 +13,12 @@ import type { Mailer } from '@/server/services/mail/mailer';
 import { enqueueMail } from '@/server/services/mail/outbox.repository';
 import type { RequestCompose, RequestPatch } from '@/shared/schemas/requests/compose';
 import type { EngineerReply } from '@/shared/schemas/requests/reply';
-import type { RequestDetail, RequestListItem, ThreadEntry } from '@/shared/schemas/requests/views';
+import type {
+  RequestDetail,
+  RequestListItem,
+  RequestVersionSnapshot,
+  ThreadEntry,
+} from '@/shared/schemas/requests/views';
 import {
   REQUEST_STATE_LABELS,
   type FeeQuote,
@@ -39,6 +44,7 @@ import {
   listAttachments,
   listEngineerRequests,
   listFirmRequests,
+  findVersion,
   listVersions,
   updateRequest,
   type RequestRow,
@@ -228,6 +234,14 @@ export function createRequestsService(deps: { db: Db; mailer: Mailer; appOrigin:
         const seen = row[unreadFlag(side)] ? updateRequest(tx, row.id, { [unreadFlag(side)]: false }) : row;
         return describeRequest(tx, seen, side);
       });
+    },
+
+    /** One sent version's frozen snapshot, for comparing two versions side by side. */
+    version(viewer: RequestViewer, requestId: string, version: number): RequestVersionSnapshot {
+      const { row } = openRequest(db, viewer, requestId);
+      const found = findVersion(db, row.id, version);
+      if (!found) throw notFound('Version');
+      return { version: found.version, sentAt: found.sentAt, note: found.note, snapshot: found.snapshot };
     },
 
     thread(viewer: RequestViewer, requestId: string): ThreadEntry[] {

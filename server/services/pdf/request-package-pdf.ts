@@ -9,6 +9,7 @@ import {
 } from '@/shared/schemas/requests/snapshot';
 import { REQUEST_STATE_LABELS } from '@/shared/schemas/requests/workflow';
 import { drawMemberDiagrams, drawSketch } from './pdf-diagrams';
+import { drawLoadPathSection } from './pdf-load-path';
 import { MUTED, PAGE, RULE, PdfWriter } from './pdf-writer';
 
 /**
@@ -173,6 +174,7 @@ function loadPath(w: PdfWriter, m: SnapshotMember): void {
       : 'Open: the load does not yet reach the ground through checked framing (reasons below).',
     { bold: true },
   );
+  drawLoadPathSection(w, m.loadPath);
   w.table(
     ['Level', 'Step', 'Load arriving', 'Check', 'State', 'Ends'],
     m.loadPath.map((step) => [

@@ -73,6 +73,15 @@ export const requestVersionSchema = z.object({
 });
 export type RequestVersion = z.infer<typeof requestVersionSchema>;
 
+/** `GET /api/requests/:requestId/versions/:version`: one sent version as it was frozen. */
+export const requestVersionSnapshotSchema = z.object({
+  version: z.number().int(),
+  sentAt: z.string(),
+  note: z.string(),
+  snapshot: requestSnapshotSchema,
+});
+export type RequestVersionSnapshot = z.infer<typeof requestVersionSnapshotSchema>;
+
 /** Who may do what next, for the viewer: the screens show only these. */
 export const requestActions = [
   'edit',

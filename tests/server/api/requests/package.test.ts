@@ -140,6 +140,27 @@ describe('the PDF', () => {
   });
 });
 
+describe('the load path section in the PDF', () => {
+  it('draws the recorded chain (the member, its state, each open end with its load) and still parses', async () => {
+    const id = await sentWithPhotos();
+    const json = await world.engineer.agent.get(`/api/requests/${id}/package.json`).expect(200);
+    const chain = requestPackageSchema.parse(json.body).request.members[0].loadPath ?? [];
+    expect(chain.length).toBeGreaterThan(0);
+    const res = await binary(world.engineer.agent, `/api/requests/${id}/package.pdf`).expect(200);
+    const bytes = res.body as Buffer;
+    await PDFDocument.load(bytes);
+    const parser = new PDFParse({ data: new Uint8Array(bytes) });
+    const { text } = await parser.getText();
+    await parser.destroy();
+    const flat = text.replace(/\s+/g, ' ');
+    // The drawing's box words (kind and state) and each open end's chip ("… lb → ?").
+    expect(flat).toContain('! Load path open');
+    expect(flat).toContain('New member');
+    const chips = flat.match(/[\d,]+ lb → \?/g) ?? [];
+    expect(chips.length).toBeGreaterThanOrEqual(chain[0].ends.length);
+  });
+});
+
 describe('the JSON package', () => {
   it('validates against its own schema and round-trips', async () => {
     const id = await sentWithPhotos();

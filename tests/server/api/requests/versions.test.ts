@@ -1,0 +1,44 @@
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { requestVersionSnapshotSchema } from '@/shared/schemas/requests/views';
+import { requestWorld } from '@/tests/helpers/design-requests';
+import { SAMPLE_HEADER } from '@/tests/helpers/sample-bodies';
+import { createTestServer, signedUpAgent, type TestServer } from '@/tests/helpers/server';
+
+let server: TestServer;
+let world: Awaited<ReturnType<typeof requestWorld>>;
+beforeEach(async () => {
+  server = await createTestServer();
+  world = await requestWorld(server);
+});
+afterEach(() => server.close());
+
+describe('GET /api/requests/:requestId/versions/:version', () => {
+  it('gives each sent version as frozen, to the firm and the addressed engineer', async () => {
+    const id = await world.sent();
+    await world.firm.agent
+      .patch(`/api/members/${world.memberId}`)
+      .send({ input: { ...SAMPLE_HEADER, clearSpanFt: 7 } })
+      .expect(200);
+    await world.firm.agent
+      .post(`/api/requests/${id}/revisions`)
+      .send({ note: 'Opening is 7 ft' })
+      .expect(201);
+    const v1 = requestVersionSnapshotSchema.parse(
+      (await world.engineer.agent.get(`/api/requests/${id}/versions/1`).expect(200)).body,
+    );
+    const v2 = requestVersionSnapshotSchema.parse(
+      (await world.firm.agent.get(`/api/requests/${id}/versions/2`).expect(200)).body,
+    );
+    expect(v1.snapshot.members[0].input.clearSpanFt).toBe(6);
+    expect(v2).toMatchObject({ version: 2, note: 'Opening is 7 ft' });
+    expect(v2.snapshot.members[0].input.clearSpanFt).toBe(7);
+  });
+
+  it('reads a version that was never sent, a bad number and another firm’s request as missing or refused', async () => {
+    const id = await world.sent();
+    await world.firm.agent.get(`/api/requests/${id}/versions/2`).expect(404);
+    await world.firm.agent.get(`/api/requests/${id}/versions/zero`).expect(400);
+    const other = await signedUpAgent(server.app, { firmName: 'Other Remodeling' });
+    await other.agent.get(`/api/requests/${id}/versions/1`).expect(404);
+  });
+});
