@@ -1,27 +1,15 @@
-import {
-  CalcInputError,
-  ENGINE_VERSION,
-  checkMember,
-  envelopeReasons,
-  prescriptiveVerdict,
-} from '@/lib/calc';
+import { CalcInputError, ENGINE_VERSION, checkMember, prescriptiveVerdict } from '@/lib/calc';
+import { memberSummary } from '@/lib/members/member-summary';
 import { AppError } from '@/server/app-error';
 import { runInPool } from '@/server/services/calc-pool';
 import type { MemberCheckInput } from '@/shared/schemas/calc/member';
 import type { Job } from '@/shared/schemas/jobs';
-import type { MemberCheckState, MemberSummary } from '@/shared/schemas/members';
 import type { MemberFields } from './members.repository';
 
 /** Engine input errors name a field of the check input; in a member body that input sits under `input`. */
 function asFieldError(error: unknown): unknown {
   if (!(error instanceof CalcInputError)) return error;
   return new AppError('bad_request', error.message, { [`input.${error.field}`]: [error.message] });
-}
-
-/** A failing check comes first: "needs an engineer" is only said of a member that passes. */
-function memberState(pass: boolean, engineerNeeded: boolean): MemberCheckState {
-  if (!pass) return 'fails';
-  return engineerNeeded ? 'engineer-needed' : 'passes';
 }
 
 /** What a member's check reads: the member as it is saved and the two job values a header's verdict takes. */
@@ -49,8 +37,8 @@ export const memberToEvaluate = (
 
 /**
  * Runs the engine on what is being saved: the check with its diagram samples, and for a header the
- * prescriptive-path verdict on the job's building width and ground snow. A beam always needs an engineer;
- * its reasons come from the same envelope test, so `engineerReasons` lists every one. The engine's input
+ * prescriptive-path verdict on the job's building width and ground snow, summarised by the rule the device
+ * also uses ({@link memberSummary}). The engine's input
  * error is thrown as it is (CalcInputError): this also runs in a worker thread of the calculation pool.
  */
 export function evaluateMember(given: MemberToEvaluate): MemberFields {
@@ -59,20 +47,6 @@ export function evaluateMember(given: MemberToEvaluate): MemberFields {
   const result = checkMember(input, { diagrams: true });
   const facts = { member: input, buildingWidthFt, groundSnowPsf };
   const prescriptive = input.kind === 'header' ? prescriptiveVerdict(facts) : null;
-  const engineerNeeded = prescriptive ? prescriptive.verdict === 'engineer-needed' : true;
-  const state = memberState(result.pass, engineerNeeded);
-  // The state is the member's own until the job's load path is checked with it (load-path.service).
-  const summary: MemberSummary = {
-    state,
-    checkState: state,
-    pass: result.pass,
-    governingCheck: result.governing.check,
-    governingRatio: result.governing.ratio,
-    warningsCount: result.warnings.length,
-    sizeLabel: result.member.sizeLabel,
-    materialLabel: result.member.materialLabel,
-    engineerReasons: state !== 'engineer-needed' ? [] : (prescriptive?.reasons ?? envelopeReasons(facts)),
-  };
   return {
     kind: input.kind,
     label,
@@ -80,7 +54,7 @@ export function evaluateMember(given: MemberToEvaluate): MemberFields {
     input,
     materialId: input.materialId,
     sizeId: input.sizeId,
-    summary,
+    summary: memberSummary(facts, result, prescriptive),
     result,
     prescriptive,
     engineVersion: ENGINE_VERSION,
