@@ -1,4 +1,4 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { findJobInAnyFirm } from '@/server/api/jobs/jobs.repository';
 import { jobPathInput, pathInputWith, refreshLoadPath } from '@/server/api/load-path/load-path.service';
 import { evaluateMember, memberToEvaluate } from '@/server/api/members/member-evaluation';
@@ -7,18 +7,9 @@ import { memberCheckInputSchema, type MemberCheckInputBody } from '@/shared/sche
 import { bearingSavedSchema, type ElementCreateBody } from '@/shared/schemas/load-path-elements';
 import { memberSchema, type MemberSummary } from '@/shared/schemas/members';
 import { databaseDump } from '@/tests/helpers/db-dump';
-import { createTestServer, signedUpAgent, type Agent, type TestServer } from '@/tests/helpers/server';
+import { withOwnerJob } from '@/tests/helpers/owner-job';
 
-let server: TestServer;
-let owner: Agent;
-let jobId: string;
-
-beforeEach(async () => {
-  server = await createTestServer();
-  owner = (await signedUpAgent(server.app)).agent;
-  jobId = (await owner.post('/api/jobs').send({ name: 'Garage opening' }).expect(201)).body.id;
-});
-afterEach(() => server.close());
+const world = withOwnerJob('Garage opening');
 
 const DFL2 = 'sawn-douglas-fir-larch-no2';
 
@@ -50,10 +41,10 @@ const pad: ElementCreateBody = {
   element: { kind: 'footing', data: { footing: 'new-pad', confirmed: true } },
 };
 
-const setEnd = (path: string, body: object) => owner.put(`/api/${path}`).send(body).expect(200);
+const setEnd = (path: string, body: object) => world.owner.put(`/api/${path}`).send(body).expect(200);
 const addMember = async (label: string, input: MemberCheckInputBody) =>
   memberSchema.parse(
-    (await owner.post(`/api/jobs/${jobId}/members`).send({ label, input }).expect(201)).body,
+    (await world.owner.post(`/api/jobs/${world.jobId}/members`).send({ label, input }).expect(201)).body,
   );
 
 /** Header on a girder on two posts on two pads, built through the API. */
@@ -72,20 +63,22 @@ async function buildChain() {
 }
 
 function context() {
-  const job = findJobInAnyFirm(server.db, jobId);
+  const job = findJobInAnyFirm(world.server.db, world.jobId);
   if (!job) throw new Error('job not found');
   return { job, orgId: job.orgId };
 }
 
 const storedSummaries = (): Record<string, MemberSummary> => {
   const { orgId } = context();
-  return Object.fromEntries(listMembersOnPath(server.db, orgId, jobId).map((m) => [m.id, m.summary]));
+  return Object.fromEntries(
+    listMembersOnPath(world.server.db, orgId, world.jobId).map((m) => [m.id, m.summary]),
+  );
 };
 
 /** Every member's summary from a full recompute of the job's load path on the main thread. */
 function fullRecompute(): Record<string, MemberSummary> {
   const { job, orgId } = context();
-  return server.db.transaction((tx) => {
+  return world.server.db.transaction((tx) => {
     const { summaries } = refreshLoadPath(tx, orgId, job, () => 'input');
     return Object.fromEntries(summaries);
   });
@@ -101,22 +94,22 @@ describe('a member save evaluates the load path in the pool and stores what a fu
     };
     // What the pool evaluates before the transaction: the job as it will be with the header saved.
     const parsed = memberCheckInputSchema.parse(heavier);
-    const expected = pathInputWith(server.db, orgId, job, {
+    const expected = pathInputWith(world.server.db, orgId, job, {
       ...evaluateMember(memberToEvaluate(job, header.label, header.wall, parsed)),
       id: header.id,
     });
     const before = storedSummaries();
-    await owner.patch(`/api/members/${header.id}`).send({ input: heavier }).expect(200);
+    await world.owner.patch(`/api/members/${header.id}`).send({ input: heavier }).expect(200);
     // The transaction read exactly that, so the pool's evaluation was the one used.
-    expect(JSON.stringify(jobPathInput(server.db, orgId, job))).toBe(JSON.stringify(expected));
+    expect(JSON.stringify(jobPathInput(world.server.db, orgId, job))).toBe(JSON.stringify(expected));
     const stored = storedSummaries();
     expect(stored[girder.id]?.loadPath?.closed).toBe(true);
     expect(stored[header.id]?.loadPath?.closed).toBe(true);
     // The header's own check changed with its load.
     expect(stored[header.id]?.governingRatio).toBeGreaterThan(before[header.id]?.governingRatio ?? Infinity);
-    const dump = databaseDump(server.db);
+    const dump = databaseDump(world.server.db);
     expect(fullRecompute()).toEqual(stored);
-    expect(databaseDump(server.db)).toEqual(dump);
+    expect(databaseDump(world.server.db)).toEqual(dump);
   });
 
   it('a member added to a job with a chain stores what a full recompute stores, and changes no other', async () => {
@@ -126,8 +119,8 @@ describe('a member save evaluates the load path in the pool and stores what a fu
     const stored = storedSummaries();
     expect(stored[added.id]?.state).toBe('load-path-open');
     expect({ ...stored, [added.id]: undefined }).toEqual({ ...before, [added.id]: undefined });
-    const dump = databaseDump(server.db);
+    const dump = databaseDump(world.server.db);
     expect(fullRecompute()).toEqual(stored);
-    expect(databaseDump(server.db)).toEqual(dump);
+    expect(databaseDump(world.server.db)).toEqual(dump);
   });
 });
