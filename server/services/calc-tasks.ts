@@ -1,4 +1,4 @@
-import { CalcInputError, buildShortlist, buildSpanTable } from '@/lib/calc';
+import { CalcInputError, buildShortlist, buildSpanTable, evaluateLoadPath } from '@/lib/calc';
 import type { SentMemberBudget } from '@/lib/budget';
 import type { SavedBudget } from '@/server/api/budgets/budgets.repository';
 import { memberBudgetView, type PriceBookState } from '@/server/api/budgets/member-budget-view';
@@ -9,6 +9,7 @@ import { requestPackagePdf, type PackagePhoto } from '@/server/services/pdf/requ
 import type { MemberBudgetView } from '@/shared/schemas/budgets';
 import type { Job } from '@/shared/schemas/jobs';
 import type { Member } from '@/shared/schemas/members';
+import type { LoadPathResult } from '@/shared/schemas/calc/load-path';
 import type { ShortlistInput } from '@/shared/schemas/calc/shortlist';
 import type { SpanTableInput } from '@/shared/schemas/calc/span-table';
 import type { RequestPackage } from '@/shared/schemas/requests/package';
@@ -43,6 +44,14 @@ export function spanTable(input: SpanTableInput): CalcTaskAnswer {
 /** Runs in a worker thread (calc-worker.cjs): what a member save stores (check, diagrams, verdict). */
 export function memberFields(input: MemberToEvaluate): CalcTaskAnswer<MemberFields> {
   return answer(() => evaluateMember(input));
+}
+
+/**
+ * Runs in a worker thread (calc-worker.cjs): a job's load path from its input as JSON text, the form the
+ * main thread compares with what it reads in the write's transaction.
+ */
+export function loadPath(inputJson: string): CalcTaskAnswer<LoadPathResult> {
+  return answer(() => evaluateLoadPath(JSON.parse(inputJson)));
 }
 
 /** What one member's budget is priced from, as read from the database on the main thread. */

@@ -9,7 +9,14 @@ import {
   type MemberOnPath,
 } from '@/server/api/members/members.repository';
 import { AppError, notFound } from '@/server/app-error';
-import type { LoadPathEnd, LoadPathNode } from '@/shared/schemas/calc/load-path';
+import { runTask } from '@/server/services/calc-pool';
+import type { CalcTaskAnswer } from '@/server/services/calc-tasks';
+import type {
+  LoadPathEnd,
+  LoadPathInput,
+  LoadPathNode,
+  LoadPathResult,
+} from '@/shared/schemas/calc/load-path';
 import type { Job } from '@/shared/schemas/jobs';
 import type {
   BearingSaved,
@@ -48,18 +55,21 @@ export type FieldOf = (engineField: string) => string;
 const bearingField: FieldOf = (field) => (field.endsWith('.atFt') ? 'atFt' : 'ontoId');
 const elementField: FieldOf = () => 'element';
 
-/**
- * The job's members and existing framing as the engine's nodes, and its evaluation (also frozen into a
- * design request's snapshot). An engine refusal (a
- * cycle, a load off the member it lands on, an end the element does not have) is a 400 on `field`.
- */
-export function evaluateJob(
+/** What a job's load path is evaluated from, as read from the database: the engine's input is plain data. */
+interface JobPathRead {
+  members: MemberOnPath[];
+  elements: Element[];
+  bearings: ReturnType<typeof listBearings>;
+  input: LoadPathInput;
+}
+
+/** The job's members (given, or as stored) and existing framing as the engine's nodes. */
+function readJobPath(
   db: DbOrTx,
   orgId: string,
   job: Job,
-  fieldOf: FieldOf,
   members: MemberOnPath[] = listMembersOnPath(db, orgId, job.id),
-): JobLoadPath {
+): JobPathRead {
   const elements = listElements(db, orgId, job.id);
   const bearings = listBearings(db, orgId, job.id);
   const bearingsOf = (id: string) =>
@@ -73,12 +83,17 @@ export function evaluateJob(
     })),
     ...elements.map((e) => ({ id: e.id, label: e.label, element: e.element, bearings: bearingsOf(e.id) })),
   ];
+  return { members, elements, bearings, input: { edition: job.loadStandard, nodes } };
+}
+
+/** The answer from what was read and its evaluation; an engine refusal is a 400 on `fieldOf` its field. */
+function answerOf(read: JobPathRead, evaluate: () => LoadPathResult, fieldOf: FieldOf): JobLoadPath {
   try {
-    const result = evaluateLoadPath({ edition: job.loadStandard, nodes });
+    const result = evaluate();
     return {
-      members: members.map((m) => ({ id: m.id, label: m.label, kind: m.kind })),
-      elements,
-      bearings,
+      members: read.members.map((m) => ({ id: m.id, label: m.label, kind: m.kind })),
+      elements: read.elements,
+      bearings: read.bearings,
       result,
     };
   } catch (error) {
@@ -90,9 +105,61 @@ export function evaluateJob(
 }
 
 /**
+ * The job's members and existing framing as the engine's nodes, and its evaluation (also frozen into a
+ * design request's snapshot). An engine refusal (a
+ * cycle, a load off the member it lands on, an end the element does not have) is a 400 on `field`.
+ */
+export function evaluateJob(
+  db: DbOrTx,
+  orgId: string,
+  job: Job,
+  fieldOf: FieldOf,
+  members?: MemberOnPath[],
+): JobLoadPath {
+  const read = readJobPath(db, orgId, job, members);
+  return answerOf(read, () => evaluateLoadPath(read.input), fieldOf);
+}
+
+/** A job's load path evaluated in the calculation pool, with the input (JSON text) it was evaluated from. */
+export interface PooledLoadPath {
+  inputJson: string;
+  answer: CalcTaskAnswer<LoadPathResult>;
+}
+
+/**
+ * The job's load path input as it will be once `member` is saved (in its place, or last when it is new),
+ * read before the write's transaction so the pool can evaluate it meanwhile.
+ */
+export function pathInputWith(db: DbOrTx, orgId: string, job: Job, member: MemberOnPath): LoadPathInput {
+  const members = listMembersOnPath(db, orgId, job.id);
+  const saved = members.some((m) => m.id === member.id);
+  const next = saved ? members.map((m) => (m.id === member.id ? member : m)) : [...members, member];
+  return readJobPath(db, orgId, job, next).input;
+}
+
+/** The job's load path input as stored now. */
+export const jobPathInput = (db: DbOrTx, orgId: string, job: Job): LoadPathInput =>
+  readJobPath(db, orgId, job).input;
+
+/** {@link evaluateLoadPath} of `input` in the calculation pool, so a save does not hold the event loop for it. */
+export async function loadPathInPool(input: LoadPathInput): Promise<PooledLoadPath> {
+  const inputJson = JSON.stringify(input);
+  return { inputJson, answer: await runTask('loadPath', inputJson) };
+}
+
+/** The pool's evaluation when it was made from the same input as `input`, else undefined. */
+function pooledResult(input: LoadPathInput, pooled?: PooledLoadPath): LoadPathResult | undefined {
+  if (!pooled || JSON.stringify(input) !== pooled.inputJson) return undefined;
+  if (!pooled.answer.ok) throw new CalcInputError(pooled.answer.field, pooled.answer.message);
+  return pooled.answer.value;
+}
+
+/**
  * Checks the whole load path of the job again inside the caller's transaction (a change anywhere re-checks
  * everything below it) and writes each member's state on the path into its summary, so the job page never
- * says "passes" of a member whose load does not reach the ground.
+ * says "passes" of a member whose load does not reach the ground. With `pooled`, the pool's evaluation is
+ * used when it was made from exactly what the transaction reads (else, the job changed meanwhile, the path
+ * is evaluated here): the stored summaries are the same either way.
  * @returns the evaluation, and each member's summary as now stored
  */
 export function refreshLoadPath(
@@ -100,9 +167,15 @@ export function refreshLoadPath(
   orgId: string,
   job: Job,
   fieldOf: FieldOf,
+  pooled?: PooledLoadPath,
 ): { loadPath: JobLoadPath; summaries: Map<string, MemberSummary> } {
-  const members = listMembersOnPath(tx, orgId, job.id);
-  const loadPath = evaluateJob(tx, orgId, job, fieldOf, members);
+  const read = readJobPath(tx, orgId, job);
+  const { members } = read;
+  const loadPath = answerOf(
+    read,
+    () => pooledResult(read.input, pooled) ?? evaluateLoadPath(read.input),
+    fieldOf,
+  );
   const summaries = new Map<string, MemberSummary>();
   for (const member of members) {
     const onPath = loadPath.result.elements.find((e) => e.id === member.id);

@@ -17,7 +17,13 @@ import {
   updateMember,
 } from './members.repository';
 import { deleteBearingsOf } from '@/server/api/load-path/load-path.repository';
-import { refreshLoadPath } from '@/server/api/load-path/load-path.service';
+import {
+  loadPathInPool,
+  pathInputWith,
+  refreshLoadPath,
+  type PooledLoadPath,
+} from '@/server/api/load-path/load-path.service';
+import { newId } from '@/db/new-id';
 
 /** The member's job, which must still be open for its members to change. */
 function openJob(db: DbOrTx, orgId: string, jobId: string): Job {
@@ -46,9 +52,16 @@ const fieldsFor = (now: MemberToEvaluate, from: MemberToEvaluate, computed: Memb
 /** A member's input as the load path names it: a refusal there is about the member's input. */
 const inputField = () => 'input';
 
+/**
+ * The job's load path as it will be with the member `id` saved with `fields`, evaluated in the calculation
+ * pool while the event loop answers others (the write's transaction uses it when nothing changed meanwhile).
+ */
+const pathInPool = (db: DbOrTx, orgId: string, job: Job, id: string, fields: MemberFields) =>
+  loadPathInPool(pathInputWith(db, orgId, job, { ...fields, id }));
+
 /** The member with its state on the job's load path, checked again with this change. */
-function onLoadPath(tx: DbOrTx, orgId: string, job: Job, member: Member): Member {
-  const summary = refreshLoadPath(tx, orgId, job, inputField).summaries.get(member.id);
+function onLoadPath(tx: DbOrTx, orgId: string, job: Job, member: Member, pooled: PooledLoadPath): Member {
+  const summary = refreshLoadPath(tx, orgId, job, inputField, pooled).summaries.get(member.id);
   return summary ? { ...member, summary } : member;
 }
 
@@ -94,23 +107,26 @@ export function createMembersService(db: Db) {
         const { orgId: _orgId, ...member } = found;
         return { record: member, replayed: true };
       };
-      const from = toCheck(openJob(db, actor.orgId, jobId));
+      const before = openJob(db, actor.orgId, jobId);
+      const from = toCheck(before);
       const early = replay(db);
       if (early) return early;
+      const id = body.id ?? newId();
       const computed = await evaluateInPool(from);
+      const pooled = await pathInPool(db, actor.orgId, before, id, computed);
       return db.transaction((tx) => {
         const job = openJob(tx, actor.orgId, jobId);
         const replayed = replay(tx);
         if (replayed) return replayed;
         const fields = fieldsFor(toCheck(job), from, computed);
         const owner = { orgId: actor.orgId, jobId, userId: actor.userId };
-        const member = insertMember(tx, owner, fields, body.id);
+        const member = insertMember(tx, owner, fields, id);
         recordAudit(tx, actor, {
           action: 'member.create',
           subject: member.id,
           detail: { jobId, kind: member.kind, label: member.label },
         });
-        return { record: onLoadPath(tx, actor.orgId, job, member), replayed: false };
+        return { record: onLoadPath(tx, actor.orgId, job, member, pooled), replayed: false };
       });
     },
 
@@ -128,8 +144,9 @@ export function createMembersService(db: Db) {
         const wall = patch.wall ?? saved.wall;
         return { saved, job, toCheck: memberToEvaluate(job, label, wall, patch.input ?? saved.input) };
       };
-      const from = read(db).toCheck;
+      const { toCheck: from, job: before } = read(db);
       const computed = await evaluateInPool(from);
+      const pooled = await pathInPool(db, actor.orgId, before, memberId, computed);
       return db.transaction((tx) => {
         const { saved, job, toCheck } = read(tx);
         const fields = fieldsFor(toCheck, from, computed);
@@ -140,7 +157,7 @@ export function createMembersService(db: Db) {
           subject: memberId,
           detail: { jobId: saved.jobId, fields: Object.keys(changes) },
         });
-        return onLoadPath(tx, actor.orgId, job, member);
+        return onLoadPath(tx, actor.orgId, job, member, pooled);
       });
     },
 
