@@ -99,7 +99,10 @@ export function createOutbox(options: OutboxOptions) {
   let running: Promise<number> | null = null;
   let lock: Promise<unknown> = Promise.resolve();
 
-  /** Runs `task` after every earlier send or flush pass has ended: one item of the queue is in flight at a time. */
+  /**
+   * Runs `task` after every earlier send, flush pass or decision has ended: one item of the queue is in
+   * flight at a time, and no decision rewrites the queue while a send reads it.
+   */
   function exclusive<T>(task: () => Promise<T>): Promise<T> {
     const result = lock.then(task);
     lock = result.catch(() => undefined);
@@ -271,56 +274,66 @@ export function createOutbox(options: OutboxOptions) {
     list: () => store.listOutbox(),
     /** Send my version over theirs: the same fields, now based on the server's version, under a new key. */
     async keepMine(seq: number) {
-      const item = await find(seq);
-      const baseVersion = versionOf(item.current);
-      const body = withBase(item.body, baseVersion);
-      const shift = baseVersion === undefined ? undefined : baseVersion - (baseOf(item.body) ?? baseVersion);
-      if (shift)
-        for (const later of await store.listOutbox()) {
-          const laterBase = baseOf(later.body);
-          if (later.seq > item.seq && later.recordId === item.recordId && laterBase !== undefined)
-            await store.putOutbox({ ...later, body: withBase(later.body, laterBase + shift) });
-        }
-      await store.putOutbox({
-        ...item,
-        body,
-        key: newKey(),
-        status: 'waiting',
-        attempts: 0,
-        nextAttemptAt: now(),
-        current: undefined,
-        lastError: undefined,
+      await exclusive(async () => {
+        const item = await find(seq);
+        const baseVersion = versionOf(item.current);
+        const shift =
+          baseVersion === undefined ? undefined : baseVersion - (baseOf(item.body) ?? baseVersion);
+        if (shift)
+          for (const later of await store.listOutbox()) {
+            const laterBase = baseOf(later.body);
+            if (later.seq > item.seq && later.recordId === item.recordId && laterBase !== undefined)
+              await store.putOutbox({ ...later, body: withBase(later.body, laterBase + shift) });
+          }
+        await store.putOutbox({
+          ...item,
+          body: withBase(item.body, baseVersion),
+          key: newKey(),
+          status: 'waiting',
+          attempts: 0,
+          nextAttemptAt: now(),
+          current: undefined,
+          lastError: undefined,
+        });
       });
       changed();
       return flush();
     },
     /** Take the server's version: my edit is dropped and the device shows theirs. */
     async keepTheirs(seq: number) {
-      const item = await find(seq);
-      await store.deleteOutbox(seq);
-      await options.onSent?.(item, item.current);
+      await exclusive(async () => {
+        const item = await find(seq);
+        await store.deleteOutbox(seq);
+        await options.onSent?.(item, item.current);
+      });
       changed();
     },
     /** Try a stopped item again (after the cause was fixed elsewhere). */
     async retry(seq: number) {
-      const item = await find(seq);
-      await store.putOutbox({ ...item, status: 'waiting', attempts: 0, nextAttemptAt: now() });
+      await exclusive(async () => {
+        const item = await find(seq);
+        await store.putOutbox({ ...item, status: 'waiting', attempts: 0, nextAttemptAt: now() });
+      });
       changed();
       return flush();
     },
     /** Throw the change away, on the person's word only. */
     async discard(seq: number) {
-      const item = await find(seq);
-      await store.deleteOutbox(seq);
-      if (item.blobId) await store.deleteBlob(item.blobId);
-      await options.onDiscarded?.(item);
+      await exclusive(async () => {
+        const item = await find(seq);
+        await store.deleteOutbox(seq);
+        if (item.blobId) await store.deleteBlob(item.blobId);
+        await options.onDiscarded?.(item);
+      });
       changed();
     },
     /** The network is back: every waiting item is due now, whatever its backoff said. */
     async wake() {
-      for (const item of await store.listOutbox())
-        if (item.status === 'waiting' && item.nextAttemptAt > now())
-          await store.putOutbox({ ...item, nextAttemptAt: now() });
+      await exclusive(async () => {
+        for (const item of await store.listOutbox())
+          if (item.status === 'waiting' && item.nextAttemptAt > now())
+            await store.putOutbox({ ...item, nextAttemptAt: now() });
+      });
       return flush();
     },
     /** When the next waiting item is due (for the retry timer), or null. */

@@ -334,4 +334,37 @@ describe('outbox serialisation', () => {
     ]);
     expect(await store.listOutbox()).toEqual([]);
   });
+  it('a decision waits for the send in flight: discarding during a send rewrites nothing under it', async () => {
+    const store = createMemoryStore('test');
+    let release: () => void = () => undefined;
+    const events: string[] = [];
+    const outbox = createOutbox({
+      store,
+      send: async (item) => {
+        events.push(`send ${item.recordId}`);
+        await new Promise<void>((resolve) => (release = resolve));
+        events.push(`answer ${item.recordId}`);
+        return { status: 200, body: { id: item.recordId } };
+      },
+      onDiscarded: (item) => {
+        events.push(`discard ${item.recordId}`);
+      },
+    });
+    const queued = await store.addOutbox({
+      ...write('m2', 'job-2'),
+      createdAt: 0,
+      attempts: 1,
+      nextAttemptAt: Number.MAX_SAFE_INTEGER,
+      status: 'waiting',
+    });
+    const sending = outbox.submit(write('m1'));
+    await new Promise((resolve) => setTimeout(resolve, 0));
+    const discarding = outbox.discard(queued.seq);
+    await new Promise((resolve) => setTimeout(resolve, 5));
+    expect(events).toEqual(['send m1']);
+    release();
+    await Promise.all([sending, discarding]);
+    expect(events).toEqual(['send m1', 'answer m1', 'discard m2']);
+    expect(await store.listOutbox()).toEqual([]);
+  });
 });
