@@ -113,6 +113,9 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
           .first()
           .waitFor();
         await snap(page, `load-path/${name}-girder-fails`);
+        await page
+          .getByTestId('load-path-drawing')
+          .screenshot({ path: `screenshots/load-path/${name}-drawing-fails.png` });
 
         await page.goto(`${baseUrl}/jobs/${jobId}`);
         await row.getByText(/Load path open/).waitFor();
@@ -148,6 +151,9 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
           .poll(() => page.getByTestId('load-path-drawing-text').textContent())
           .toContain('New pad');
         await snap(page, `load-path/${name}-closed`);
+        await page
+          .getByTestId('load-path-drawing')
+          .screenshot({ path: `screenshots/load-path/${name}-drawing-closed.png` });
 
         await page.goto(`${baseUrl}/jobs/${jobId}`);
         await row.getByText(/engineer needed/).waitFor();

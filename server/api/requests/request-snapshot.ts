@@ -35,6 +35,7 @@ function loadPathSteps(result: LoadPathResult, memberId: string): SnapshotLoadPa
     checks: e.checks,
     ends: e.ends.map((end) => ({
       end: end.end,
+      ontoId: end.ontoId ?? null,
       ontoLabel: end.ontoId ? (labelOf.get(end.ontoId) ?? null) : null,
       load: end.load,
       governingLb: end.governingLb,

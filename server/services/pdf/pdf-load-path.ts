@@ -8,10 +8,10 @@ const DANGER_SOFT = rgb(0.99, 0.92, 0.9);
 const toneColor = { ink: INK, muted: MUTED, danger: DANGER } as const;
 
 /**
- * The snapshot's steps as drawing steps. The snapshot names what each end bears on by label, so an end is
- * matched to the first step below it with that label.
+ * The snapshot's steps as drawing steps. Each end names the step it bears on by id; a package sent before
+ * ids were kept names it by label only, and then the end is matched to the first step below it with that label.
  */
-function snapshotSteps(steps: readonly SnapshotLoadPathStep[]): DrawingStep[] {
+export function snapshotSteps(steps: readonly SnapshotLoadPathStep[]): DrawingStep[] {
   return steps.map((s) => ({
     id: s.id,
     label: s.label,
@@ -20,7 +20,7 @@ function snapshotSteps(steps: readonly SnapshotLoadPathStep[]): DrawingStep[] {
     depth: s.depth,
     ends: s.ends.map((e) => ({
       end: e.end,
-      ontoId: steps.find((t) => t.depth > s.depth && t.label === e.ontoLabel)?.id,
+      ontoId: e.ontoId ?? steps.find((t) => t.depth > s.depth && t.label === e.ontoLabel)?.id,
       governingLb: e.governingLb,
     })),
   }));

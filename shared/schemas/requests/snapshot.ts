@@ -70,6 +70,8 @@ export const snapshotLoadPathStepSchema = z.object({
   ends: z.array(
     z.object({
       end: loadPathEndSchema,
+      /** The step this end bears on, by its id (absent in packages sent before it was kept). */
+      ontoId: z.string().nullable().optional(),
       ontoLabel: z.string().nullable(),
       load: typedLoadSchema,
       governingLb: z.number(),
