@@ -12,14 +12,19 @@ export const drawingSizes = {
   pad: 4,
   gapX: 8,
   gapY: 46,
-  /** Width of one lane on the right for a line that passes levels it does not stop at. */
+  /** Width of one lane at a side for a line that passes levels it does not stop at. */
   lane: 14,
   inset: 8,
   titleSize: 13,
   textSize: 12,
   lineStep: 16,
   chipH: 18,
+  /** How far above a level a skipping line runs across: clear of the chips (gapY / 2 ± chipH / 2) above it. */
+  runClear: 10,
 } as const;
+
+/** Where along its box each end leaves from, as a share of the box's width. */
+const endAlong: Record<string, number> = { left: 0.25, right: 0.75 };
 
 /** What the drawing needs of a step: the engine's chain and the request snapshot both give it. */
 export interface DrawingStep {
@@ -156,7 +161,7 @@ function boxTexts(e: DrawingStep): BoxText[] {
  * The section of a load path, laid out for a width: one row of boxes per level (from the member at the top
  * down to the ground), each box's words wrapped to whole words inside it, and a line from each end down
  * to what it bears on with the load on a chip. A line that passes a level without stopping runs down a
- * lane on the right, so it never crosses a box. Screen (react-native-svg) and PDF (pdf-lib) draw only this.
+ * lane at the nearer side, so it never crosses a box or a chip. Screen (react-native-svg) and PDF (pdf-lib) draw only this.
  * @param steps the chain (fromChain(chainBelow(…)) on screen, the snapshot's steps in the PDF)
  * @param width the drawing's width
  * @param measure the width of a text (the PDF passes its embedded font's; the screen the estimate)
@@ -169,15 +174,22 @@ export function drawingLayout(
 ): DrawingLayout {
   const s = drawingSizes;
   const depthOf = new Map(steps.map((st) => [st.id, st.depth]));
-  const skipping = steps.flatMap((st) =>
-    st.ends
-      .filter((end) => end.ontoId && (depthOf.get(end.ontoId) ?? st.depth + 1) > st.depth + 1)
-      .map((end) => `${st.id}-${end.end}`),
-  );
-  const laneOf = new Map(skipping.map((key, i) => [key, i]));
-  const inner = Math.max(40, width - 2 * s.pad - skipping.length * s.lane);
   const rows = new Map<number, DrawingStep[]>();
   for (const st of steps) rows.set(st.depth, [...(rows.get(st.depth) ?? []), st]);
+  // A line that skips a level runs down a lane at the side nearer the end it leaves from.
+  const laneOf = new Map<string, { side: 'left' | 'right'; index: number }>();
+  const laneCount = { left: 0, right: 0 };
+  for (const st of steps) {
+    const row = rows.get(st.depth) as DrawingStep[];
+    for (const end of st.ends) {
+      if (!end.ontoId || (depthOf.get(end.ontoId) ?? st.depth + 1) <= st.depth + 1) continue;
+      const along = (row.indexOf(st) + (endAlong[end.end] ?? 0.5)) / row.length;
+      const side = along < 0.5 ? 'left' : 'right';
+      laneOf.set(`${st.id}-${end.end}`, { side, index: laneCount[side]++ });
+    }
+  }
+  const left = s.pad + laneCount.left * s.lane;
+  const inner = Math.max(40, width - 2 * s.pad - (laneCount.left + laneCount.right) * s.lane);
 
   const boxes: DrawingBox[] = [];
   const texts: DrawingText[] = [];
@@ -196,7 +208,7 @@ export function drawingLayout(
       const box: DrawingBox = {
         id: e.id,
         depth,
-        x: s.pad + i * (w + s.gapX),
+        x: left + i * (w + s.gapX),
         y,
         w,
         h,
@@ -244,15 +256,23 @@ export function drawingLayout(
           { x: to.x + to.w / 2, y: to.y },
         ];
       else {
-        const laneX = s.pad + inner + (lane + 0.5) * s.lane;
-        const turnY = y1 + s.gapY / 2;
-        const landX = Math.min(to.x + to.w - s.inset, Math.max(to.x + to.w / 2, x1));
+        const laneX =
+          lane.side === 'left'
+            ? s.pad + (lane.index + 0.5) * s.lane
+            : left + inner + (lane.index + 0.5) * s.lane;
+        // Its runs across go below the chips of the level it leaves and above the box it lands on.
+        const turnY = y1 + s.gapY - s.runClear;
+        const landY = to.y - s.runClear;
+        const landX =
+          lane.side === 'left'
+            ? Math.max(to.x + s.inset, Math.min(to.x + to.w / 2, x1))
+            : Math.min(to.x + to.w - s.inset, Math.max(to.x + to.w / 2, x1));
         points = [
           { x: x1, y: y1 },
           { x: x1, y: turnY },
           { x: laneX, y: turnY },
-          { x: laneX, y: to.y - s.gapY / 2 },
-          { x: landX, y: to.y - s.gapY / 2 },
+          { x: laneX, y: landY },
+          { x: landX, y: landY },
           { x: landX, y: to.y },
         ];
       }

@@ -124,6 +124,23 @@ describe('drawingLayout', () => {
         }
       });
 
+      it('runs a skipping line down the nearer side, its runs across clear of every chip and box', () => {
+        const skip = layout.links.find((l) => l.fromId === 'beam' && l.toId === 'girder');
+        const s = skip as NonNullable<typeof skip>;
+        // The beam's left end leaves from the left quarter of the top box: its lane is at the left edge.
+        const laneX = Math.min(...s.points.map((p) => p.x));
+        expect(laneX).toBeLessThan(Math.min(...layout.boxes.map((b) => b.x)));
+        for (let i = 1; i < s.points.length; i++) {
+          const [a, b] = [s.points[i - 1], s.points[i]];
+          if (a.y !== b.y) continue;
+          const [x0, x1] = [Math.min(a.x, b.x), Math.max(a.x, b.x)];
+          const through = (r: { x: number; y: number; w: number; h: number }) =>
+            a.y > r.y && a.y < r.y + r.h && x1 > r.x && x0 < r.x + r.w;
+          for (const other of layout.links) expect(through(other.chip), other.label.text).toBe(false);
+          for (const box of layout.boxes) expect(through(box), box.id).toBe(false);
+        }
+      });
+
       it('keeps every label and chip inside the width', () => {
         for (const t of layout.texts) {
           const box = layout.boxes.find(
