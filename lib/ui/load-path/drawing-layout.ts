@@ -161,7 +161,8 @@ function boxTexts(e: DrawingStep): BoxText[] {
  * The section of a load path, laid out for a width: one row of boxes per level (from the member at the top
  * down to the ground), each box's words wrapped to whole words inside it, and a line from each end down
  * to what it bears on with the load on a chip. A line that passes a level without stopping runs down a
- * lane at the nearer side, so it never crosses a box or a chip. Screen (react-native-svg) and PDF (pdf-lib) draw only this.
+ * lane at the nearer side, so it never crosses a box or a chip. Screen (react-native-svg) and PDF (pdf-lib)
+ * draw only this.
  * @param steps the chain (fromChain(chainBelow(…)) on screen, the snapshot's steps in the PDF)
  * @param width the drawing's width
  * @param measure the width of a text (the PDF passes its embedded font's; the screen the estimate)
