@@ -160,6 +160,12 @@ function conditions(w: PdfWriter, pkg: RequestPackage): void {
 }
 
 const lbText = (lb: number) => `${formatNumber(Math.round(lb), 0)} lb`;
+/** An unfactored load by type, "D 804 + Lr 1,014 lb"; types with none left out. */
+const byTypeText = (load: Record<string, number | undefined>) =>
+  `${(['D', 'L', 'Lr', 'S'] as const)
+    .filter((type) => (load[type] ?? 0) > 0)
+    .map((type) => `${type} ${formatNumber(Math.round(load[type] ?? 0), 0)}`)
+    .join(' + ')} lb`;
 const totalLb = (load: Record<string, number | undefined>) =>
   Object.values(load).reduce<number>((sum, v) => sum + (v ?? 0), 0);
 
@@ -176,7 +182,7 @@ function loadPath(w: PdfWriter, m: SnapshotMember): void {
   );
   drawLoadPathSection(w, m.loadPath);
   w.table(
-    ['Level', 'Step', 'Load arriving', 'Check', 'State', 'Ends'],
+    ['Level', 'Step', 'Load arriving (unfactored)', 'Check', 'State', 'Ends'],
     m.loadPath.map((step) => [
       String(step.depth),
       `${step.label} (${step.kind})`,
@@ -185,7 +191,7 @@ function loadPath(w: PdfWriter, m: SnapshotMember): void {
         : step.incoming
             .map(
               (i) =>
-                `${lbText(totalLb(i.load))} from ${i.fromLabel}${i.atFt ? ` at ${formatNumber(i.atFt, 2)} ft` : ''}`,
+                `${lbText(totalLb(i.load))} from ${i.fromLabel}${i.atFt ? ` at ${formatNumber(i.atFt, 2)} ft` : ''} (${byTypeText(i.load)})`,
             )
             .join('; '),
       step.governing

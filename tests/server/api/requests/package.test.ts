@@ -155,6 +155,7 @@ describe('the load path section in the PDF', () => {
     const flat = text.replace(/\s+/g, ' ');
     // The drawing's box words (kind and state) and each open end's chip ("… lb → ?").
     expect(flat).toContain('! Load path open');
+    expect(flat).toContain('Load arriving (unfactored)');
     expect(flat).toContain('New member');
     const chips = flat.match(/[\d,]+ lb → \?/g) ?? [];
     expect(chips.length).toBeGreaterThanOrEqual(chain[0].ends.length);
