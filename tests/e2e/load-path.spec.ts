@@ -67,6 +67,12 @@ async function setUp(page: Page, name: ViewportName) {
   return { jobId: job.id as string, beamId: beam.id as string };
 }
 
+/** The section drawing scrolled to the top of the screen, and the screen taken (the drawing sits in a scroll view). */
+async function drawingInView(page: Page, shot: string) {
+  await page.getByTestId('load-path-drawing').evaluate((el) => el.scrollIntoView({ block: 'start' }));
+  await page.screenshot({ path: `screenshots/load-path/${shot}.png` });
+}
+
 for (const name of Object.keys(viewports) as ViewportName[]) {
   describe(`load path to the ground (${name})`, () => {
     it('a beam on a post on a girder mid-span: the girder fails, the beam is open; a post and pad close it', async () => {
@@ -113,9 +119,7 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
           .first()
           .waitFor();
         await snap(page, `load-path/${name}-girder-fails`);
-        await page
-          .getByTestId('load-path-drawing')
-          .screenshot({ path: `screenshots/load-path/${name}-drawing-fails.png` });
+        await drawingInView(page, `${name}-drawing-fails`);
 
         await page.goto(`${baseUrl}/jobs/${jobId}`);
         await row.getByText(/Load path open/).waitFor();
@@ -151,9 +155,7 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
           .poll(() => page.getByTestId('load-path-drawing-text').textContent())
           .toContain('New pad');
         await snap(page, `load-path/${name}-closed`);
-        await page
-          .getByTestId('load-path-drawing')
-          .screenshot({ path: `screenshots/load-path/${name}-drawing-closed.png` });
+        await drawingInView(page, `${name}-drawing-closed`);
 
         await page.goto(`${baseUrl}/jobs/${jobId}`);
         await row.getByText(/engineer needed/).waitFor();

@@ -301,5 +301,54 @@ export function drawingLayout(
       };
     }),
   );
-  return { width, height: y - s.gapY + s.pad + 12, boxes, links, texts };
+  return { width, height: y - s.gapY + s.pad + 12, boxes, links: unstruck(links, width), texts };
+}
+
+type Rect = { x: number; y: number; w: number; h: number };
+
+const overlaps = (a: Rect, b: Rect) =>
+  a.x < b.x + b.w && b.x < a.x + a.w && a.y < b.y + b.h && b.y < a.y + a.h;
+
+/** Whether a line of points runs through a rectangle (checked at 2 px steps along each segment). */
+function runsThrough(points: readonly { x: number; y: number }[], r: Rect): boolean {
+  for (let i = 1; i < points.length; i++) {
+    const [a, b] = [points[i - 1], points[i]];
+    const steps = Math.max(1, Math.ceil(Math.hypot(b.x - a.x, b.y - a.y) / 2));
+    for (let k = 0; k <= steps; k++) {
+      const x = a.x + ((b.x - a.x) * k) / steps;
+      const y = a.y + ((b.y - a.y) * k) / steps;
+      if (x > r.x && x < r.x + r.w && y > r.y && y < r.y + r.h) return true;
+    }
+  }
+  return false;
+}
+
+/** Along its own line, where a straight link's chip may sit, best first (halfway down, then nearer an end). */
+const chipStations = [0.5, 0.3, 0.7, 0.15, 0.85];
+
+/**
+ * Moves a straight link's chip along its own line when another line would strike it through or it would
+ * sit on another chip (two ends of one box crossing on their way to boxes below, for example).
+ */
+function unstruck(links: DrawingLink[], width: number): DrawingLink[] {
+  const placed: Rect[] = links.filter((l) => l.points.length !== 2).map((l) => l.chip);
+  return links.map((link) => {
+    if (link.points.length !== 2) return link;
+    const [a, b] = link.points;
+    const others = links.filter((l) => l !== link);
+    const at = (t: number): Rect => {
+      const cx = Math.min(
+        width - drawingSizes.pad - link.chip.w / 2,
+        Math.max(drawingSizes.pad + link.chip.w / 2, a.x + (b.x - a.x) * t),
+      );
+      const cy = a.y + (b.y - a.y) * t;
+      return { ...link.chip, x: cx - link.chip.w / 2, y: cy - link.chip.h / 2 };
+    };
+    const clear = (r: Rect) =>
+      !others.some((o) => runsThrough(o.points, r)) && !placed.some((p) => overlaps(p, r));
+    const chip = chipStations.map(at).find(clear) ?? link.chip;
+    placed.push(chip);
+    const label = { ...link.label, x: chip.x + chip.w / 2, y: chip.y + chip.h / 2 + 4 };
+    return { ...link, chip, label };
+  });
 }

@@ -1,6 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { chainBelow, evaluateLoadPath } from '@/lib/calc/load-path';
-import { drawingLayout, estimateWidth, fromChain, wrapWords } from '@/lib/ui/load-path/drawing-layout';
+import {
+  drawingLayout,
+  estimateWidth,
+  fromChain,
+  wrapWords,
+  type DrawingStep,
+} from '@/lib/ui/load-path/drawing-layout';
 import { beamInput, foundationWall, node, pad, post } from '../../calc/load-path/fixtures';
 
 // Demo-style chain (invented): a beam whose left end bears straight on the basement girder while its right
@@ -167,4 +173,60 @@ describe('drawingLayout', () => {
       });
     });
   }
+});
+
+// Invented: a girder made two spans by a new post, its left and right ends on one foundation wall box and
+// its centre on the post, so the right end's line crosses the centre's on the way down.
+const twoSpan: DrawingStep[] = [
+  {
+    id: 'girder',
+    label: 'Basement girder',
+    kind: 'girder',
+    state: 'passes',
+    depth: 0,
+    ends: [
+      { end: 'left', ontoId: 'fw', governingLb: 470 },
+      { end: 'centre', ontoId: 'post', governingLb: 5490 },
+      { end: 'right', ontoId: 'fw', governingLb: 510 },
+    ],
+  },
+  { id: 'fw', label: 'Foundation wall', kind: 'foundation-wall', state: 'passes', depth: 1, ends: [] },
+  {
+    id: 'post',
+    label: 'Post under the girder',
+    kind: 'post',
+    state: 'passes',
+    depth: 1,
+    ends: [{ end: 'bottom', ontoId: 'pad', governingLb: 5540 }],
+  },
+  { id: 'pad', label: 'New pad', kind: 'footing', state: 'passes', depth: 2, ends: [] },
+];
+
+describe('chips', () => {
+  for (const [name, chainSteps] of [
+    ['the skipping chain', steps],
+    ['a two-span girder with crossing ends', twoSpan],
+  ] as const)
+    for (const width of [390 - 32, 390, 1280])
+      it(`no line strikes through another end's chip, and no chips overlap (${name}, ${width} wide)`, () => {
+        const { links } = drawingLayout(chainSteps, width);
+        for (const link of links) {
+          for (const other of links) {
+            if (other === link) continue;
+            const c = link.chip;
+            const struck = other.points.some((p, i) => {
+              if (i === 0) return false;
+              const q = other.points[i - 1];
+              return Array.from({ length: 101 }, (_, k) => ({
+                x: q.x + ((p.x - q.x) * k) / 100,
+                y: q.y + ((p.y - q.y) * k) / 100,
+              })).some((pt) => pt.x > c.x && pt.x < c.x + c.w && pt.y > c.y && pt.y < c.y + c.h);
+            });
+            expect(struck, `${other.label.text} line through ${link.label.text} chip`).toBe(false);
+            const o = other.chip;
+            const overlap = c.x < o.x + o.w && o.x < c.x + c.w && c.y < o.y + o.h && o.y < c.y + c.h;
+            expect(overlap, `${link.label.text} on ${other.label.text}`).toBe(false);
+          }
+        }
+      });
 });
