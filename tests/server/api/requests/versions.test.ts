@@ -15,17 +15,20 @@ beforeEach(async () => {
 });
 afterEach(() => server.close());
 
+/** A request sent with the 6 ft header, then revised with the opening at 7 ft (version 2). */
+async function sentThenRevised(): Promise<string> {
+  const id = await world.sent();
+  await world.firm.agent
+    .patch(`/api/members/${world.memberId}`)
+    .send({ input: { ...SAMPLE_HEADER, clearSpanFt: 7 } })
+    .expect(200);
+  await world.firm.agent.post(`/api/requests/${id}/revisions`).send({ note: 'Opening is 7 ft' }).expect(201);
+  return id;
+}
+
 describe('GET /api/requests/:requestId/versions/:version', () => {
   it('gives each sent version as frozen, to the firm and the addressed engineer', async () => {
-    const id = await world.sent();
-    await world.firm.agent
-      .patch(`/api/members/${world.memberId}`)
-      .send({ input: { ...SAMPLE_HEADER, clearSpanFt: 7 } })
-      .expect(200);
-    await world.firm.agent
-      .post(`/api/requests/${id}/revisions`)
-      .send({ note: 'Opening is 7 ft' })
-      .expect(201);
+    const id = await sentThenRevised();
     const v1 = requestVersionSnapshotSchema.parse(
       (await world.engineer.agent.get(`/api/requests/${id}/versions/1`).expect(200)).body,
     );
@@ -48,15 +51,7 @@ describe('GET /api/requests/:requestId/versions/:version', () => {
 
 describe('a change list stored before the lists were worded', () => {
   it('reads in words, made again from the two snapshots, in the detail and the package', async () => {
-    const id = await world.sent();
-    await world.firm.agent
-      .patch(`/api/members/${world.memberId}`)
-      .send({ input: { ...SAMPLE_HEADER, clearSpanFt: 7 } })
-      .expect(200);
-    await world.firm.agent
-      .post(`/api/requests/${id}/revisions`)
-      .send({ note: 'Opening is 7 ft' })
-      .expect(201);
+    const id = await sentThenRevised();
     const worded = requestDetailSchema.parse(
       (await world.firm.agent.get(`/api/requests/${id}`).expect(200)).body,
     ).versions[1].changes;
