@@ -14,6 +14,7 @@ import {
   type DiffLine,
   type Field,
 } from './diff-fields';
+import { materialName, sizeName } from './catalogue-names';
 import { loadFields, loadName, describeLoad } from './load-diff';
 
 /** Each input's flag, as the engine echoes it: the flag given, else assumed when entered, default when not. */
@@ -88,7 +89,7 @@ const spanFields: Field<SnapshotMember>[] = [
   ['Length to buy', (m) => ftText(m.result.spans.lengthToBuyFt)],
   input('Bears on', 'supportKind', (v) => SUPPORT_WORDS[v]),
   input('Support width', 'supportWidthIn', inText),
-  input('Plate under the jack studs', 'plateMaterialId', idText),
+  input('Plate under the jack studs', 'plateMaterialId', materialName),
   input('How it sits', 'mount', (v) => MOUNT_WORDS[v]),
   input('Joist depth', 'joistDepthIn', inText),
   input('Joist spacing', 'joistSpacingIn', inText),
@@ -97,8 +98,8 @@ const spanFields: Field<SnapshotMember>[] = [
   input('Least headroom', 'minHeadroomIn', inText),
   input('Attic clearance', 'atticClearanceIn', inText),
   input('Unbraced length of the top edge', 'unbracedLengthFt', ftText),
-  input('Posts: material', 'posts', (p) => idText(p.materialId)),
-  input('Posts: size', 'posts', (p) => idText(p.sizeId)),
+  input('Posts: material', 'posts', (p) => materialName(p.materialId)),
+  input('Posts: size', 'posts', (p) => sizeName(p.materialId, p.sizeId)),
   input('Posts: height', 'posts', (p) => ftText(p.heightFt)),
   input('Posts: soil bearing under the pad', 'posts', (p) => psfText(p.soilBearingPsf)),
   input('Posts: pad thickness', 'posts', (p) => inText(p.padThicknessIn)),

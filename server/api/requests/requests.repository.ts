@@ -15,6 +15,7 @@ import type { RequestCompose } from '@/shared/schemas/requests/compose';
 import type { EngineerReply } from '@/shared/schemas/requests/reply';
 import type { ChangeLine, RequestSnapshot } from '@/shared/schemas/requests/snapshot';
 import type { RequestSide, RequestState } from '@/shared/schemas/requests/workflow';
+import { wordedChanges } from './request-changes';
 
 export type RequestRow = typeof designRequests.$inferSelect;
 export type AttachmentRow = typeof attachments.$inferSelect;
@@ -153,13 +154,16 @@ export function insertVersion(
     .run();
 }
 
+/** A request's sent versions, oldest first, each change list worded (see wordedChanges). */
 export function listVersions(db: DbOrTx, requestId: string) {
-  return db
-    .select()
-    .from(designRequestVersions)
-    .where(eq(designRequestVersions.requestId, requestId))
-    .orderBy(asc(designRequestVersions.version))
-    .all();
+  return wordedChanges(
+    db
+      .select()
+      .from(designRequestVersions)
+      .where(eq(designRequestVersions.requestId, requestId))
+      .orderBy(asc(designRequestVersions.version))
+      .all(),
+  );
 }
 
 export function findVersion(db: DbOrTx, requestId: string, version: number) {

@@ -142,19 +142,37 @@ function conditions(w: PdfWriter, pkg: RequestPackage): void {
     w.heading('Questions for the engineer', 11);
     w.text(r.questions);
   }
-  if (pkg.changes.length > 0) {
-    w.heading(`What changed since version ${r.version - 1}`, 11);
+  changes(w, pkg);
+}
+
+const KIND_WORDS = { changed: '', added: 'added', removed: 'removed' } as const;
+
+/**
+ * What changed since the version before, in the request page's words: a heading per group (the request's
+ * parts, then each member), then a table of section, field, before and now that wraps and runs on across pages.
+ */
+function changes(w: PdfWriter, pkg: RequestPackage): void {
+  if (pkg.changes.length === 0) return;
+  const r = pkg.request;
+  w.heading(`What changed since version ${r.version - 1}`, 11);
+  w.text(
+    `${pkg.changes.length} ${pkg.changes.length === 1 ? 'change' : 'changes'}; values as the app shows them, each input with its flag.`,
+    { size: 8.5, color: MUTED },
+  );
+  const groups = new Map<string, RequestPackage['changes']>();
+  for (const line of pkg.changes) groups.set(line.group, [...(groups.get(line.group) ?? []), line]);
+  for (const [group, lines] of groups) {
+    w.heading(group, 10);
     w.table(
-      ['What', 'Before', 'Now'],
-      pkg.changes
-        .slice(0, 80)
-        .map((c) => [
-          c.path,
-          orDash(c.before as string | number | null),
-          orDash(c.after as string | number | null),
-        ]),
-      [0.5, 0.25, 0.25],
-      7.5,
+      ['Section', 'What', `Was (version ${r.version - 1})`, `Now (version ${r.version})`],
+      lines.map((c) => [
+        c.section,
+        KIND_WORDS[c.kind] ? `${c.field} (${KIND_WORDS[c.kind]})` : c.field,
+        c.before ?? '—',
+        c.after ?? '—',
+      ]),
+      [0.18, 0.3, 0.26, 0.26],
+      8,
     );
   }
 }

@@ -9,8 +9,11 @@ import { requestStateSchema } from './workflow';
  * docs/design-request-package.md describes it. A change that breaks a reader raises `formatVersion`.
  */
 export const REQUEST_PACKAGE_FORMAT = 'tributary.design-request';
-/** 2: each member carries its load path to the ground (`request.members[].loadPath`). */
-export const REQUEST_PACKAGE_VERSION = 2;
+/**
+ * 2: each member carries its load path to the ground (`request.members[].loadPath`).
+ * 3: `changes` are worded lines (group, section, field, before, after, kind) rather than dotted paths.
+ */
+export const REQUEST_PACKAGE_VERSION = 3;
 
 export const requestPackageSchema = z
   .object({
@@ -27,7 +30,7 @@ export const requestPackageSchema = z
     /** The engineer's latest structured reply and the version it answers, when there is one. */
     reply: z.object({ version: z.number().int(), reply: engineerReplySchema }).nullable(),
   })
-  .meta({ title: 'Tributary design request package', id: 'tributary.design-request.v2' });
+  .meta({ title: 'Tributary design request package', id: 'tributary.design-request.v3' });
 export type RequestPackage = z.infer<typeof requestPackageSchema>;
 
 /** The JSON Schema of the package, generated from the zod schema (draft 2020-12). */

@@ -128,10 +128,17 @@ export const requestSnapshotSchema = z.object({
 });
 export type RequestSnapshot = z.infer<typeof requestSnapshotSchema>;
 
-/** One line of what changed between two versions: a dotted path with the value before and after. */
+/**
+ * One line of what changed between two versions, in the words of lib/requests/version-diff: the group (the
+ * request's own parts or a member by its label), the section, the field, and the values before and after as
+ * the app shows them (units and flags in the text; null when only one version has it).
+ */
 export const changeLineSchema = z.object({
-  path: z.string(),
-  before: z.union([z.string(), z.number(), z.boolean(), z.null()]),
-  after: z.union([z.string(), z.number(), z.boolean(), z.null()]),
+  group: z.string(),
+  section: z.string(),
+  field: z.string(),
+  before: z.string().nullable(),
+  after: z.string().nullable(),
+  kind: z.enum(['changed', 'added', 'removed']),
 });
 export type ChangeLine = z.infer<typeof changeLineSchema>;

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { checkMember, ENGINE_VERSION } from '@/lib/calc';
+import { materialName, sizeName } from '@/lib/requests/catalogue-names';
 import { diffVersions, type VersionDiff } from '@/lib/requests/version-diff';
 import { memberCheckInputSchema, type MemberCheckInputBody } from '@/shared/schemas/calc/member';
 import { jobInputSchema } from '@/shared/schemas/jobs';
@@ -167,6 +168,46 @@ describe('diffVersions', () => {
       { field: 'Size', before: header.summary.sizeLabel, after: lvl.summary.sizeLabel, kind: 'changed' },
     ]);
     expect(lvl.summary.materialLabel).not.toBe(header.summary.materialLabel);
+  });
+
+  it('names post and plate materials by the catalogue’s names, not its ids', () => {
+    // Names as the catalogue prints the NDS Supplement 2018 Table 4A species and grades.
+    const onPosts = (materialId: string) =>
+      member('m-1', 'Kitchen header', {
+        ...SAMPLE_HEADER,
+        supportKind: 'post',
+        plateMaterialId: materialId,
+        posts: { materialId, sizeId: '6x6', heightFt: 7 },
+      });
+    const span = lines(
+      diffVersions(
+        snapshot(1, [onPosts('sawn-hem-fir-no2')]),
+        snapshot(2, [onPosts('sawn-douglas-fir-larch-no2')]),
+      ),
+      'Kitchen header',
+      'Span and bearing',
+    );
+    expect(span).toEqual([
+      {
+        field: 'Plate under the jack studs',
+        before: 'Hem-Fir No.2 (assumed)',
+        after: 'Douglas Fir-Larch No.2 (assumed)',
+        kind: 'changed',
+      },
+      {
+        field: 'Posts: material',
+        before: 'Hem-Fir No.2 (assumed)',
+        after: 'Douglas Fir-Larch No.2 (assumed)',
+        kind: 'changed',
+      },
+    ]);
+  });
+
+  it('reads an id the catalogue does not hold (an older engine’s) as its words', () => {
+    expect(materialName('sawn-western-larch-no3')).toBe('sawn western larch no3');
+    expect(sizeName('sawn-hem-fir-no2', '2-ply-2x10')).toBe('2-ply 2x10');
+    expect(sizeName('sawn-hem-fir-no2', '9x99')).toBe('9x99');
+    expect(materialName(null)).toBeNull();
   });
 
   it('lists photos added by where they were taken and their caption, and a changed question', () => {

@@ -309,7 +309,7 @@ describe('removing a photo from the working copy', () => {
       right.body.id,
     ]);
     expect(revised.body.versions[1].changes).toContainEqual(
-      expect.objectContaining({ path: 'files.ridge.png', before: null }),
+      expect.objectContaining({ section: 'Photos', field: 'Photo ridge.png', before: null, kind: 'added' }),
     );
     const refused = await remove(world.firm.agent, id, right.body.id).expect(409);
     expect(refused.body.error.message).toMatch(/went with version 2/);

@@ -206,13 +206,28 @@ describe('revise', () => {
     expect(detail.version).toBe(2);
     const v2 = detail.versions[1];
     expect(v2.note).toBe('Opening is 7 ft');
-    const span = v2.changes.find((c) => c.path.endsWith('.input.clearSpanFt'));
-    expect(span).toMatchObject({ before: 6, after: 7 });
-    expect(v2.changes.find((c) => c.path.endsWith('.result.spans.clearSpanFt'))).toMatchObject({
-      before: 6,
-      after: 7,
+    // Worded as the request page words it (lib/requests/version-diff): member, section, field, ft-in, flag.
+    expect(v2.changes).toContainEqual({
+      group: 'Kitchen header',
+      section: 'Span and bearing',
+      field: 'Clear span',
+      before: `6' 0" (assumed)`,
+      after: `7' 0" (assumed)`,
+      kind: 'changed',
     });
-    expect(v2.changes.find((c) => c.path === 'questions')).toMatchObject({ after: 'Flush or dropped?' });
+    expect(v2.changes).toContainEqual({
+      group: 'Job and request',
+      section: 'Questions',
+      field: 'Questions for the engineer',
+      before: 'Can the beam be flush with the joists?',
+      after: 'Flush or dropped?',
+      kind: 'changed',
+    });
+    // The results follow the span: the reactions grew (more span, more tributary load on each end).
+    const left = v2.changes.find((c) => c.field === 'Largest reaction, left end');
+    expect(left).toMatchObject({ group: 'Kitchen header', section: 'Result of the preliminary check' });
+    expect(Number(left?.after?.replace(/\D/g, ''))).toBeGreaterThan(Number(left?.before?.replace(/\D/g, '')));
+    expect(v2.changes.some((c) => /members\.|\.input\./.test(`${c.group} ${c.field}`))).toBe(false);
     expect(detail.versions[0].changes).toEqual([]);
     const mails = await mailTo(server, world.engineer.body.email);
     expect(mails.map((m) => m.subject)).toEqual([
@@ -243,10 +258,26 @@ describe('revise', () => {
     expect(detail.draft?.questions).toBe('Can both be flush?');
     expect(detail.snapshot?.members.map((m) => m.label)).toEqual(['Kitchen header', 'Porch header']);
     expect(detail.snapshot?.questions).toBe('Can both be flush?');
-    const paths = detail.versions[1].changes.map((c) => c.path);
-    expect(paths).toContain('questions');
-    expect(paths).toContain('conditions.framingDirection');
-    expect(paths.some((p) => p.startsWith('members.Porch header'))).toBe(true);
+    const changes = detail.versions[1].changes;
+    expect(changes).toContainEqual(
+      expect.objectContaining({
+        group: 'Job and request',
+        field: 'Questions for the engineer',
+        after: 'Can both be flush?',
+      }),
+    );
+    expect(changes).toContainEqual(
+      expect.objectContaining({
+        section: 'Conditions',
+        field: 'Framing direction',
+        after: 'Joists run front to back',
+      }),
+    );
+    // The new member is one group, marked added, its inputs listed with nothing before.
+    const porch = changes.filter((c) => c.group === 'Porch header (added)');
+    expect(porch.length).toBeGreaterThan(0);
+    expect(porch.every((c) => c.kind === 'added' && c.before === null)).toBe(true);
+    expect(porch).toContainEqual(expect.objectContaining({ field: 'Clear span', after: `6' 0" (assumed)` }));
     const engineerView = await world.engineer.agent.get(`/api/requests/${id}`).expect(200);
     expect(engineerView.body.versions[1].changes).toEqual(detail.versions[1].changes);
     expect(engineerView.body.draft).toBeNull();

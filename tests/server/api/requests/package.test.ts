@@ -86,6 +86,14 @@ async function sentWithPhotos(): Promise<string> {
   return id;
 }
 
+/** The PDF's text as pdf-parse reads it, whitespace runs made one space. */
+async function pdfText(bytes: Buffer): Promise<string> {
+  const parser = new PDFParse({ data: new Uint8Array(bytes) });
+  const { text } = await parser.getText();
+  await parser.destroy();
+  return text.replace(/\s+/g, ' ');
+}
+
 /** Image XObjects in the PDF: the photos only, since the diagrams are vector paths. */
 function imageCount(pdf: PDFDocument): number {
   return pdf.context
@@ -108,10 +116,7 @@ describe('the PDF', () => {
     expect(pdf.getPageCount()).toBeGreaterThanOrEqual(5);
     expect(pdf.getTitle()).toBe('Design request 1 v1: Kitchen opening (demo)');
     expect(imageCount(pdf)).toBe(2);
-    const parser = new PDFParse({ data: new Uint8Array(bytes) });
-    const { text } = await parser.getText();
-    await parser.destroy();
-    const flat = text.replace(/\s+/g, ' ');
+    const flat = await pdfText(bytes);
     for (const expected of [
       'Request 1, version 1',
       'Kitchen opening (demo)',
@@ -149,10 +154,7 @@ describe('the load path section in the PDF', () => {
     const res = await binary(world.engineer.agent, `/api/requests/${id}/package.pdf`).expect(200);
     const bytes = res.body as Buffer;
     await PDFDocument.load(bytes);
-    const parser = new PDFParse({ data: new Uint8Array(bytes) });
-    const { text } = await parser.getText();
-    await parser.destroy();
-    const flat = text.replace(/\s+/g, ' ');
+    const flat = await pdfText(bytes);
     // The drawing's box words (kind and state) and each open end's chip ("… lb → ?").
     expect(flat).toContain('! Load path open');
     expect(flat).toContain('Load arriving (unfactored)');
@@ -167,7 +169,7 @@ describe('the JSON package', () => {
     const id = await sentWithPhotos();
     const res = await world.engineer.agent.get(`/api/requests/${id}/package.json`).expect(200);
     const parsed = requestPackageSchema.parse(res.body);
-    expect(parsed).toMatchObject({ format: 'tributary.design-request', formatVersion: 2, state: 'sent' });
+    expect(parsed).toMatchObject({ format: 'tributary.design-request', formatVersion: 3, state: 'sent' });
     // Format 2: each member carries its chain to the ground; nothing says what its ends bear on yet.
     const chain = parsed.request.members[0].loadPath;
     expect(chain?.[0]).toMatchObject({ depth: 0, state: 'load-path-open', closed: false });
@@ -265,4 +267,80 @@ describe('every download checks access', () => {
       expect((await world.firm.agent.get(`/api/requests/${draft}/${what}`)).status).toBe(409);
     },
   );
+});
+
+describe('what changed, in the PDF of a revision', () => {
+  it('lists every change in words by member and section, materials by their catalogue names, and parses', async () => {
+    const id = await world.sent();
+    // Version 2: a longer opening on the sent header, and a beam on posts added (invented demo values).
+    await world.firm.agent
+      .patch(`/api/members/${world.memberId}`)
+      .send({ input: { ...SAMPLE_HEADER, clearSpanFt: 7, plateMaterialId: 'sawn-spruce-pine-fir-no1-no2' } })
+      .expect(200);
+    const added = (label: string) =>
+      world.firm.agent
+        .post(`/api/jobs/${world.jobId}/members`)
+        .send({
+          label,
+          input: {
+            ...SAMPLE_HEADER,
+            kind: 'beam',
+            supportKind: 'post',
+            posts: { materialId: 'sawn-hem-fir-no2', sizeId: '6x6', heightFt: 7 },
+          },
+        })
+        .expect(201);
+    const beams = [await added('Porch beam'), await added('Garage beam'), await added('Deck beam')];
+    await world.firm.agent
+      .post(`/api/requests/${id}/revisions`)
+      .send({
+        note: 'Three beams on posts too',
+        draft: { memberIds: [world.memberId, ...beams.map((b) => b.body.id)] },
+      })
+      .expect(201);
+    const json = await world.engineer.agent.get(`/api/requests/${id}/package.json`).expect(200);
+    const { changes } = requestPackageSchema.parse(json.body);
+    // Catalogue names (NDS Supplement 2018 Table 4A species and grade labels), not ids.
+    expect(changes).toContainEqual(
+      expect.objectContaining({
+        group: 'Porch beam (added)',
+        field: 'Posts: material',
+        after: 'Hem-Fir No.2 (assumed)',
+      }),
+    );
+    expect(changes).toContainEqual(
+      expect.objectContaining({
+        group: 'Kitchen header',
+        field: 'Plate under the jack studs',
+        before: null,
+        after: 'Spruce-Pine-Fir No.1/No.2 (assumed)',
+      }),
+    );
+    // More than the old table's cap of lines: the PDF lists them all.
+    expect(changes.length).toBeGreaterThan(80);
+
+    const res = await binary(world.engineer.agent, `/api/requests/${id}/package.pdf`).expect(200);
+    const bytes = res.body as Buffer;
+    await PDFDocument.load(bytes);
+    const flat = await pdfText(bytes);
+    for (const expected of [
+      'What changed since version 1',
+      `${changes.length} changes`,
+      'Was (version 1)',
+      'Now (version 2)',
+      'Span and bearing',
+      `Clear span 6' 0" (assumed) 7' 0" (assumed)`,
+      'Porch beam (added)',
+      'Hem-Fir No.2 (assumed)',
+      'Spruce-Pine-Fir No.1/No.2 (assumed)',
+    ]) {
+      expect(flat).toContain(expected);
+    }
+    expect(flat).not.toMatch(/members\.|\.summary\.|sawn-hem-fir/);
+    // Every line is in the PDF, the last member's too: nothing is cut off (short fields do not wrap).
+    expect(flat).toContain('Deck beam (added)');
+    const deck = flat.slice(flat.indexOf('Deck beam (added)'));
+    for (const line of changes.filter((c) => c.group === 'Deck beam (added)' && c.field.length < 24))
+      expect(deck).toContain(line.field);
+  }, 90_000); // four members' pages: the PDF is made on a shared, busy machine
 });
