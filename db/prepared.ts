@@ -50,3 +50,13 @@ export function rawPreparedPerDb<Row>(
     },
   };
 }
+
+/** `toRow` for rawPreparedPerDb: names the values after a selection's keys, in the order it selects them. */
+export function namedAfter<Row>(selection: Record<keyof Row, unknown>): (values: unknown[]) => Row {
+  const keys = Object.keys(selection);
+  return (values) => {
+    const row: Record<string, unknown> = {};
+    for (let i = 0; i < keys.length; i++) row[keys[i]] = values[i];
+    return row as Row;
+  };
+}
