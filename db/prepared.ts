@@ -33,8 +33,8 @@ const clientOf = (db: DbOrTx): Database.Database =>
 /**
  * For the few reads every signed-in request makes: the SQL drizzle builds for `query` (with
  * `sql.placeholder`s as `?`), prepared once per connection on better-sqlite3 itself, answering rows as
- * arrays in the order the query selects. It skips drizzle's per-row mapping, so it suits plain columns
- * only (text and integers, no JSON or dates); `toRow` names the values.
+ * arrays in the order the query selects. It skips drizzle's per-row mapping: `toRow` names the values and
+ * must itself parse any JSON column (text and numbers come as stored).
  */
 export function rawPreparedPerDb<Row>(
   build: (db: DbOrTx) => { toSQL: () => { sql: string } },
