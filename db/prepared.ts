@@ -1,3 +1,4 @@
+import type Database from 'better-sqlite3';
 import type { DbOrTx } from './client';
 
 /**
@@ -22,5 +23,40 @@ export function preparedPerDb<T>(build: (db: DbOrTx) => T): (db: DbOrTx) => T {
       cache.set(connection, statement);
     }
     return statement;
+  };
+}
+
+/** The better-sqlite3 connection under a database or transaction handle. */
+const clientOf = (db: DbOrTx): Database.Database =>
+  (db as unknown as { session: { client: Database.Database } }).session.client;
+
+/**
+ * For the few reads every signed-in request makes: the SQL drizzle builds for `query` (with
+ * `sql.placeholder`s as `?`), prepared once per connection on better-sqlite3 itself, answering rows as
+ * arrays in the order the query selects. It skips drizzle's per-row mapping: `toRow` names the values and
+ * must itself parse any JSON column (text and numbers come as stored).
+ */
+export function rawPreparedPerDb<Row>(
+  build: (db: DbOrTx) => { toSQL: () => { sql: string } },
+  toRow: (values: unknown[]) => Row,
+) {
+  const statement = preparedPerDb((db) => clientOf(db).prepare(build(db).toSQL().sql).raw(true));
+  return {
+    all: (db: DbOrTx, ...params: unknown[]): Row[] =>
+      (statement(db).all(...params) as unknown[][]).map(toRow),
+    get: (db: DbOrTx, ...params: unknown[]): Row | undefined => {
+      const values = statement(db).get(...params) as unknown[] | undefined;
+      return values && toRow(values);
+    },
+  };
+}
+
+/** `toRow` for rawPreparedPerDb: names the values after a selection's keys, in the order it selects them. */
+export function namedAfter<Row>(selection: Record<keyof Row, unknown>): (values: unknown[]) => Row {
+  const keys = Object.keys(selection);
+  return (values) => {
+    const row: Record<string, unknown> = {};
+    for (let i = 0; i < keys.length; i++) row[keys[i]] = values[i];
+    return row as Row;
   };
 }

@@ -1,6 +1,7 @@
 import { eq, lte, sql } from 'drizzle-orm';
 import type { Adapter, DatabaseSession, DatabaseUser } from 'lucia';
 import type { Db } from '@/db/client';
+import { rawPreparedPerDb } from '@/db/prepared';
 import { sessions, users } from '@/db/schema';
 
 type SessionRow = typeof sessions.$inferSelect;
@@ -19,21 +20,44 @@ function once<T>(build: () => T): () => T {
 
 /**
  * lucia's storage over the sessions and users tables, with every statement built and prepared once
- * (drizzle `.prepare()`): a signed-in request reads its session and user in one prepared join instead of
+ * (drizzle `.prepare()`; the session read raw, see rawPreparedPerDb): a signed-in request reads its session and user in one prepared join instead of
  * two queries built anew each time (as a general-purpose adapter would). Only the user columns
  * lucia hands on are read, never the password hash.
  */
 export function createSessionAdapter(db: Db): Adapter {
-  const sessionAndUser = once(() =>
-    db
-      .select({
-        session: sessions,
-        user: { id: users.id, email: users.email, name: users.name, emailVerifiedAt: users.emailVerifiedAt },
-      })
-      .from(sessions)
-      .innerJoin(users, eq(users.id, sessions.userId))
-      .where(eq(sessions.id, sql.placeholder('id')))
-      .prepare(),
+  // Every signed-in request reads this: a raw prepared join, rows as arrays in the order selected.
+  const sessionAndUser = rawPreparedPerDb(
+    () =>
+      db
+        .select({
+          id: sessions.id,
+          userId: sessions.userId,
+          expiresAt: sessions.expiresAt,
+          createdAt: sessions.createdAt,
+          userAgent: sessions.userAgent,
+          email: users.email,
+          name: users.name,
+          emailVerifiedAt: users.emailVerifiedAt,
+        })
+        .from(sessions)
+        .innerJoin(users, eq(users.id, sessions.userId))
+        .where(eq(sessions.id, sql.placeholder('id'))),
+    (values): [DatabaseSession, DatabaseUser] => {
+      const [id, userId, expiresAt, createdAt, userAgent, email, name, emailVerifiedAt] = values as [
+        string,
+        string,
+        number,
+        string | null,
+        string | null,
+        string,
+        string,
+        string | null,
+      ];
+      return [
+        toDatabaseSession({ id, userId, expiresAt, createdAt, userAgent }),
+        { id: userId, attributes: { email, name, emailVerifiedAt } },
+      ];
+    },
   );
   const userSessions = once(() =>
     db
@@ -82,10 +106,7 @@ export function createSessionAdapter(db: Db): Adapter {
 
   return {
     async getSessionAndUser(id): Promise<[DatabaseSession | null, DatabaseUser | null]> {
-      const row = sessionAndUser().get({ id });
-      if (!row) return [null, null];
-      const { id: userId, ...attributes } = row.user;
-      return [toDatabaseSession(row.session), { id: userId, attributes }];
+      return sessionAndUser.get(db, id) ?? [null, null];
     },
     async getUserSessions(userId) {
       return userSessions().all({ userId }).map(toDatabaseSession);

@@ -1,7 +1,7 @@
-import { and, desc, eq, isNotNull, isNull, sql } from 'drizzle-orm';
+import { and, desc, eq, getTableColumns, isNotNull, isNull, sql } from 'drizzle-orm';
 import type { DbOrTx } from '@/db/client';
 import { newId } from '@/db/new-id';
-import { preparedPerDb } from '@/db/prepared';
+import { namedAfter, rawPreparedPerDb } from '@/db/prepared';
 import { jobs, members } from '@/db/schema';
 import type { Job, JobPatch, MemberStateCounts, jobInputSchema } from '@/shared/schemas/jobs';
 import type { z } from 'zod';
@@ -13,46 +13,53 @@ function toJob(row: typeof jobs.$inferSelect): Job {
   return job;
 }
 
+/** A job's columns but its maker: every column is plain text or a number, so the list reads them raw. */
+const { createdBy: _createdBy, ...jobColumns } = getTableColumns(jobs);
+
 const jobsOf = (archived: boolean) =>
-  preparedPerDb((db) =>
-    db
-      .select()
-      .from(jobs)
-      .where(
-        and(
-          eq(jobs.orgId, sql.placeholder('orgId')),
-          archived ? isNotNull(jobs.archivedAt) : isNull(jobs.archivedAt),
-        ),
-      )
-      // rowid breaks ties between rows written in the same millisecond, keeping insertion order.
-      .orderBy(desc(jobs.createdAt), desc(sql`${jobs}.rowid`))
-      .prepare(),
+  rawPreparedPerDb(
+    (db) =>
+      db
+        .select(jobColumns)
+        .from(jobs)
+        .where(
+          and(
+            eq(jobs.orgId, sql.placeholder('orgId')),
+            archived ? isNotNull(jobs.archivedAt) : isNull(jobs.archivedAt),
+          ),
+        )
+        // rowid breaks ties between rows written in the same millisecond, keeping insertion order.
+        .orderBy(desc(jobs.createdAt), desc(sql`${jobs}.rowid`)),
+    namedAfter<Job>(jobColumns),
   );
 const openJobsOf = jobsOf(false);
 const archivedJobsOf = jobsOf(true);
 
-const jobById = preparedPerDb((db) =>
-  db
-    .select()
-    .from(jobs)
-    .where(and(eq(jobs.id, sql.placeholder('jobId')), eq(jobs.orgId, sql.placeholder('orgId'))))
-    .prepare(),
+const jobById = rawPreparedPerDb(
+  (db) =>
+    db
+      .select(jobColumns)
+      .from(jobs)
+      .where(and(eq(jobs.id, sql.placeholder('jobId')), eq(jobs.orgId, sql.placeholder('orgId')))),
+  namedAfter<Job>(jobColumns),
 );
 
 export function listJobs(db: DbOrTx, orgId: string, archived: boolean): Job[] {
-  return (archived ? archivedJobsOf : openJobsOf)(db).all({ orgId }).map(toJob);
+  return (archived ? archivedJobsOf : openJobsOf).all(db, orgId);
 }
 
 const memberState = sql<string>`json_extract(${members.summary}, '$.state')`;
 
 /** One grouped query for every job of the firm: its members counted by the state their summary holds. */
-const memberStatesOf = preparedPerDb((db) =>
-  db
-    .select({ jobId: members.jobId, state: memberState, count: sql<number>`count(*)` })
-    .from(members)
-    .where(eq(members.orgId, sql.placeholder('orgId')))
-    .groupBy(members.jobId, memberState)
-    .prepare(),
+const memberStateColumns = { jobId: members.jobId, state: memberState, count: sql<number>`count(*)` };
+const memberStatesOf = rawPreparedPerDb(
+  (db) =>
+    db
+      .select(memberStateColumns)
+      .from(members)
+      .where(eq(members.orgId, sql.placeholder('orgId')))
+      .groupBy(members.jobId, memberState),
+  namedAfter<{ jobId: string; state: string; count: number }>(memberStateColumns),
 );
 
 export const noMembers = (): MemberStateCounts => ({
@@ -65,7 +72,7 @@ export const noMembers = (): MemberStateCounts => ({
 /** The firm's members counted by state, per job (a job with no members has no entry). */
 export function memberStatesByJob(db: DbOrTx, orgId: string): Map<string, MemberStateCounts> {
   const out = new Map<string, MemberStateCounts>();
-  for (const row of memberStatesOf(db).all({ orgId })) {
+  for (const row of memberStatesOf.all(db, orgId)) {
     const counts = out.get(row.jobId) ?? noMembers();
     if (row.state in counts) counts[row.state as keyof MemberStateCounts] += row.count;
     out.set(row.jobId, counts);
@@ -75,8 +82,7 @@ export function memberStatesByJob(db: DbOrTx, orgId: string): Map<string, Member
 
 /** Only a job of `orgId`: another firm's id reads as missing. */
 export function findJob(db: DbOrTx, orgId: string, jobId: string): Job | undefined {
-  const row = jobById(db).get({ jobId, orgId });
-  return row && toJob(row);
+  return jobById.get(db, jobId, orgId);
 }
 
 /** The job holding `jobId` in whatever firm, with its maker: only for checking a device-chosen id. */

@@ -1,7 +1,7 @@
 import { and, asc, eq, getTableColumns, sql } from 'drizzle-orm';
 import type { DbOrTx } from '@/db/client';
 import { newId } from '@/db/new-id';
-import { preparedPerDb } from '@/db/prepared';
+import { namedAfter, preparedPerDb, rawPreparedPerDb } from '@/db/prepared';
 import { members } from '@/db/schema';
 import type { Member, MemberListItem, MemberSummary } from '@/shared/schemas/members';
 
@@ -23,14 +23,20 @@ export type MemberFields = Pick<
 const { orgId: _orgId, ...memberColumns } = getTableColumns(members);
 const { input: _input, result: _result, prescriptive: _prescriptive, ...listColumns } = memberColumns;
 
-const membersOfJob = preparedPerDb((db) =>
-  db
-    .select(listColumns)
-    .from(members)
-    .where(and(eq(members.jobId, sql.placeholder('jobId')), eq(members.orgId, sql.placeholder('orgId'))))
-    // rowid breaks ties between rows written in the same millisecond, keeping insertion order.
-    .orderBy(asc(members.createdAt), asc(sql`${members}.rowid`))
-    .prepare(),
+/** The list's columns are plain but the summary, which is parsed here: the list reads them raw. */
+const toListItem = namedAfter<MemberListItem>(listColumns);
+const membersOfJob = rawPreparedPerDb(
+  (db) =>
+    db
+      .select(listColumns)
+      .from(members)
+      .where(and(eq(members.jobId, sql.placeholder('jobId')), eq(members.orgId, sql.placeholder('orgId'))))
+      // rowid breaks ties between rows written in the same millisecond, keeping insertion order.
+      .orderBy(asc(members.createdAt), asc(sql`${members}.rowid`)),
+  (values): MemberListItem => {
+    const item = toListItem(values);
+    return { ...item, summary: JSON.parse(item.summary as unknown as string) as MemberSummary };
+  },
 );
 
 const memberById = preparedPerDb((db) =>
@@ -43,7 +49,7 @@ const memberById = preparedPerDb((db) =>
 
 /** The job's members in the order they were made, without inputs and results. */
 export function listMembers(db: DbOrTx, orgId: string, jobId: string): MemberListItem[] {
-  return membersOfJob(db).all({ jobId, orgId });
+  return membersOfJob.all(db, jobId, orgId);
 }
 
 /** The member holding `memberId` in whatever firm: only for checking a device-chosen id. */
