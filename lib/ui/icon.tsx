@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import Svg, { Circle, Path } from 'react-native-svg';
 import { colors, iconSize } from '@/lib/theme';
 
@@ -48,8 +49,7 @@ type IconProps = {
   color?: string;
 };
 
-/** Tributary's own line icons (24-unit grid, round strokes). Decorative: pair each with a word. */
-export function Icon({ name, size = iconSize.md, color = colors.ink }: IconProps) {
+function IconView({ name, size = iconSize.md, color = colors.ink }: IconProps) {
   return (
     <Svg width={size} height={size} viewBox="0 0 24 24" fill="none" aria-hidden>
       {circled.has(name) ? <Circle cx={12} cy={12} r={9} stroke={color} strokeWidth={2} /> : null}
@@ -59,3 +59,6 @@ export function Icon({ name, size = iconSize.md, color = colors.ink }: IconProps
     </Svg>
   );
 }
+
+/** Tributary's own line icons (24-unit grid, round strokes). Decorative: pair each with a word. Memoised. */
+export const Icon = memo(IconView);

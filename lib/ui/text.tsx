@@ -1,27 +1,37 @@
-import { Text as RNText, type TextProps as RNTextProps } from 'react-native';
+import { memo } from 'react';
+import { Text as RNText, StyleSheet, type TextProps as RNTextProps } from 'react-native';
 import { colors, typeScale, type TypeVariant } from '@/lib/theme';
 
 type Tone = 'ink' | 'muted' | 'accent' | 'danger' | 'onAccent';
 
-const toneColor: Record<Tone, string> = {
-  ink: colors.ink,
-  muted: colors.inkMuted,
-  accent: colors.accent,
-  danger: colors.danger,
-  onAccent: colors.onAccent,
-};
+// Static styles: an inline colour object would be new on every render, and react-native-web resolves each
+// new style object again (the result column renders dozens of texts per keystroke).
+const toneStyles = StyleSheet.create({
+  ink: { color: colors.ink },
+  muted: { color: colors.inkMuted },
+  accent: { color: colors.accent },
+  danger: { color: colors.danger },
+  onAccent: { color: colors.onAccent },
+}) satisfies Record<Tone, unknown>;
+
+const variantStyles = StyleSheet.create(typeScale);
 
 export type TextProps = RNTextProps & { variant?: TypeVariant; tone?: Tone };
 
-/** Text in the Tributary type scale. Headings get the matching accessibility role. */
-export function Text({ variant = 'body', tone = 'ink', style, ...rest }: TextProps) {
+function TextView({ variant = 'body', tone = 'ink', style, ...rest }: TextProps) {
   const isHeading = variant === 'display' || variant === 'title' || variant === 'heading';
   return (
     <RNText
       role={isHeading ? 'heading' : undefined}
       aria-level={variant === 'display' ? 1 : variant === 'title' ? 2 : isHeading ? 3 : undefined}
-      style={[typeScale[variant], { color: toneColor[tone] }, style]}
+      style={[variantStyles[variant], toneStyles[tone], style]}
       {...rest}
     />
   );
 }
+
+/**
+ * Text in the Tributary type scale. Headings get the matching accessibility role. Memoised: a text whose
+ * words and style are unchanged is not rendered again with the rest of its card.
+ */
+export const Text = memo(TextView);

@@ -1,10 +1,10 @@
+import { memo } from 'react';
 import { G, Rect, Text as SvgText } from 'react-native-svg';
 import type { PlacedLabel } from './label-placement';
 import { diagramLook } from './diagram-style';
 import { LABEL_FONT_SIZE, LABEL_PAD_X } from './text-metrics';
 
-/** A value or load label: text on a small paper chip, so it reads over lines and fills. */
-export function DiagramLabel({ label }: { label: PlacedLabel }) {
+function DiagramLabelView({ label }: { label: PlacedLabel }) {
   return (
     <G>
       <Rect
@@ -29,3 +29,17 @@ export function DiagramLabel({ label }: { label: PlacedLabel }) {
     </G>
   );
 }
+
+const sameChip = (a: { label: PlacedLabel }, b: { label: PlacedLabel }) =>
+  a.label.x === b.label.x &&
+  a.label.y === b.label.y &&
+  a.label.width === b.label.width &&
+  a.label.height === b.label.height &&
+  a.label.text === b.label.text &&
+  a.label.strong === b.label.strong;
+
+/**
+ * A value or load label: text on a small paper chip, so it reads over lines and fills. Drawn again only
+ * when its place or words change (a new result makes new label objects for the same chips).
+ */
+export const DiagramLabel = memo(DiagramLabelView, sameChip);
