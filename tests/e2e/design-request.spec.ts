@@ -305,7 +305,13 @@ for (const name of Object.keys(viewports) as ViewportName[]) {
         expect(detail.snapshot.members).toHaveLength(2);
         expect(detail.snapshot.files).toHaveLength(2);
         expect(detail.versions[1].changes).toContainEqual(
-          expect.objectContaining({ path: 'files.attic-over.png', before: null }),
+          expect.objectContaining({
+            group: 'Job and request',
+            section: 'Photos',
+            field: 'Photo attic-over.png',
+            kind: 'added',
+            before: null,
+          }),
         );
       } finally {
         await close();
