@@ -20,8 +20,9 @@ function once<T>(build: () => T): () => T {
 
 /**
  * lucia's storage over the sessions and users tables, with every statement built and prepared once
- * (drizzle `.prepare()`; the session read raw, see rawPreparedPerDb): a signed-in request reads its session and user in one prepared join instead of
- * two queries built anew each time (as a general-purpose adapter would). Only the user columns
+ * (drizzle `.prepare()`; the session read raw, see rawPreparedPerDb): a signed-in request reads its session
+ * and user in one prepared join instead of two queries built anew each time (as a general-purpose adapter
+ * would). Only the user columns
  * lucia hands on are read, never the password hash.
  */
 export function createSessionAdapter(db: Db): Adapter {

@@ -160,7 +160,11 @@ function changes(w: PdfWriter, pkg: RequestPackage): void {
     { size: 8.5, color: MUTED },
   );
   const groups = new Map<string, RequestPackage['changes']>();
-  for (const line of pkg.changes) groups.set(line.group, [...(groups.get(line.group) ?? []), line]);
+  for (const line of pkg.changes) {
+    const lines = groups.get(line.group);
+    if (lines) lines.push(line);
+    else groups.set(line.group, [line]);
+  }
   for (const [group, lines] of groups) {
     w.heading(group, 10);
     w.table(
