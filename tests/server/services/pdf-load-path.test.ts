@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { snapshotSteps } from '@/server/services/pdf/pdf-load-path';
 import type { SnapshotLoadPathStep } from '@/shared/schemas/requests/snapshot';
 
+// Invented loads: these tests are about which step an end links to, not about any value.
 const load = { D: 500, L: 1000, Lr: 0, S: 0 };
 
 function step(
