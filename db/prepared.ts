@@ -1,4 +1,5 @@
 import type Database from 'better-sqlite3';
+import { sql, type SQL } from 'drizzle-orm';
 import type { DbOrTx } from './client';
 
 /**
@@ -30,16 +31,16 @@ export function preparedPerDb<T>(build: (db: DbOrTx) => T): (db: DbOrTx) => T {
 const clientOf = (db: DbOrTx): Database.Database =>
   (db as unknown as { session: { client: Database.Database } }).session.client;
 
+/** A drizzle query not yet run: its SQL, with `sql.placeholder`s as `?`. */
+type BuiltQuery = { toSQL: () => { sql: string } };
+
 /**
  * For the few reads every signed-in request makes: the SQL drizzle builds for `query` (with
  * `sql.placeholder`s as `?`), prepared once per connection on better-sqlite3 itself, answering rows as
  * arrays in the order the query selects. It skips drizzle's per-row mapping: `toRow` names the values and
  * must itself parse any JSON column (text and numbers come as stored).
  */
-export function rawPreparedPerDb<Row>(
-  build: (db: DbOrTx) => { toSQL: () => { sql: string } },
-  toRow: (values: unknown[]) => Row,
-) {
+export function rawPreparedPerDb<Row>(build: (db: DbOrTx) => BuiltQuery, toRow: (values: unknown[]) => Row) {
   const statement = preparedPerDb((db) => clientOf(db).prepare(build(db).toSQL().sql).raw(true));
   return {
     all: (db: DbOrTx, ...params: unknown[]): Row[] =>
@@ -60,3 +61,17 @@ export function namedAfter<Row>(selection: Record<keyof Row, unknown>): (values:
     return row as Row;
   };
 }
+
+/**
+ * For the writes of a member save: the SQL drizzle builds for `query` (an insert or update with
+ * `sql.placeholder`s), prepared once per connection on better-sqlite3 and run with the parameters by
+ * position, in the order the SQL names them (the set or values keys, then the where clause). JSON columns
+ * take their text: the caller stringifies them, as drizzle would.
+ */
+export function rawRunPerDb(build: (db: DbOrTx) => BuiltQuery) {
+  const statement = preparedPerDb((db) => clientOf(db).prepare(build(db).toSQL().sql));
+  return (db: DbOrTx, ...params: unknown[]): Database.RunResult => statement(db).run(...params);
+}
+
+/** A `?` for a value of a raw write's `set` or `values` (a placeholder typed as SQL, which every column takes). */
+export const slot = (name: string): SQL => sql`${sql.placeholder(name)}`;

@@ -1,5 +1,6 @@
 import type { DbOrTx } from '@/db/client';
 import { newId } from '@/db/new-id';
+import { rawRunPerDb, slot } from '@/db/prepared';
 import { auditEvents } from '@/db/schema';
 
 export interface Actor {
@@ -13,17 +14,31 @@ export interface AuditEntry {
   detail?: Record<string, unknown>;
 }
 
-/** Writes one audit row; call it inside the transaction of the change it records. */
+const auditInsert = rawRunPerDb((db) =>
+  db.insert(auditEvents).values({
+    id: slot('id'),
+    orgId: slot('orgId'),
+    userId: slot('userId'),
+    action: slot('action'),
+    subject: slot('subject'),
+    at: slot('at'),
+    detail: slot('detail'),
+  }),
+);
+
+/**
+ * Writes one audit row; call it inside the transaction of the change it records. The statement is prepared
+ * once; its parameters follow the order of its `values` keys.
+ */
 export function recordAudit(db: DbOrTx, actor: Actor, entry: AuditEntry): void {
-  db.insert(auditEvents)
-    .values({
-      id: newId(),
-      orgId: actor.orgId,
-      userId: actor.userId,
-      action: entry.action,
-      subject: entry.subject,
-      at: new Date().toISOString(),
-      detail: entry.detail ?? {},
-    })
-    .run();
+  auditInsert(
+    db,
+    newId(),
+    actor.orgId,
+    actor.userId,
+    entry.action,
+    entry.subject,
+    new Date().toISOString(),
+    JSON.stringify(entry.detail ?? {}),
+  );
 }

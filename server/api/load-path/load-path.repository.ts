@@ -1,6 +1,7 @@
 import { and, asc, eq, or, sql } from 'drizzle-orm';
 import type { DbOrTx } from '@/db/client';
 import { newId } from '@/db/new-id';
+import { namedAfter, rawPreparedPerDb } from '@/db/prepared';
 import { loadPathBearings, loadPathElements } from '@/db/schema';
 import type { LoadPathElementData, LoadPathEnd } from '@/shared/schemas/calc/load-path';
 import type { Bearing, BearingSet, Element } from '@/shared/schemas/load-path-elements';
@@ -15,14 +16,28 @@ const elementColumns = {
   updatedAt: loadPathElements.updatedAt,
 };
 
-/** The job's existing framing in the order it was entered. */
+const toElement = namedAfter<Element>(elementColumns);
+const elementsOfJob = rawPreparedPerDb(
+  (db) =>
+    db
+      .select(elementColumns)
+      .from(loadPathElements)
+      .where(
+        and(
+          eq(loadPathElements.jobId, sql.placeholder('jobId')),
+          eq(loadPathElements.orgId, sql.placeholder('orgId')),
+        ),
+      )
+      .orderBy(asc(loadPathElements.createdAt), asc(sql`${loadPathElements}.rowid`)),
+  (values): Element => {
+    const row = toElement(values);
+    return { ...row, element: JSON.parse(row.element as unknown as string) as LoadPathElementData };
+  },
+);
+
+/** The job's existing framing in the order it was entered (read raw: every member save reads it). */
 export function listElements(db: DbOrTx, orgId: string, jobId: string): Element[] {
-  return db
-    .select(elementColumns)
-    .from(loadPathElements)
-    .where(and(eq(loadPathElements.jobId, jobId), eq(loadPathElements.orgId, orgId)))
-    .orderBy(asc(loadPathElements.createdAt), asc(sql`${loadPathElements}.rowid`))
-    .all();
+  return elementsOfJob.all(db, jobId, orgId);
 }
 
 /** Only an element of `orgId`: another firm's id reads as missing. */
@@ -87,9 +102,7 @@ const bearingColumns = {
 };
 
 /** A stored bearing with its empty columns left out (as the engine's schema has them: optional). */
-function asBearing(row: {
-  [K in keyof typeof bearingColumns]: (typeof loadPathBearings.$inferSelect)[K];
-}): Bearing {
+function asBearing(row: BearingRow): Bearing {
   const out: Bearing = { id: row.id, fromId: row.fromId, end: row.end, ontoId: row.ontoId };
   if (row.atFt !== null) out.atFt = row.atFt;
   if (row.hanger !== null) out.hanger = row.hanger;
@@ -98,14 +111,30 @@ function asBearing(row: {
   return out;
 }
 
+type BearingRow = { [K in keyof typeof bearingColumns]: (typeof loadPathBearings.$inferSelect)[K] };
+const toBearingRow = namedAfter<BearingRow>(bearingColumns);
+const bearingsOfJob = rawPreparedPerDb(
+  (db) =>
+    db
+      .select(bearingColumns)
+      .from(loadPathBearings)
+      .where(
+        and(
+          eq(loadPathBearings.jobId, sql.placeholder('jobId')),
+          eq(loadPathBearings.orgId, sql.placeholder('orgId')),
+        ),
+      )
+      .orderBy(asc(sql`${loadPathBearings}.rowid`)),
+  (values): Bearing => {
+    const row = toBearingRow(values);
+    // The hanger column holds 0 or 1 (drizzle's boolean mode); read raw, it is made a boolean here.
+    return asBearing({ ...row, hanger: row.hanger === null ? null : Boolean(row.hanger) });
+  },
+);
+
+/** The job's bearings in the order they were set (read raw: every member save reads them). */
 export function listBearings(db: DbOrTx, orgId: string, jobId: string): Bearing[] {
-  return db
-    .select(bearingColumns)
-    .from(loadPathBearings)
-    .where(and(eq(loadPathBearings.jobId, jobId), eq(loadPathBearings.orgId, orgId)))
-    .orderBy(asc(sql`${loadPathBearings}.rowid`))
-    .all()
-    .map(asBearing);
+  return bearingsOfJob.all(db, jobId, orgId);
 }
 
 /** Writes what `fromId`'s `end` bears on, over what it bore on before. */

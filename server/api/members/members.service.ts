@@ -12,6 +12,7 @@ import {
   deleteMember,
   findMember,
   findMemberInAnyFirm,
+  findMemberToSave,
   insertMember,
   listMembers,
   updateMember,
@@ -134,10 +135,11 @@ export function createMembersService(db: Db) {
     async update(actor: Actor, memberId: string, patch: MemberPatch): Promise<Member> {
       const { baseVersion, ...changes } = patch;
       const read = (tx: DbOrTx) => {
-        const saved = findMember(tx, actor.orgId, memberId);
+        const saved = findMemberToSave(tx, actor.orgId, memberId);
         if (!saved) throw notFound('Member');
         if (baseVersion !== undefined && baseVersion !== saved.version) {
-          throw versionConflict('This member', saved);
+          // The conflict answers the member as stored, its result too.
+          throw versionConflict('This member', findMember(tx, actor.orgId, memberId));
         }
         const job = openJob(tx, actor.orgId, saved.jobId);
         const label = patch.label ?? saved.label;
