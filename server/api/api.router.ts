@@ -64,12 +64,54 @@ export interface ApiOptions {
   devMailKey?: string;
 }
 
-/** Everything under /api; unknown paths end in a JSON 404. */
+/**
+ * Everything under /api; unknown paths end in a JSON 404. The routers are grouped by the path's first part
+ * (`/jobs`, `/members`, `/requests`): a request is matched against the few mounts of its own group, not
+ * against every mount in turn (the order inside a group is the order they must be tried in).
+ */
 export function apiRouter(options: ApiOptions): Router {
   const { db, sessions } = options;
   const me = createMeService(db);
+  const budgets = { db, budgets: createBudgetsService(db) };
+  const members = { db, members: createMembersService(db) };
+  const screens = { db, screens: createScreensService(db) };
+  const checklist = { db, checklist: createChecklistService(db) };
+  const loadPath = { db, loadPath: createLoadPathService(db) };
+  const requests = { db, requests: createRequestsService(options) };
+
+  const jobs = Router();
+  jobs.use('/:jobId/budget', jobBudgetRouter(budgets));
+  jobs.use('/:jobId/budgets', jobSentBudgetsRouter(budgets));
+  jobs.use('/:jobId/members', jobMembersRouter(members));
+  jobs.use('/:jobId/screens', jobScreensRouter(screens));
+  jobs.use('/:jobId/checklist', jobChecklistRouter(checklist));
+  jobs.use('/:jobId/load-path', jobLoadPathRouter(loadPath));
+  jobs.use('/:jobId/elements', jobElementsRouter(loadPath));
+  jobs.use('/:jobId/requests', jobRequestsRouter(requests));
+  jobs.use('/:jobId/designs', jobDesignsRouter(db));
+  jobs.use(jobsRouter({ db, jobs: createJobsService(db) }));
+
+  const memberRoutes = Router();
+  memberRoutes.use('/:memberId/budget', memberBudgetRouter(budgets));
+  memberRoutes.use('/:memberId/shoring', memberShoringRouter({ db, shoring: createShoringService(db) }));
+  memberRoutes.use('/:memberId/ends', memberEndsRouter(loadPath));
+  memberRoutes.use(membersRouter(members));
+
+  const requestRoutes = Router();
+  requestRoutes.use(
+    '/:requestId/attachments',
+    attachmentsRouter({ db, attachments: createAttachmentsService({ db, storage: options.storage }) }),
+  );
+  requestRoutes.use(
+    '/:requestId',
+    packageRouter({ db, packages: createPackageService({ db, storage: options.storage }) }),
+  );
+  requestRoutes.use(requestsRouter(requests));
+
   const router = Router();
   router.use('/health', healthRouter());
+  router.use('/jobs', jobs);
+  router.use('/members', memberRoutes);
   router.use(
     '/auth',
     authRouter({
@@ -84,44 +126,16 @@ export function apiRouter(options: ApiOptions): Router {
   router.use('/me', meRouter({ me }));
   router.use('/orgs', orgsRouter({ db, orgs: createOrgsService(options) }));
   router.use('/invitations', invitationsRouter({ invitations: createInvitationsService(db), me, sessions }));
-  const budgets = { db, budgets: createBudgetsService(db) };
   router.use('/price-book', priceBookRouter({ db, priceBook: createPriceBookService(db) }));
-  router.use('/members/:memberId/budget', memberBudgetRouter(budgets));
-  router.use('/jobs/:jobId/budget', jobBudgetRouter(budgets));
-  router.use('/jobs/:jobId/budgets', jobSentBudgetsRouter(budgets));
   router.use('/budgets', sentBudgetsRouter(budgets));
-  const members = { db, members: createMembersService(db) };
-  router.use('/jobs/:jobId/members', jobMembersRouter(members));
-  const screens = { db, screens: createScreensService(db) };
-  router.use('/jobs/:jobId/screens', jobScreensRouter(screens));
   router.use('/screens', screensRouter(screens));
-  const checklist = { db, checklist: createChecklistService(db) };
-  router.use('/jobs/:jobId/checklist', jobChecklistRouter(checklist));
   router.use('/job-progress', jobProgressRouter(checklist));
-  router.use('/members/:memberId/shoring', memberShoringRouter({ db, shoring: createShoringService(db) }));
-  const loadPath = { db, loadPath: createLoadPathService(db) };
-  router.use('/jobs/:jobId/load-path', jobLoadPathRouter(loadPath));
-  router.use('/jobs/:jobId/elements', jobElementsRouter(loadPath));
-  router.use('/members/:memberId/ends', memberEndsRouter(loadPath));
   router.use('/elements', elementsRouter(loadPath));
-  router.use('/members', membersRouter(members));
-  const requests = { db, requests: createRequestsService(options) };
-  router.use('/jobs/:jobId/requests', jobRequestsRouter(requests));
-  router.use('/jobs/:jobId/designs', jobDesignsRouter(db));
-  router.use(
-    '/requests/:requestId/attachments',
-    attachmentsRouter({ db, attachments: createAttachmentsService({ db, storage: options.storage }) }),
-  );
-  router.use(
-    '/requests/:requestId',
-    packageRouter({ db, packages: createPackageService({ db, storage: options.storage }) }),
-  );
-  router.use('/requests', requestsRouter(requests));
+  router.use('/requests', requestRoutes);
   router.use(
     '/request-invitations',
     requestInvitationsRouter({ invitations: createRequestInvitationsService(db), me, sessions }),
   );
-  router.use('/jobs', jobsRouter({ db, jobs: createJobsService(db) }));
   router.use('/calc', calcRouter({ calc: createCalcService() }));
   if (options.devMailKey) router.use('/dev/mail', devMailRouter({ db, key: options.devMailKey }));
   router.use(() => {
