@@ -46,6 +46,24 @@ export function memberFields(input: MemberToEvaluate): CalcTaskAnswer<MemberFiel
   return answer(() => evaluateMember(input));
 }
 
+/** What a member save sends the pool: the member to check and the job's load path with it, as JSON text. */
+export interface MemberSaveTask {
+  member: MemberToEvaluate;
+  pathJson: string;
+}
+
+/**
+ * Runs in a worker thread (calc-worker.cjs): a member save's whole calculation in one trip, what the member
+ * stores and the job's load path with the member in it (not evaluated when the member's input is refused).
+ */
+export function memberSave(task: MemberSaveTask): {
+  fields: CalcTaskAnswer<MemberFields>;
+  path?: CalcTaskAnswer<LoadPathResult>;
+} {
+  const fields = memberFields(task.member);
+  return fields.ok ? { fields, path: loadPath(task.pathJson) } : { fields };
+}
+
 /**
  * Runs in a worker thread (calc-worker.cjs): a job's load path from its input as JSON text, the form the
  * main thread compares with what it reads in the write's transaction.

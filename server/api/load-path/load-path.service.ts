@@ -9,7 +9,6 @@ import {
   type MemberOnPath,
 } from '@/server/api/members/members.repository';
 import { AppError, notFound } from '@/server/app-error';
-import { runTask } from '@/server/services/calc-pool';
 import type { CalcTaskAnswer } from '@/server/services/calc-tasks';
 import type {
   LoadPathEnd,
@@ -55,21 +54,24 @@ export type FieldOf = (engineField: string) => string;
 const bearingField: FieldOf = (field) => (field.endsWith('.atFt') ? 'atFt' : 'ontoId');
 const elementField: FieldOf = () => 'element';
 
+/** What the load path's input takes of a member (its summary is what the path writes back). */
+export type PathMember = Omit<MemberOnPath, 'summary'>;
+
 /** What a job's load path is evaluated from, as read from the database: the engine's input is plain data. */
-interface JobPathRead {
-  members: MemberOnPath[];
+interface JobPathRead<M extends PathMember = MemberOnPath> {
+  members: M[];
   elements: Element[];
   bearings: ReturnType<typeof listBearings>;
   input: LoadPathInput;
 }
 
 /** The job's members (given, or as stored) and existing framing as the engine's nodes. */
-function readJobPath(
+function readJobPath<M extends PathMember = MemberOnPath>(
   db: DbOrTx,
   orgId: string,
   job: Job,
-  members: MemberOnPath[] = listMembersOnPath(db, orgId, job.id),
-): JobPathRead {
+  members: M[],
+): JobPathRead<M> {
   const elements = listElements(db, orgId, job.id);
   const bearings = listBearings(db, orgId, job.id);
   const bearingsOf = (id: string) =>
@@ -116,7 +118,7 @@ export function evaluateJob(
   fieldOf: FieldOf,
   members?: MemberOnPath[],
 ): JobLoadPath {
-  const read = readJobPath(db, orgId, job, members);
+  const read = readJobPath(db, orgId, job, members ?? listMembersOnPath(db, orgId, job.id));
   return answerOf(read, () => evaluateLoadPath(read.input), fieldOf);
 }
 
@@ -130,8 +132,8 @@ export interface PooledLoadPath {
  * The job's load path input as it will be once `member` is saved (in its place, or last when it is new),
  * read before the write's transaction so the pool can evaluate it meanwhile.
  */
-export function pathInputWith(db: DbOrTx, orgId: string, job: Job, member: MemberOnPath): LoadPathInput {
-  const members = listMembersOnPath(db, orgId, job.id);
+export function pathInputWith(db: DbOrTx, orgId: string, job: Job, member: PathMember): LoadPathInput {
+  const members: PathMember[] = listMembersOnPath(db, orgId, job.id);
   const saved = members.some((m) => m.id === member.id);
   const next = saved ? members.map((m) => (m.id === member.id ? member : m)) : [...members, member];
   return readJobPath(db, orgId, job, next).input;
@@ -139,13 +141,7 @@ export function pathInputWith(db: DbOrTx, orgId: string, job: Job, member: Membe
 
 /** The job's load path input as stored now. */
 export const jobPathInput = (db: DbOrTx, orgId: string, job: Job): LoadPathInput =>
-  readJobPath(db, orgId, job).input;
-
-/** {@link evaluateLoadPath} of `input` in the calculation pool, so a save does not hold the event loop for it. */
-export async function loadPathInPool(input: LoadPathInput): Promise<PooledLoadPath> {
-  const inputJson = JSON.stringify(input);
-  return { inputJson, answer: await runTask('loadPath', inputJson) };
-}
+  readJobPath(db, orgId, job, listMembersOnPath(db, orgId, job.id)).input;
 
 /** The pool's evaluation when it was made from the same input as `input`, else undefined. */
 function pooledResult(input: LoadPathInput, pooled?: PooledLoadPath): LoadPathResult | undefined {
@@ -169,7 +165,7 @@ export function refreshLoadPath(
   fieldOf: FieldOf,
   pooled?: PooledLoadPath,
 ): { loadPath: JobLoadPath; summaries: Map<string, MemberSummary> } {
-  const read = readJobPath(tx, orgId, job);
+  const read = readJobPath(tx, orgId, job, listMembersOnPath(tx, orgId, job.id));
   const { members } = read;
   const loadPath = answerOf(
     read,

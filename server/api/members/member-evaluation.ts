@@ -1,13 +1,12 @@
 import { CalcInputError, ENGINE_VERSION, checkMember, prescriptiveVerdict } from '@/lib/calc';
 import { memberSummary } from '@/lib/members/member-summary';
 import { AppError } from '@/server/app-error';
-import { runInPool } from '@/server/services/calc-pool';
 import type { MemberCheckInput } from '@/shared/schemas/calc/member';
 import type { Job } from '@/shared/schemas/jobs';
 import type { MemberFields } from './members.repository';
 
 /** Engine input errors name a field of the check input; in a member body that input sits under `input`. */
-function asFieldError(error: unknown): unknown {
+export function asFieldError(error: unknown): unknown {
   if (!(error instanceof CalcInputError)) return error;
   return new AppError('bad_request', error.message, { [`input.${error.field}`]: [error.message] });
 }
@@ -73,15 +72,3 @@ export function evaluateHere(given: MemberToEvaluate): MemberFields {
 /** {@link evaluateHere} for a member of `job`. */
 export const evaluate = (job: Job, label: string, wall: string, given: MemberCheckInput): MemberFields =>
   evaluateHere(memberToEvaluate(job, label, wall, given));
-
-/**
- * {@link evaluateMember} in the calculation pool, so a save does not hold the event loop for the check and
- * its diagram samples; the same result, and the same 400 naming the member's field.
- */
-export async function evaluateInPool(given: MemberToEvaluate): Promise<MemberFields> {
-  try {
-    return await runInPool('memberFields', given);
-  } catch (error) {
-    throw asFieldError(error);
-  }
-}

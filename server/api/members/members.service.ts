@@ -6,7 +6,9 @@ import { recordAudit, type Actor } from '@/server/api/audit/audit.repository';
 import { findJob } from '@/server/api/jobs/jobs.repository';
 import type { Job } from '@/shared/schemas/jobs';
 import type { Member, MemberCreate, MemberListItem, MemberPatch } from '@/shared/schemas/members';
-import { evaluateHere, evaluateInPool, memberToEvaluate, type MemberToEvaluate } from './member-evaluation';
+import { CalcInputError } from '@/lib/calc';
+import { runTask } from '@/server/services/calc-pool';
+import { asFieldError, evaluateHere, memberToEvaluate, type MemberToEvaluate } from './member-evaluation';
 import type { MemberFields } from './members.repository';
 import {
   deleteMember,
@@ -19,7 +21,6 @@ import {
 } from './members.repository';
 import { deleteBearingsOf } from '@/server/api/load-path/load-path.repository';
 import {
-  loadPathInPool,
   pathInputWith,
   refreshLoadPath,
   type PooledLoadPath,
@@ -54,14 +55,26 @@ const fieldsFor = (now: MemberToEvaluate, from: MemberToEvaluate, computed: Memb
 const inputField = () => 'input';
 
 /**
- * The job's load path as it will be with the member `id` saved with `fields`, evaluated in the calculation
- * pool while the event loop answers others (the write's transaction uses it when nothing changed meanwhile).
+ * A save's calculation in the pool, in one trip, while the event loop answers others: the member's check,
+ * and the job's load path as it will be with the member `id` saved (in its place, or last when it is new).
+ * The write's transaction uses both when what it reads is what they were computed from.
  */
-const pathInPool = (db: DbOrTx, orgId: string, job: Job, id: string, fields: MemberFields) =>
-  loadPathInPool(pathInputWith(db, orgId, job, { ...fields, id }));
+async function saveInPool(db: DbOrTx, orgId: string, job: Job, id: string, from: MemberToEvaluate) {
+  const onPath = {
+    id,
+    label: from.label,
+    kind: from.input.kind,
+    input: { ...from.input, label: from.label },
+  };
+  const inputJson = JSON.stringify(pathInputWith(db, orgId, job, onPath));
+  const { fields, path } = await runTask('memberSave', { member: from, pathJson: inputJson });
+  if (!fields.ok) throw asFieldError(new CalcInputError(fields.field, fields.message));
+  const pooled: PooledLoadPath | undefined = path && { inputJson, answer: path };
+  return { computed: fields.value, pooled };
+}
 
 /** The member with its state on the job's load path, checked again with this change. */
-function onLoadPath(tx: DbOrTx, orgId: string, job: Job, member: Member, pooled: PooledLoadPath): Member {
+function onLoadPath(tx: DbOrTx, orgId: string, job: Job, member: Member, pooled?: PooledLoadPath): Member {
   const summary = refreshLoadPath(tx, orgId, job, inputField, pooled).summaries.get(member.id);
   return summary ? { ...member, summary } : member;
 }
@@ -113,8 +126,7 @@ export function createMembersService(db: Db) {
       const early = replay(db);
       if (early) return early;
       const id = body.id ?? newId();
-      const computed = await evaluateInPool(from);
-      const pooled = await pathInPool(db, actor.orgId, before, id, computed);
+      const { computed, pooled } = await saveInPool(db, actor.orgId, before, id, from);
       return db.transaction((tx) => {
         const job = openJob(tx, actor.orgId, jobId);
         const replayed = replay(tx);
@@ -147,8 +159,7 @@ export function createMembersService(db: Db) {
         return { saved, job, toCheck: memberToEvaluate(job, label, wall, patch.input ?? saved.input) };
       };
       const { toCheck: from, job: before } = read(db);
-      const computed = await evaluateInPool(from);
-      const pooled = await pathInPool(db, actor.orgId, before, memberId, computed);
+      const { computed, pooled } = await saveInPool(db, actor.orgId, before, memberId, from);
       return db.transaction((tx) => {
         const { saved, job, toCheck } = read(tx);
         const fields = fieldsFor(toCheck, from, computed);

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { CalcInputError } from '@/lib/calc';
+import { CalcInputError, evaluateLoadPath } from '@/lib/calc';
 import { evaluateMember, type MemberToEvaluate } from '@/server/api/members/member-evaluation';
-import { runInPool } from '@/server/services/calc-pool';
+import { runInPool, runTask } from '@/server/services/calc-pool';
 import { memberCheckInputSchema } from '@/shared/schemas/calc/member';
 
 /** Invented demo header: 2-ply 2x10 Douglas Fir-Larch No.2 over 6 ft, under 13 ft of roof and 6 ft of ceiling. */
@@ -49,5 +49,32 @@ describe('the calculation pool', () => {
       field: (here as CalcInputError).field,
       message: (here as CalcInputError).message,
     });
+  });
+
+  it('checks a saved member and its job’s load path in one trip, as the event loop would', async () => {
+    const path = {
+      edition: 'ASCE 7-22' as const,
+      nodes: [
+        {
+          id: 'h1',
+          label: header.label,
+          element: { kind: 'member' as const, input: { ...header.input, label: header.label } },
+          bearings: [],
+        },
+      ],
+    };
+    const saved = await runTask('memberSave', { member: header, pathJson: JSON.stringify(path) });
+    expect(saved.fields).toEqual({ ok: true, value: evaluateMember(header) });
+    expect(saved.path).toEqual({ ok: true, value: evaluateLoadPath(path) });
+  });
+
+  it('leaves the load path alone when the member’s own input is refused', async () => {
+    const bad = { ...header, input: { ...header.input, sizeId: '9-ply-2x99' } };
+    const saved = await runTask('memberSave', { member: bad, pathJson: '{}' });
+    expect(saved.fields).toMatchObject({
+      ok: false,
+      field: (thrown(() => evaluateMember(bad)) as CalcInputError).field,
+    });
+    expect(saved.path).toBeUndefined();
   });
 });
