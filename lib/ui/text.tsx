@@ -30,8 +30,18 @@ function TextView({ variant = 'body', tone = 'ink', style, ...rest }: TextProps)
   );
 }
 
+/** Equal by identity, or two arrays (words with numbers put in, a style list) equal item by item. */
+const sameItem = (a: unknown, b: unknown) =>
+  a === b || (Array.isArray(a) && Array.isArray(b) && a.length === b.length && a.every((v, i) => v === b[i]));
+
+const sameText = (a: TextProps, b: TextProps) => {
+  const keys = Object.keys(a) as (keyof TextProps)[];
+  return keys.length === Object.keys(b).length && keys.every((k) => sameItem(a[k], b[k]));
+};
+
 /**
  * Text in the Tributary type scale. Headings get the matching accessibility role. Memoised: a text whose
- * words and style are unchanged is not rendered again with the rest of its card.
+ * words and style are unchanged is not rendered again with the rest of its card ("Demand {x} psi" makes a
+ * new children array each render, so arrays compare item by item).
  */
-export const Text = memo(TextView);
+export const Text = memo(TextView, sameText);

@@ -2,6 +2,7 @@ import { useMemo } from 'react';
 import { View } from 'react-native';
 import Svg, { G, Line, Path, Rect } from 'react-native-svg';
 import type { MemberCheckResult } from '@/shared/schemas/calc/member';
+import { valueMemo } from '../value-memo';
 import { DiagramLabel } from './diagram-label';
 import { diagramLook } from './diagram-style';
 import { loadDiagramText } from './diagram-text';
@@ -18,8 +19,11 @@ export type LoadDiagramProps = {
 
 const HEAD = 4;
 
-/** A uniform load's band with its down-ticks, all ticks in one path (a span change moves them, not remounts). */
-function Band({ band }: { band: LoadBand }) {
+/**
+ * A uniform load's band with its down-ticks, all ticks in one path (a span change moves them, not remounts).
+ * Band, Arrow and Dimension are drawn again only when their own numbers change.
+ */
+const Band = valueMemo(function Band({ band }: { band: LoadBand }) {
   const bottom = band.y + band.height;
   return (
     <G>
@@ -47,9 +51,9 @@ function Band({ band }: { band: LoadBand }) {
       ) : null}
     </G>
   );
-}
+});
 
-function Arrow({ arrow }: { arrow: LoadArrow }) {
+const Arrow = valueMemo(function Arrow({ arrow }: { arrow: LoadArrow }) {
   const { x, yTop, yBottom } = arrow;
   return (
     <G>
@@ -60,9 +64,9 @@ function Arrow({ arrow }: { arrow: LoadArrow }) {
       />
     </G>
   );
-}
+});
 
-function Dimension({ dim }: { dim: DimensionLine }) {
+const Dimension = valueMemo(function Dimension({ dim }: { dim: DimensionLine }) {
   const tick = 5;
   return (
     <G>
@@ -72,7 +76,7 @@ function Dimension({ dim }: { dim: DimensionLine }) {
       <DiagramLabel label={dim.label} />
     </G>
   );
-}
+});
 
 /**
  * The loaded member: uniform loads as bands and point loads as arrows to scale along the span, each

@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { formatNumber } from '@/lib/format';
 import { colors, radii, spacing } from '@/lib/theme';
@@ -17,23 +18,21 @@ export function verdictText(result: MemberCheckResult): { title: string; detail:
   };
 }
 
-/** The verdict as a banner: icon, words, the member and the governing check. */
-export function VerdictBanner({ result, compact = false }: { result: MemberCheckResult; compact?: boolean }) {
+function VerdictBannerView({ result, compact = false }: { result: MemberCheckResult; compact?: boolean }) {
   const { title, detail, short } = verdictText(result);
-  const fg = result.pass ? colors.success : colors.danger;
   return (
     <View
       role="status"
       testID={compact ? 'verdict-bar' : 'verdict'}
-      style={[
-        styles.box,
-        compact && styles.compact,
-        { borderColor: fg, backgroundColor: result.pass ? colors.successSoft : colors.dangerSoft },
-      ]}
+      style={[styles.box, compact && styles.compact, result.pass ? styles.passBox : styles.failBox]}
     >
-      <Icon name={result.pass ? 'check' : 'error'} color={fg} />
+      <Icon name={result.pass ? 'check' : 'error'} color={result.pass ? colors.success : colors.danger} />
       <View style={styles.text}>
-        <Text variant="bodyStrong" style={{ color: fg }} numberOfLines={compact ? 1 : undefined}>
+        <Text
+          variant="bodyStrong"
+          style={result.pass ? styles.passText : styles.failText}
+          numberOfLines={compact ? 1 : undefined}
+        >
           {compact ? (result.pass ? 'Passes' : 'Fails') : title}
         </Text>
         <Text variant="caption" numberOfLines={compact ? 1 : undefined}>
@@ -55,5 +54,12 @@ const styles = StyleSheet.create({
     alignSelf: 'stretch',
   },
   compact: { padding: spacing.sm, paddingHorizontal: spacing.md },
+  passBox: { borderColor: colors.success, backgroundColor: colors.successSoft },
+  failBox: { borderColor: colors.danger, backgroundColor: colors.dangerSoft },
+  passText: { color: colors.success },
+  failText: { color: colors.danger },
   text: { flex: 1, gap: spacing.xxs },
 });
+
+/** The verdict as a banner: icon, words, the member and the governing check. Drawn again only for a new result. */
+export const VerdictBanner = memo(VerdictBannerView);
