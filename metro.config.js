@@ -26,8 +26,10 @@ function proxyToApi(req, res) {
 }
 
 // zod's classic and mini builds import every language's messages as `z.locales`; the web build takes the
-// English ones only (see metro/zod-english-only.js).
+// English ones only (see metro/zod-english-only.js). Its schema compiler and JSON Schema reader, unused by
+// the app, are left out (see metro/zod-web-omitted.js).
 const zodEnglishOnly = path.join(__dirname, 'metro', 'zod-english-only.js');
+const zodWebOmitted = path.join(__dirname, 'metro', 'zod-web-omitted.js');
 const zodBuild = /[\\/]zod[\\/]v4[\\/](classic|mini|core)[\\/]/;
 const upstreamResolve = config.resolver.resolveRequest;
 config.resolver.resolveRequest = (context, moduleName, platform) => {
@@ -37,9 +39,24 @@ config.resolver.resolveRequest = (context, moduleName, platform) => {
     zodBuild.test(context.originModulePath)
   )
     return { type: 'sourceFile', filePath: zodEnglishOnly };
+  if (
+    platform === 'web' &&
+    /^\.\/(compile|from-json-schema)\.c?js$/.test(moduleName) &&
+    zodBuild.test(context.originModulePath)
+  )
+    return { type: 'sourceFile', filePath: zodWebOmitted };
   return upstreamResolve
     ? upstreamResolve(context, moduleName, platform)
     : context.resolveRequest(context, moduleName, platform);
+};
+
+// The first screen (sign-in) loads the entry and the common chunk of modules shared by route chunks. Only
+// what the root layout, the home redirect and the signed-out screens need goes into that common chunk; a
+// module shared by other routes only is copied into each of their chunks (read by the serializer patch in
+// patches/@expo+metro-config*.patch).
+config.serializer = {
+  ...config.serializer,
+  commonChunkFrom: [/[\\/]app[\\/]_layout\.tsx$/, /[\\/]app[\\/]index\.tsx$/, /[\\/]app[\\/]\(auth\)[\\/]/],
 };
 
 const expoEnhance = config.server?.enhanceMiddleware;

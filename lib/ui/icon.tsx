@@ -1,5 +1,5 @@
 import { memo } from 'react';
-import Svg, { Circle, Path } from 'react-native-svg';
+import { Circle, Path, Svg } from './line-svg';
 import { colors, iconSize } from '@/lib/theme';
 
 const paths = {

@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import Svg, { Path } from 'react-native-svg';
+import { Path, Svg } from './line-svg';
 import { colors, spacing } from '@/lib/theme';
 import { Text } from './text';
 
