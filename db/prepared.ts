@@ -75,3 +75,17 @@ export function rawRunPerDb(build: (db: DbOrTx) => BuiltQuery) {
 
 /** A `?` for a value of a raw write's `set` or `values` (a placeholder typed as SQL, which every column takes). */
 export const slot = (name: string): SQL => sql`${sql.placeholder(name)}`;
+
+const changeStampStatement = preparedPerDb((db) =>
+  clientOf(db).prepare('SELECT total_changes(), data_version FROM pragma_data_version').raw(true),
+);
+
+/**
+ * Where the database stands: the rows this connection has changed so far (SQLite's total_changes) and the
+ * commits other connections have made (PRAGMA data_version). Two equal stamps mean that nothing was
+ * written in between, by this connection or another; a rolled-back write still moves the stamp.
+ */
+export function changeStamp(db: DbOrTx): string {
+  const [own, others] = changeStampStatement(db).get() as [number, number];
+  return `${own}:${others}`;
+}

@@ -8,6 +8,7 @@ import { apiRouter } from './api/api.router';
 import { readSession } from './middleware/auth';
 import { errorHandler } from './middleware/error-handler';
 import { idempotency } from './middleware/idempotency';
+import { useJsonAnswer } from './middleware/json-answer';
 import { originCheck } from './middleware/origin-check';
 import { requestId, requestLog } from './middleware/request-log';
 import { securityHeaders } from './middleware/security-headers';
@@ -89,6 +90,7 @@ export function createApp(options: AppOptions): Express {
   // API answers are never cached (no-store), so an ETag would be a hash of every body for nothing.
   app.set('etag', false);
   app.disable('x-powered-by');
+  useJsonAnswer(app);
   app.use(requestId);
   if (options.log) app.use(requestLog(options.log));
   app.use(securityHeaders(production));

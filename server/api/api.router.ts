@@ -15,6 +15,7 @@ import { invitationsRouter } from './invitations/invitations.router';
 import { createInvitationsService } from './invitations/invitations.service';
 import { jobsRouter } from './jobs/jobs.router';
 import { createJobsService } from './jobs/jobs.service';
+import { createAnswerCache } from '@/server/services/answer-cache';
 import {
   elementsRouter,
   jobElementsRouter,
@@ -73,7 +74,9 @@ export function apiRouter(options: ApiOptions): Router {
   const { db, sessions } = options;
   const me = createMeService(db);
   const budgets = { db, budgets: createBudgetsService(db) };
-  const members = { db, members: createMembersService(db) };
+  // The most read answers (a firm's jobs, a job, its members), kept until the database changes.
+  const answers = createAnswerCache(db);
+  const members = { db, members: createMembersService(db), answers };
   const screens = { db, screens: createScreensService(db) };
   const checklist = { db, checklist: createChecklistService(db) };
   const loadPath = { db, loadPath: createLoadPathService(db) };
@@ -89,7 +92,7 @@ export function apiRouter(options: ApiOptions): Router {
   jobs.use('/:jobId/elements', jobElementsRouter(loadPath));
   jobs.use('/:jobId/requests', jobRequestsRouter(requests));
   jobs.use('/:jobId/designs', jobDesignsRouter(db));
-  jobs.use(jobsRouter({ db, jobs: createJobsService(db) }));
+  jobs.use(jobsRouter({ db, jobs: createJobsService(db), answers }));
 
   const memberRoutes = Router();
   memberRoutes.use('/:memberId/budget', memberBudgetRouter(budgets));

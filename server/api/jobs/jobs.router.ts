@@ -5,6 +5,8 @@ import { requireMember, requireRole, signedInUser } from '@/server/middleware/au
 import { validate } from '@/server/middleware/validate';
 import { jobCreateSchema, jobPatchSchema } from '@/shared/schemas/jobs';
 import { sendCreated } from '@/server/api/client-ids';
+import type { AnswerCache } from '@/server/services/answer-cache';
+import { sendJsonText } from '@/server/middleware/json-answer';
 import type { JobsService } from './jobs.service';
 
 const jobParams = z.object({ jobId: z.string().min(1).max(100) });
@@ -15,12 +17,17 @@ const listQuery = z.object({
 const actorOf = (res: Response) => ({ userId: signedInUser(res).id, orgId: res.locals.member.orgId });
 
 /** Contracting-firm roles only; engineers see jobs through design requests, not here. */
-export function jobsRouter(deps: { db: Db; jobs: JobsService }): Router {
+export function jobsRouter(deps: { db: Db; jobs: JobsService; answers: AnswerCache }): Router {
   const router = Router();
   router.use(requireMember(deps.db), requireRole('owner', 'contractor', 'estimator'));
 
   router.get('/', validate({ query: listQuery }), (req, res) => {
-    res.json({ jobs: deps.jobs.list(res.locals.member.orgId, req.query.archived === '1') });
+    const orgId = res.locals.member.orgId;
+    const archived = req.query.archived === '1';
+    sendJsonText(
+      res,
+      deps.answers.text(`jobs:${orgId}:${archived}`, () => ({ jobs: deps.jobs.list(orgId, archived) })),
+    );
   });
 
   router.post('/', validate({ body: jobCreateSchema }), (req, res) => {
@@ -28,7 +35,12 @@ export function jobsRouter(deps: { db: Db; jobs: JobsService }): Router {
   });
 
   router.get('/:jobId', validate({ params: jobParams }), (req, res) => {
-    res.json(deps.jobs.get(res.locals.member.orgId, req.params.jobId));
+    const orgId = res.locals.member.orgId;
+    const { jobId } = req.params;
+    sendJsonText(
+      res,
+      deps.answers.text(`job:${orgId}:${jobId}`, () => deps.jobs.get(orgId, jobId)),
+    );
   });
 
   router.patch('/:jobId', validate({ params: jobParams, body: jobPatchSchema }), (req, res) => {

@@ -5,6 +5,8 @@ import { requireMember, requireRole, signedInUser } from '@/server/middleware/au
 import { validate } from '@/server/middleware/validate';
 import { memberCreateSchema, memberPatchSchema } from '@/shared/schemas/members';
 import { sendCreated } from '@/server/api/client-ids';
+import type { AnswerCache } from '@/server/services/answer-cache';
+import { sendJsonText } from '@/server/middleware/json-answer';
 import type { MembersService } from './members.service';
 
 const jobParams = z.object({ jobId: z.string().min(1).max(100) });
@@ -15,6 +17,7 @@ const actorOf = (res: Response) => ({ userId: signedInUser(res).id, orgId: res.l
 interface MembersDeps {
   db: Db;
   members: MembersService;
+  answers: AnswerCache;
 }
 
 /**
@@ -32,7 +35,12 @@ export function jobMembersRouter(deps: MembersDeps): Router {
   const router = firmRouter(deps.db, { mergeParams: true });
 
   router.get('/', validate({ params: jobParams }), (req, res) => {
-    res.json({ members: deps.members.list(res.locals.member.orgId, req.params.jobId) });
+    const orgId = res.locals.member.orgId;
+    const { jobId } = req.params;
+    sendJsonText(
+      res,
+      deps.answers.text(`members-of:${orgId}:${jobId}`, () => ({ members: deps.members.list(orgId, jobId) })),
+    );
   });
 
   router.post('/', validate({ params: jobParams, body: memberCreateSchema }), async (req, res) => {
