@@ -61,7 +61,18 @@ export function memberSave(task: MemberSaveTask): {
   path?: CalcTaskAnswer<LoadPathResult>;
 } {
   const fields = memberFields(task.member);
-  return fields.ok ? { fields, path: loadPath(task.pathJson) } : { fields };
+  return fields.ok ? { fields, path: statesOnly(loadPath(task.pathJson)) } : { fields };
+}
+
+/**
+ * A save reads only each element's state on the path (see refreshLoadPath), so the beams' own member checks
+ * (some 20 KB each, with their diagram samples) stay in the worker instead of being copied to the main
+ * thread with every save.
+ */
+function statesOnly(path: CalcTaskAnswer<LoadPathResult>): CalcTaskAnswer<LoadPathResult> {
+  if (!path.ok) return path;
+  const elements = path.value.elements.map(({ memberResult: _memberResult, ...element }) => element);
+  return { ok: true, value: { ...path.value, elements } };
 }
 
 /**
