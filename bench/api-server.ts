@@ -1,5 +1,6 @@
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
+import { monitorEventLoopDelay, type IntervalHistogram } from 'node:perf_hooks';
 import express from 'express';
 import { openDatabase } from '@/db/client';
 import { migrateDatabase } from '@/db/migrate';
@@ -42,7 +43,21 @@ async function main(): Promise<void> {
   const servers = [createServer(bare), createServer(app)];
   const [barePort, appPort] = await Promise.all(servers.map(listen));
   process.send?.({ barePort, appPort });
+  // The server's own event-loop delay over a phase (bench/api.ts asks around the heavy mix): what a request
+  // held the loop for, without the load generator's own pauses that /api/health's latency also holds.
+  let loopDelay: IntervalHistogram | undefined;
   process.on('message', (message) => {
+    if (message === 'loop-start') {
+      loopDelay = monitorEventLoopDelay({ resolution: 5 });
+      loopDelay.enable();
+      return;
+    }
+    if (message === 'loop-stop' && loopDelay) {
+      loopDelay.disable();
+      const ms = (ns: number) => ns / 1e6;
+      process.send?.({ loopDelay: { maxMs: ms(loopDelay.max), p99Ms: ms(loopDelay.percentile(99)) } });
+      return;
+    }
     if (message !== 'stop') return;
     for (const server of servers) server.closeAllConnections();
     Promise.all(servers.map((server) => new Promise((resolve) => server.close(resolve)))).then(() => {

@@ -17,6 +17,11 @@ const SECONDS = Number(process.env.BENCH_SECONDS ?? 3);
  * machine falls on all of them alike; each figure is the median of its rounds. */
 const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 5);
 
+interface LoopDelay {
+  maxMs: number;
+  p99Ms: number;
+}
+
 interface Ports {
   barePort: number;
   appPort: number;
@@ -27,12 +32,22 @@ function startServers() {
   if (process.env.BENCH_CPU_PROF) execArgv.push('--cpu-prof', '--cpu-prof-dir=profiles');
   const child = fork('bench/api-server.ts', [], { execArgv });
   const ports = new Promise<Ports>((resolve) => child.once('message', (m) => resolve(m as Ports)));
+  /** The server's event-loop delay over `phase` (see bench/api-server.ts). */
+  const loopDelayDuring = async <T>(phase: () => Promise<T>) => {
+    child.send('loop-start');
+    const answer = await phase();
+    const delay = new Promise<LoopDelay>((resolve) =>
+      child.once('message', (m) => resolve((m as { loopDelay: LoopDelay }).loopDelay)),
+    );
+    child.send('loop-stop');
+    return { answer, loopDelay: await delay };
+  };
   const stop = () =>
     new Promise<void>((resolve) => {
       child.once('exit', () => resolve());
       child.send('stop');
     });
-  return { ports, stop };
+  return { ports, loopDelayDuring, stop };
 }
 
 async function call(base: string, method: string, path: string, body: unknown, cookie = '') {
@@ -160,21 +175,24 @@ export async function apiFigures(): Promise<Figure[]> {
     const oneShortlistMs = performance.now() - shortlistStart;
 
     const saveBody = JSON.stringify({ label: 'Beam 2', input: memberCase });
-    const [heavy, health] = await Promise.all([
-      load({
-        url: base,
-        connections: 4,
-        duration: 2 * SECONDS + 2,
-        headers,
-        requests: [
-          { method: 'POST', path: '/api/calc/span-table', body: JSON.stringify(heaviestSpanTableCase) },
-          { method: 'POST', path: '/api/calc/shortlist', body: JSON.stringify(heaviestShortlistCase) },
-          { method: 'PATCH', path: `/api/members/${otherMemberId}`, body: saveBody },
-          { method: 'GET', path: `/api/members/${otherMemberId}/budget` },
-        ],
-      }),
-      load({ url: `${base}/api/health`, connections: 1, duration: 2 * SECONDS }),
-    ]);
+    const { answer: mixed, loopDelay } = await servers.loopDelayDuring(() =>
+      Promise.all([
+        load({
+          url: base,
+          connections: 4,
+          duration: 2 * SECONDS + 2,
+          headers,
+          requests: [
+            { method: 'POST', path: '/api/calc/span-table', body: JSON.stringify(heaviestSpanTableCase) },
+            { method: 'POST', path: '/api/calc/shortlist', body: JSON.stringify(heaviestShortlistCase) },
+            { method: 'PATCH', path: `/api/members/${otherMemberId}`, body: saveBody },
+            { method: 'GET', path: `/api/members/${otherMemberId}/budget` },
+          ],
+        }),
+        load({ url: `${base}/api/health`, connections: 1, duration: 2 * SECONDS }),
+      ]),
+    );
+    const [heavy, health] = mixed;
     if (heavy.non2xx || heavy.errors) throw new Error(`heavy calculations: ${heavy.non2xx} non-2xx`);
 
     const ratio = (r: Result) => `${((100 * r.requests.average) / bare.requests.average).toFixed(0)} %`;
@@ -219,6 +237,11 @@ export async function apiFigures(): Promise<Figure[]> {
       {
         task: 'GET /api/health meanwhile (1 connection)',
         measured: `${rate(health)}; ${latency(health)}`,
+        target: '—',
+      },
+      {
+        task: "the server's event loop meanwhile: longest delay (p99)",
+        measured: `${loopDelay.maxMs.toFixed(0)} ms (p99 ${loopDelay.p99Ms.toFixed(0)} ms)`,
         target: 'max < 50 ms',
       },
     ];

@@ -2,10 +2,12 @@ import { existsSync } from 'node:fs';
 import { apiFigures } from './api';
 import { engineFigures } from './engine';
 import { printTable, type Figure } from './figures';
+import { pdfFigures } from './pdf';
 import { webFigures } from './web';
 
-// npm run bench: the engine, the API (bench/api.ts) and the first screen (bench/web.ts, when the web app is
-// exported and chromium is there; `-- --no-web` skips it), then one table of every figure and the machine.
+// npm run bench: the engine, the API (bench/api.ts), the first screen (bench/web.ts, when the web app is
+// exported and chromium is there; `-- --no-web` skips it) and the request PDF (bench/pdf.ts), then one table
+// of every figure and the machine.
 // The browser part is heavy: on a shared machine run it under the browser lock (README).
 
 const CHROMIUM = process.env.CHROMIUM_PATH || '/usr/bin/chromium';
@@ -31,11 +33,17 @@ async function main(): Promise<void> {
     figures.push({ task: 'first screen and member editor (bench/web.ts)', measured: web, target: '—' });
   else figures.push(...(await webFigures()));
 
-  figures.push({ task: 'design request PDF package', measured: 'not built yet', target: '—' });
+  const pdf = await pdfFigures();
+  printTable('PDF', pdf);
+  figures.push(...pdf);
   printTable('Tributary benchmarks (npm run bench)', figures);
 }
 
-main().catch((error: unknown) => {
-  console.error(error);
-  process.exit(1);
-});
+// The calculation pool the PDF bench started keeps a thread ready: end when the table is printed.
+main().then(
+  () => process.exit(0),
+  (error: unknown) => {
+    console.error(error);
+    process.exit(1);
+  },
+);
