@@ -6,7 +6,8 @@ import type { MemberDesign } from '@/shared/schemas/requests/member-design';
 import { evaluateMember, type MemberToEvaluate } from '@/server/api/members/member-evaluation';
 import type { MemberFields } from '@/server/api/members/members.repository';
 import { requestPackagePdf, type PackagePhoto } from '@/server/services/pdf/request-package-pdf';
-import type { MemberBudgetView } from '@/shared/schemas/budgets';
+import { clientSummaryPdf } from '@/server/api/budgets/client-summary-pdf';
+import type { MemberBudgetView, SentBudget } from '@/shared/schemas/budgets';
 import type { Job } from '@/shared/schemas/jobs';
 import type { Member } from '@/shared/schemas/members';
 import type { LoadPathResult } from '@/shared/schemas/calc/load-path';
@@ -98,6 +99,11 @@ export interface MemberBudgetFacts {
 /** Runs in a worker thread (calc-worker.cjs): each member's budget, priced from its stored check. */
 export function budgetViews(input: MemberBudgetFacts[]): CalcTaskAnswer<MemberBudgetView[]> {
   return answer(() => input.map((f) => memberBudgetView(f.member, f.job, f.saved, f.book, f.design, f.sent)));
+}
+
+/** Runs in a worker thread (calc-worker.cjs): a sent budget's client summary PDF (fonts embedded whole). */
+export function budgetSummaryPdf(sent: SentBudget): Promise<Uint8Array> {
+  return clientSummaryPdf(sent);
 }
 
 /** Runs in a worker thread (calc-worker.cjs): the design request's PDF (pages, diagrams, photos). */

@@ -7,7 +7,7 @@ import { findJob } from '@/server/api/jobs/jobs.repository';
 import { findMember, listMembers } from '@/server/api/members/members.repository';
 import { designsOfJob } from '@/server/api/requests/member-designs';
 import { isStale, staleAfterDays } from '@/server/api/price-book/price-book.service';
-import { runInPool } from '@/server/services/calc-pool';
+import { runInPool, runTask } from '@/server/services/calc-pool';
 import type {
   JobBudget,
   MemberBudgetSave,
@@ -26,7 +26,6 @@ import {
   priceAmounts,
   saveMemberBudget,
 } from './budgets.repository';
-import { clientSummaryPdf } from './client-summary-pdf';
 import type { PriceBookState } from './member-budget-view';
 
 const DEFAULT_EXCLUSIONS = [
@@ -245,7 +244,8 @@ export function createBudgetsService(db: Db) {
     async sentPdf(orgId: string, budgetId: string): Promise<Uint8Array> {
       const sent = findSentBudget(db, orgId, budgetId);
       if (!sent) throw notFound('Budget');
-      return clientSummaryPdf(sent);
+      // Building the PDF (fonts embedded whole) would hold the event loop: it runs in the pool.
+      return runTask('budgetSummaryPdf', sent);
     },
   };
 }
