@@ -65,8 +65,27 @@ export function memberSave(task: MemberSaveTask): {
   return fields.ok ? { fields, path: statesOnly(loadPath(task.pathJson)) } : { fields };
 }
 
+/** What a job change sends the pool: the members that take a changed value and the job's path as it will be. */
+export interface JobRecomputeTask {
+  members: (MemberToEvaluate & { id: string })[];
+  pathJson: string;
+}
+
 /**
- * A save reads only each element's state on the path (see refreshLoadPath), so the beams' own member checks
+ * Runs in a worker thread (calc-worker.cjs): a job change's checks in one trip, each member that takes a
+ * changed value checked again (its own answer each, so one refusal names its member) and the job's load
+ * path as it will be with them saved.
+ */
+export function jobRecompute(task: JobRecomputeTask): {
+  members: { id: string; fields: CalcTaskAnswer<MemberFields> }[];
+  path: CalcTaskAnswer<LoadPathResult>;
+} {
+  const members = task.members.map(({ id, ...member }) => ({ id, fields: memberFields(member) }));
+  return { members, path: statesOnly(loadPath(task.pathJson)) };
+}
+
+/**
+ * A save or a job change reads only each element's state on the path (see refreshLoadPath), so the beams' own member checks
  * (some 20 KB each, with their diagram samples) stay in the worker instead of being copied to the main
  * thread with every save.
  */

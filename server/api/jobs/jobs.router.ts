@@ -43,8 +43,8 @@ export function jobsRouter(deps: { db: Db; jobs: JobsService; answers: AnswerCac
     );
   });
 
-  router.patch('/:jobId', validate({ params: jobParams, body: jobPatchSchema }), (req, res) => {
-    res.json(deps.jobs.update(actorOf(res), req.params.jobId, req.body));
+  router.patch('/:jobId', validate({ params: jobParams, body: jobPatchSchema }), async (req, res) => {
+    res.json(await deps.jobs.update(actorOf(res), req.params.jobId, req.body));
   });
 
   router.delete('/:jobId', validate({ params: jobParams }), (req, res) => {

@@ -3,7 +3,12 @@ import { notFound, versionConflict } from '@/server/app-error';
 import { alreadyCreated, type Created } from '@/server/api/client-ids';
 import { sameContent } from '@/server/services/idempotency/idempotency-store';
 import { recordAudit, type Actor } from '@/server/api/audit/audit.repository';
-import { recomputeJobMembers } from '@/server/api/members/job-context';
+import {
+  planJobRecompute,
+  recomputeJobMembers,
+  type PooledJobRecompute,
+} from '@/server/api/members/job-context';
+import { runTask } from '@/server/services/calc-pool';
 import type { JobUpdateResult } from '@/shared/schemas/job-update';
 import type { Job, JobCreate, JobListItem, JobPatch } from '@/shared/schemas/jobs';
 import {
@@ -34,6 +39,26 @@ function fieldsOf(job: Job): JobFields {
 
 /** Jobs of the actor's firm. A job id of another firm is "not found", never "forbidden". */
 export function createJobsService(db: Db) {
+  /** A job change's member checks and load path, made in the pool from the job and members as read now. */
+  async function pooledRecompute(
+    orgId: string,
+    jobId: string,
+    changes: Omit<JobPatch, 'baseVersion'>,
+  ): Promise<PooledJobRecompute | undefined> {
+    const before = findJob(db, orgId, jobId);
+    if (!before || before.archivedAt) return undefined;
+    const plan = planJobRecompute(db, orgId, before, { ...before, ...changes });
+    const answer = await runTask('jobRecompute', plan);
+    const from = new Map(plan.members.map(({ id, ...member }) => [id, member]));
+    const members = new Map(
+      answer.members.flatMap(({ id, fields }) => {
+        const member = from.get(id);
+        return member ? [[id, { from: member, fields }] as const] : [];
+      }),
+    );
+    return { members, path: { inputJson: plan.pathJson, answer: answer.path } };
+  }
+
   return {
     /** The firm's jobs, each with its members counted by state (one grouped query for all of them). */
     list(orgId: string, archived: boolean): JobListItem[] {
@@ -71,10 +96,13 @@ export function createJobsService(db: Db) {
 
     /**
      * Saves the patch and, in the same transaction, checks again every member that takes a changed load
-     * value from the job (see recomputeJobMembers).
+     * value from the job (see recomputeJobMembers). The checks and the job's load path run in the
+     * calculation pool first, from the job and members as read before the transaction; the transaction uses
+     * them where they were made from what it reads.
      */
-    update(actor: Actor, jobId: string, patch: JobPatch): JobUpdateResult {
+    async update(actor: Actor, jobId: string, patch: JobPatch): Promise<JobUpdateResult> {
       const { baseVersion, ...changes } = patch;
+      const pooled = await pooledRecompute(actor.orgId, jobId, changes);
       return db.transaction((tx) => {
         const before = findJob(tx, actor.orgId, jobId);
         if (!before) throw notFound('Job');
@@ -88,7 +116,7 @@ export function createJobsService(db: Db) {
           subject: jobId,
           detail: { fields: Object.keys(changes) },
         });
-        return { ...job, recomputed: recomputeJobMembers(tx, actor, before, job) };
+        return { ...job, recomputed: recomputeJobMembers(tx, actor, before, job, pooled) };
       });
     },
 

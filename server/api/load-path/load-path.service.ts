@@ -136,8 +136,12 @@ export function pathInputWith(db: DbOrTx, orgId: string, job: Job, member: PathM
   const members: PathMember[] = listMembersOnPath(db, orgId, job.id);
   const saved = members.some((m) => m.id === member.id);
   const next = saved ? members.map((m) => (m.id === member.id ? member : m)) : [...members, member];
-  return readJobPath(db, orgId, job, next).input;
+  return jobPathInputOf(db, orgId, job, next);
 }
+
+/** The job's load path input with `members` as given (each with the input it will have) and its framing. */
+export const jobPathInputOf = (db: DbOrTx, orgId: string, job: Job, members: PathMember[]): LoadPathInput =>
+  readJobPath(db, orgId, job, members).input;
 
 /** The job's load path input as stored now. */
 export const jobPathInput = (db: DbOrTx, orgId: string, job: Job): LoadPathInput =>

@@ -20,6 +20,14 @@ export interface MemberToEvaluate {
   groundSnowPsf: Job['groundSnowPsf'];
 }
 
+/** Whether two members to check are the same check (what a pooled result may stand in for). */
+export const sameCheck = (a: MemberToEvaluate, b: MemberToEvaluate) =>
+  a.label === b.label &&
+  a.wall === b.wall &&
+  a.buildingWidthFt === b.buildingWidthFt &&
+  a.groundSnowPsf === b.groundSnowPsf &&
+  JSON.stringify(a.input) === JSON.stringify(b.input);
+
 /** The member to check from the job it belongs to and what is being saved. */
 export const memberToEvaluate = (
   job: Job,

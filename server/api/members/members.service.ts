@@ -8,7 +8,13 @@ import type { Job } from '@/shared/schemas/jobs';
 import type { Member, MemberCreate, MemberListItem, MemberPatch } from '@/shared/schemas/members';
 import { CalcInputError } from '@/lib/calc';
 import { runTask } from '@/server/services/calc-pool';
-import { asFieldError, evaluateHere, memberToEvaluate, type MemberToEvaluate } from './member-evaluation';
+import {
+  asFieldError,
+  evaluateHere,
+  memberToEvaluate,
+  sameCheck,
+  type MemberToEvaluate,
+} from './member-evaluation';
 import type { MemberFields } from './members.repository';
 import {
   deleteMember,
@@ -37,13 +43,6 @@ function openJob(db: DbOrTx, orgId: string, jobId: string): Job {
 }
 
 /** True when two checks read the same values, so the result of one is the result of the other. */
-const sameCheck = (a: MemberToEvaluate, b: MemberToEvaluate) =>
-  a.label === b.label &&
-  a.wall === b.wall &&
-  a.buildingWidthFt === b.buildingWidthFt &&
-  a.groundSnowPsf === b.groundSnowPsf &&
-  JSON.stringify(a.input) === JSON.stringify(b.input);
-
 /**
  * The stored fields for `now` (read in the write's transaction): the pool's result when it was computed from
  * the same values, else (the job or the member changed while the pool worked) computed again here.

@@ -3,7 +3,10 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { auditEvents } from '@/db/schema';
 import { checkMember, prescriptiveVerdict } from '@/lib/calc';
 import { jobUpdateResultSchema, type JobUpdateResult } from '@/shared/schemas/job-update';
-import type { JobInput } from '@/shared/schemas/jobs';
+import { jobSchema, type JobInput } from '@/shared/schemas/jobs';
+import { jobPathInput } from '@/server/api/load-path/load-path.service';
+import { planJobRecompute } from '@/server/api/members/job-context';
+import { evaluateMember } from '@/server/api/members/member-evaluation';
 import { memberSchema, type Member, type MemberCreateBody } from '@/shared/schemas/members';
 import { createTestServer, signedUpAgent, type Agent, type TestServer } from '@/tests/helpers/server';
 
@@ -213,5 +216,27 @@ describe('a job PATCH that changes what members take from the job', () => {
     const res = await patchJob({ groundSnowPsf: 80 });
     expect(res.recomputed).toEqual([]);
     expect(await read(taking.id)).toEqual(taking);
+  });
+});
+
+describe('a job change checked in the calculation pool first', () => {
+  it('plans the checks and the load path from exactly what the change then stores', async () => {
+    const taking = await create(header('Kitchen doorway', '2-ply-2x10'));
+    const apart = await create(ownBeam);
+    const orgId = (await owner.get('/api/me').expect(200)).body.memberships[0].orgId as string;
+    const before = jobSchema.parse((await owner.get(`/api/jobs/${jobId}`).expect(200)).body);
+    const plan = planJobRecompute(server.db, orgId, before, { ...before, groundSnowPsf: 50 });
+    // Only the member that takes the job's snow is planned; the beam set apart keeps its own.
+    expect(plan.members.map((m) => m.id)).toEqual([taking.id]);
+
+    await patchJob({ groundSnowPsf: 50 });
+    const after = jobSchema.parse((await owner.get(`/api/jobs/${jobId}`).expect(200)).body);
+    // The transaction's own load path input is the one the pool evaluated, so its answer is the one used.
+    expect(JSON.stringify(jobPathInput(server.db, orgId, after))).toBe(plan.pathJson);
+    const stored = await read(taking.id);
+    const { id: _id, ...planned } = plan.members[0];
+    expect(stored.input).toEqual(evaluateMember(planned).input);
+    expect(asJson(stored.result)).toEqual(asJson(evaluateMember(planned).result));
+    expect(await read(apart.id)).toMatchObject({ input: apart.input });
   });
 });
