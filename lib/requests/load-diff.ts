@@ -68,7 +68,9 @@ export function describeLoad(source: LoadSource): string {
     .filter(([label]) => label !== 'flag')
     .map(([label, read]) => {
       const value = read({ source, n: 1 });
-      return value === null ? null : `${label} ${value}`;
+      if (value === null) return null;
+      // A yes/no reads as words: "dead load given along the slope: no", never "… slope No".
+      return value === 'Yes' || value === 'No' ? `${label}: ${value.toLowerCase()}` : `${label} ${value}`;
     })
     .filter((part): part is string => part !== null);
   return `${parts.join(', ')} (${source.flag})`;
