@@ -109,7 +109,7 @@ describe('diffVersions', () => {
     expect(loads).toContainEqual({
       field: 'Floor load (bath)',
       before: null,
-      after: `tributary width 7' 6", dead load 10 psf, live load 40 psf, joists continuous over the member No (assumed)`,
+      after: `tributary width 7' 6", dead load 10 psf, live load 40 psf, joists continuous over the member: no (assumed)`,
       kind: 'added',
     });
     // The roof and ceiling loads before it did not change, so they are not listed.
