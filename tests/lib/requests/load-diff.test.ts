@@ -6,17 +6,12 @@ import { loadSourceSchema } from '@/shared/schemas/calc/loads';
 
 describe('a load in one line', () => {
   it('says a yes/no in words, after the field it answers', () => {
-    const roof = loadSourceSchema.parse({
-      kind: 'roof',
-      tributaryFt: 12,
-      deadPsf: 15,
-      roofLivePsf: 20,
-      deadAlongSlope: false,
-    });
-    const line = describeLoad(roof);
+    const roof = (deadAlongSlope: boolean) =>
+      loadSourceSchema.parse({ kind: 'roof', tributaryFt: 12, deadPsf: 15, roofLivePsf: 20, deadAlongSlope });
+    const line = describeLoad(roof(false));
     expect(line).toContain('dead load given along the slope: no');
     expect(line).not.toMatch(/slope (No|Yes)/);
-    expect(describeLoad({ ...roof, deadAlongSlope: true })).toContain('dead load given along the slope: yes');
+    expect(describeLoad(roof(true))).toContain('dead load given along the slope: yes');
   });
 
   it('gives numbers after their field, and the flag last', () => {
